@@ -1,0 +1,3 @@
+export * from './design';
+export * from './api-error';
+export * from './auth';

@@ -1,0 +1,36 @@
+/** Shared result types of the engine. All lengths are millimetres unless a name says otherwise. */
+
+/** A point on the bar: x along the bar from 0 to its length, y height (mm). */
+export type Point = [x: number, y: number];
+
+export type WarningCode =
+  | 'valley-bridged' // the rubber cannot reach the bottom of a rosette valley
+  | 'cusp-rounded' // the rubber rounds a sharp rosette crest or cusp
+  | 'detail-lost-cutter' // a bar valley is narrower than the cutter can reach
+  | 'detail-lost-follower' // the follower rounds a crest of the bar
+  | 'pass-too-deep'
+  | 'rubbing'
+  | 'cutter-off-centre'
+  | 'other';
+
+/** A warning with where it applies (x range on the bar, mm) and by how much (mm). */
+export interface EngineWarning {
+  code: WarningCode;
+  message: string;
+  at?: { xFrom: number; xTo: number };
+  amount?: number;
+}
+
+/** The result of `computeProfile`: the three paths sampled on one common x grid. */
+export interface Profile {
+  /** Period on the bar (travelPerRev / lobes of the first layer), mm. */
+  period: number;
+  /** Sampling interval along x, mm. */
+  step: number;
+  cutterPath: Point[];
+  barEdge: Point[];
+  followerPath: Point[];
+  /** Smallest radius of curvature of the bar edge's crests (convex parts), mm. */
+  minRadiusOfCurvature: number;
+  warnings: EngineWarning[];
+}
