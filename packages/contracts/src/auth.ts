@@ -1,0 +1,102 @@
+import { z } from 'zod';
+import { unitsSchema } from './design';
+
+/** Request bodies and answers of the account and admin routes. */
+
+export const ROLES = ['member', 'moderator', 'admin'] as const;
+export const roleSchema = z.enum(ROLES, { error: `must be one of ${ROLES.join(', ')}` });
+export type Role = z.infer<typeof roleSchema>;
+
+export const PASSWORD_MIN = 12;
+export const PASSWORD_MAX = 128;
+export const DISPLAY_NAME_MAX = 60;
+export const EMAIL_MAX = 254;
+
+export const emailSchema = z
+  .string({ error: 'is required' })
+  .trim()
+  .min(1, 'is required')
+  .max(EMAIL_MAX, `must be at most ${EMAIL_MAX} characters`)
+  .pipe(z.email({ error: 'must be an e-mail address' }))
+  .transform((e) => e.toLowerCase());
+
+/** Length only; the server also refuses common and guessable passwords. */
+export const passwordSchema = z
+  .string({ error: 'is required' })
+  .min(PASSWORD_MIN, `must be at least ${PASSWORD_MIN} characters`)
+  .max(PASSWORD_MAX, `must be at most ${PASSWORD_MAX} characters`);
+
+export const displayNameSchema = z
+  .string({ error: 'is required' })
+  .trim()
+  .min(1, 'is required')
+  .max(DISPLAY_NAME_MAX, `must be at most ${DISPLAY_NAME_MAX} characters`);
+
+export const signUpBody = z.strictObject({ email: emailSchema, password: passwordSchema, displayName: displayNameSchema });
+export type SignUpBody = z.input<typeof signUpBody>;
+
+export const signInBody = z.strictObject({
+  email: emailSchema,
+  password: z.string({ error: 'is required' }).min(1, 'is required').max(PASSWORD_MAX, `must be at most ${PASSWORD_MAX} characters`),
+});
+export type SignInBody = z.input<typeof signInBody>;
+
+export const tokenSchema = z.string({ error: 'is required' }).min(16, 'is not a valid link').max(200, 'is not a valid link');
+export const verifyBody = z.strictObject({ token: tokenSchema });
+export const resetRequestBody = z.strictObject({ email: emailSchema });
+export const resetConfirmBody = z.strictObject({ token: tokenSchema, password: passwordSchema });
+export const resendVerificationBody = z.strictObject({});
+
+export const updateProfileBody = z
+  .strictObject({ displayName: displayNameSchema.optional(), units: unitsSchema.optional() })
+  .refine((b) => b.displayName !== undefined || b.units !== undefined, { message: 'give displayName or units' });
+export type UpdateProfileBody = z.input<typeof updateProfileBody>;
+
+/** `GET /api/auth/me`. */
+export interface Me {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+  emailVerified: boolean;
+  units: 'mm' | 'in';
+}
+
+/** A row of `GET /api/admin/users`. */
+export interface AdminUser {
+  id: string;
+  email: string;
+  displayName: string;
+  role: Role;
+  emailVerified: boolean;
+  suspended: boolean;
+  createdAt: string;
+  lastSignInAt: string | null;
+}
+
+export const adminUpdateUserBody = z
+  .strictObject({ role: roleSchema.optional(), suspended: z.boolean({ error: 'must be true or false' }).optional() })
+  .refine((b) => b.role !== undefined || b.suspended !== undefined, { message: 'give role or suspended' });
+export type AdminUpdateUserBody = z.input<typeof adminUpdateUserBody>;
+
+/** A message kept by the local fake SMTP server, `GET /api/dev/mailbox`. */
+export interface MailboxMessage {
+  id: string;
+  to: string[];
+  subject: string;
+  text: string;
+  html: string;
+  sentAt: string;
+}
+
+/** `GET /api/health`. */
+export interface Health {
+  status: 'ok';
+  database: 'pglite' | 'postgres';
+}
+
+/** `GET /api/config`: what the web app needs to know about the server it talks to. */
+export interface ClientConfig {
+  localMail: boolean;
+  demo: boolean;
+}
