@@ -1,0 +1,90 @@
+import express from 'express';
+import session from 'express-session';
+import type { ClientConfig, Health } from '@barwright/contracts';
+import type { Db } from './database/database';
+import { adminRouter } from './admin/admin-router';
+import { authRouter } from './auth/auth-router';
+import { createPassport } from './auth/passport-setup';
+import { DatabaseSessionStore } from './auth/session-store';
+import { mailboxRouter } from './dev/mailbox-router';
+import { csrfProtection } from './http/csrf';
+import { apiNotFound, errorMiddleware } from './http/error-middleware';
+import { HttpError } from './http/http-error';
+import { createRateLimits, DEFAULT_RATE_LIMITS, type RateLimitSettings } from './http/rate-limits';
+import { securityHeaders } from './http/security-headers';
+import type { LocalSmtp } from './mail/local-smtp';
+import type { Mailer } from './mail/mailer';
+import { webAppRouter } from './web/web-app';
+
+/** Idle and absolute session lifetimes. */
+export const SESSION_IDLE_MS = 7 * 24 * 3600_000;
+export const SESSION_ABSOLUTE_MS = 30 * 24 * 3600_000;
+export const SESSION_COOKIE = 'barwright.sid';
+
+export interface AppDeps {
+  db: Db;
+  databaseKind: Health['database'];
+  mailer: Mailer;
+  /** Present in local mail mode: the fake SMTP server whose messages the mailbox shows. */
+  localSmtp?: LocalSmtp;
+  sessionSecret: string;
+  publicUrl: string;
+  /** The built web app; omitted in API tests. */
+  webDist?: string;
+  demo?: boolean;
+  rateLimits?: Partial<RateLimitSettings>;
+  log?: (error: unknown) => void;
+}
+
+/** Builds the Express app. It never listens: main.ts does, and tests call it through supertest. */
+export function createApp(deps: AppDeps): express.Express {
+  const log = deps.log ?? ((e: unknown) => console.error(e));
+  const secureCookies = deps.publicUrl.startsWith('https://');
+  const sessionStore = new DatabaseSessionStore(deps.db);
+  const passport = createPassport(deps.db);
+  const limits = createRateLimits({ ...DEFAULT_RATE_LIMITS, ...deps.rateLimits });
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(securityHeaders(secureCookies));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '256kb' }));
+  api.get('/health', (_req, res) => {
+    res.json({ status: 'ok', database: deps.databaseKind } satisfies Health);
+  });
+  api.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: deps.sessionSecret,
+      store: sessionStore,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: secureCookies, maxAge: SESSION_IDLE_MS },
+    }),
+  );
+  api.use((req, _res, next) => {
+    // The absolute timeout: a session older than this ends however active it is.
+    if (req.session.startedAt && Date.now() - req.session.startedAt > SESSION_ABSOLUTE_MS) {
+      return req.session.regenerate(next);
+    }
+    next();
+  });
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(csrfProtection(secureCookies));
+  api.get('/config', (_req, res) => {
+    res.json({ localMail: Boolean(deps.localSmtp), demo: Boolean(deps.demo) } satisfies ClientConfig);
+  });
+  api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies }));
+  api.use('/admin', adminRouter({ db: deps.db, sessionStore }));
+  if (deps.localSmtp) api.use('/dev', mailboxRouter(deps.localSmtp));
+  api.use(apiNotFound);
+
+  app.use('/api', api);
+  if (deps.webDist) app.use(webAppRouter(deps.webDist));
+  app.use((_req, _res, next) => next(new HttpError(404, 'not_found', 'Not found')));
+  app.use(errorMiddleware(log));
+  return app;
+}

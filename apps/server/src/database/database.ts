@@ -1,0 +1,43 @@
+import { fileURLToPath } from 'node:url';
+import { PGlite } from '@electric-sql/pglite';
+import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
+import { drizzle as drizzlePg } from 'drizzle-orm/node-postgres';
+import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import pg from 'pg';
+import * as schema from '../../../../db/schema';
+
+export type Schema = typeof schema;
+/** The one database type the services use, whichever driver is underneath. */
+export type Db = PgDatabase<PgQueryResultHKT, Schema>;
+
+export interface Database {
+  db: Db;
+  kind: 'pglite' | 'postgres';
+  close(): Promise<void>;
+}
+
+export const MIGRATIONS_FOLDER = fileURLToPath(new URL('../../../../db/migrations', import.meta.url));
+
+export type DatabaseTarget =
+  | { kind: 'pglite'; dataDir?: string } // no dataDir: in memory
+  | { kind: 'postgres'; url: string; schemaName?: string };
+
+/** Opens the database and applies the committed migrations. */
+export async function openDatabase(target: DatabaseTarget): Promise<Database> {
+  if (target.kind === 'pglite') {
+    const client = target.dataDir ? new PGlite(target.dataDir) : new PGlite();
+    await client.waitReady;
+    const db = drizzlePglite(client, { schema });
+    await migratePglite(db, { migrationsFolder: MIGRATIONS_FOLDER });
+    return { db: db as unknown as Db, kind: 'pglite', close: () => client.close() };
+  }
+  // A schema name isolates test runs that share one server; production uses `public`.
+  const searchPath = target.schemaName ? `-c search_path=${target.schemaName}` : undefined;
+  const pool = new pg.Pool({ connectionString: target.url, options: searchPath, max: 10 });
+  if (target.schemaName) await pool.query(`CREATE SCHEMA IF NOT EXISTS "${target.schemaName}"`);
+  const db = drizzlePg(pool, { schema });
+  await migratePg(db, { migrationsFolder: MIGRATIONS_FOLDER, migrationsSchema: target.schemaName ?? 'drizzle' });
+  return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };
+}

@@ -1,0 +1,67 @@
+import http from 'node:http';
+import { createApp } from './app';
+import { loadConfig } from './config';
+import { DataDirBusyError } from './database/data-dir-lock';
+import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
+import { createMailer } from './mail/mailer';
+import { openConfiguredDatabase, sessionSecretFor } from './runtime';
+import { seedDemoScenario } from '../../../seeds/seed-demo';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../../seeds/demo-scenario';
+
+const log = (line: string) => console.log(`[barwright] ${line}`);
+
+/** The only file that starts things: config, database, mail, HTTP; and stops them on SIGINT/SIGTERM. */
+async function main() {
+  const started = performance.now();
+  const config = loadConfig();
+  const { database, release, fresh } = await openConfiguredDatabase(config, log);
+  let localSmtp: LocalSmtp | undefined;
+  if (!config.smtpUrl) localSmtp = await startLocalSmtp();
+  const mailer = createMailer({ smtpUrl: config.smtpUrl, localPort: localSmtp?.port, from: config.mailFrom });
+
+  let seeded = false;
+  if (config.demoData) seeded = await seedDemoScenario(database.db);
+
+  const app = createApp({
+    db: database.db,
+    databaseKind: database.kind,
+    mailer,
+    localSmtp,
+    sessionSecret: sessionSecretFor(config),
+    publicUrl: config.publicUrl,
+    webDist: config.webDist,
+    demo: config.demoData,
+  });
+  const server = http.createServer(app);
+  await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve));
+
+  const ms = Math.round(performance.now() - started);
+  log(`database: ${database.kind}${database.kind === 'pglite' ? ` in ${config.dataDir}${fresh ? ' (new)' : ''}` : ''}`);
+  log(`mail: ${localSmtp ? `local fake SMTP on 127.0.0.1:${localSmtp.port}; messages at ${config.publicUrl}/mailbox` : 'SMTP_URL'}`);
+  if (seeded) {
+    log(`demo scenario seeded; every demo account's password is "${DEMO_PASSWORD}":`);
+    for (const a of DEMO_ACCOUNTS) log(`  ${a.role.padEnd(9)} ${a.email}  (${a.displayName})`);
+  }
+  log(`ready in ${ms} ms at ${config.publicUrl}`);
+
+  let stopping = false;
+  const stop = async (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    log(`${signal}: shutting down`);
+    server.closeAllConnections();
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    mailer.close();
+    await localSmtp?.close();
+    await database.close();
+    release();
+    process.exit(0);
+  };
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
+}
+
+main().catch((error) => {
+  console.error(error instanceof DataDirBusyError || error.message?.startsWith('Invalid configuration') ? `[barwright] ${error.message}` : error);
+  process.exit(1);
+});

@@ -1,0 +1,2 @@
+export * from './users';
+export * from './sessions';
