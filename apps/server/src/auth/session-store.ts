@@ -4,6 +4,13 @@ import { sessions } from '../../../../db/schema';
 import type { Db } from '../database/database';
 
 type Callback<T = void> = (error?: unknown, value?: T) => void;
+/** Runs a database call for a callback-style store method; a synchronous throw reaches the callback too. */
+function settle<T>(work: () => Promise<T>, callback?: Callback<T>): void {
+  Promise.resolve()
+    .then(work)
+    .then((value) => callback?.(undefined, value), (error) => callback?.(error));
+}
+
 const userIdOf = (sess: session.SessionData) => (sess as { passport?: { user?: string } }).passport?.user ?? null;
 
 /** An express-session store in our own database, so sessions survive a restart and can be ended per user. */
@@ -13,30 +20,31 @@ export class DatabaseSessionStore extends session.Store {
   }
 
   override get(sid: string, callback: Callback<session.SessionData | null>): void {
-    this.db
-      .select()
-      .from(sessions)
-      .where(eq(sessions.sid, sid))
-      .then(([row]) => callback(undefined, row && row.expiresAt > new Date() ? (row.data as session.SessionData) : null), callback);
+    settle(async () => {
+      const [row] = await this.db.select().from(sessions).where(eq(sessions.sid, sid));
+      return row && row.expiresAt > new Date() ? (row.data as session.SessionData) : null;
+    }, callback);
   }
 
   override set(sid: string, sess: session.SessionData, callback?: Callback): void {
     const expiresAt = sess.cookie?.expires ? new Date(sess.cookie.expires) : new Date(Date.now() + 86_400_000);
     const values = { sid, userId: userIdOf(sess), data: sess, expiresAt };
-    this.db
-      .insert(sessions)
-      .values(values)
-      .onConflictDoUpdate({ target: sessions.sid, set: { userId: values.userId, data: sess, expiresAt } })
-      .then(() => callback?.(), (e) => callback?.(e));
+    settle(async () => {
+      await this.db.insert(sessions).values(values).onConflictDoUpdate({ target: sessions.sid, set: { userId: values.userId, data: sess, expiresAt } });
+    }, callback);
   }
 
   override touch(sid: string, sess: session.SessionData, callback?: Callback): void {
     const expiresAt = sess.cookie?.expires ? new Date(sess.cookie.expires) : new Date(Date.now() + 86_400_000);
-    this.db.update(sessions).set({ expiresAt }).where(eq(sessions.sid, sid)).then(() => callback?.(), (e) => callback?.(e));
+    settle(async () => {
+      await this.db.update(sessions).set({ expiresAt }).where(eq(sessions.sid, sid));
+    }, callback);
   }
 
   override destroy(sid: string, callback?: Callback): void {
-    this.db.delete(sessions).where(eq(sessions.sid, sid)).then(() => callback?.(), (e) => callback?.(e));
+    settle(async () => {
+      await this.db.delete(sessions).where(eq(sessions.sid, sid));
+    }, callback);
   }
 
   /** Ends every session of a user at once (suspension, password reset). */

@@ -22,7 +22,7 @@ export const MIGRATIONS_FOLDER = fileURLToPath(new URL('../../../../db/migration
 
 export type DatabaseTarget =
   | { kind: 'pglite'; dataDir?: string } // no dataDir: in memory
-  | { kind: 'postgres'; url: string; schemaName?: string };
+  | { kind: 'postgres'; url: string };
 
 /** Opens the database and applies the committed migrations. */
 export async function openDatabase(target: DatabaseTarget): Promise<Database> {
@@ -33,11 +33,8 @@ export async function openDatabase(target: DatabaseTarget): Promise<Database> {
     await migratePglite(db, { migrationsFolder: MIGRATIONS_FOLDER });
     return { db: db as unknown as Db, kind: 'pglite', close: () => client.close() };
   }
-  // A schema name isolates test runs that share one server; production uses `public`.
-  const searchPath = target.schemaName ? `-c search_path=${target.schemaName}` : undefined;
-  const pool = new pg.Pool({ connectionString: target.url, options: searchPath, max: 10 });
-  if (target.schemaName) await pool.query(`CREATE SCHEMA IF NOT EXISTS "${target.schemaName}"`);
+  const pool = new pg.Pool({ connectionString: target.url, max: 10 });
   const db = drizzlePg(pool, { schema });
-  await migratePg(db, { migrationsFolder: MIGRATIONS_FOLDER, migrationsSchema: target.schemaName ?? 'drizzle' });
+  await migratePg(db, { migrationsFolder: MIGRATIONS_FOLDER });
   return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };
 }

@@ -37,7 +37,7 @@ export async function startLocalSmtp(): Promise<LocalSmtp> {
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : '',
-            sentAt: (mail.date ?? new Date()).toISOString(),
+            sentAt: new Date().toISOString(), // when it arrived; the Date header has whole seconds only
           };
           kept.unshift(message);
           kept.length = Math.min(kept.length, KEEP);

@@ -1,0 +1,72 @@
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
+import { Client, makeUser, startTestServer, type TestServer } from '../testing/test-app';
+
+const drivers = await availableDrivers();
+type Who = 'anonymous' | 'member' | 'moderator' | 'admin';
+const WHO: Who[] = ['anonymous', 'member', 'moderator', 'admin'];
+
+describe.each(drivers)('admin API on %s', (driver) => {
+  let database: TestDatabase;
+  let server: TestServer;
+  let targetId: string;
+
+  beforeAll(async () => {
+    database = await openTestDatabase(driver);
+    server = await startTestServer(database);
+  });
+  afterAll(async () => {
+    await server?.close();
+    await database?.close();
+  });
+  beforeEach(async () => {
+    await database.reset();
+    await makeUser(database, 'member@example.test', 'member');
+    await makeUser(database, 'moderator@example.test', 'moderator');
+    await makeUser(database, 'admin@example.test', 'admin');
+    targetId = (await makeUser(database, 'target@example.test')).id;
+  });
+
+  async function clientAs(who: Who) {
+    const c = new Client(server.app);
+    if (who !== 'anonymous') await c.signIn(`${who}@example.test`);
+    return c;
+  }
+
+  const routes = [
+    { name: 'GET /api/admin/users', call: (c: Client) => c.get('/api/admin/users') },
+    { name: 'PATCH /api/admin/users/:id', call: (c: Client) => c.patch(`/api/admin/users/${targetId}`, { role: 'moderator' }) },
+  ];
+  const expected: Record<Who, number> = { anonymous: 401, member: 403, moderator: 403, admin: 200 };
+
+  describe.each(routes)('$name', (route) => {
+    it.each(WHO)('answers %s as the role allows', async (who) => {
+      const res = await route.call(await clientAs(who));
+      expect(res.status).toBe(expected[who]);
+      if (res.status !== 200) expect(res.body.error.code).toBe(who === 'anonymous' ? 'unauthenticated' : 'forbidden');
+    });
+  });
+
+  it('lists users without password hashes and changes a role', async () => {
+    const admin = await clientAs('admin');
+    const list = await admin.get('/api/admin/users');
+    expect(list.body).toHaveLength(4);
+    expect(JSON.stringify(list.body)).not.toMatch(/argon2|passwordHash/);
+    const res = await admin.patch(`/api/admin/users/${targetId}`, { role: 'moderator' });
+    expect(res.body).toMatchObject({ id: targetId, role: 'moderator', suspended: false });
+    const target = new Client(server.app);
+    expect((await target.signIn('target@example.test')).body.role).toBe('moderator');
+  });
+
+  it('refuses bad bodies with field messages, unknown ids with 404, and self-demotion with 409', async () => {
+    const admin = await clientAs('admin');
+    const bad = await admin.patch(`/api/admin/users/${targetId}`, { role: 'emperor' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.role).toMatch(/member, moderator, admin/);
+    expect((await admin.patch(`/api/admin/users/${targetId}`, {})).status).toBe(400);
+    expect((await admin.patch('/api/admin/users/00000000-0000-0000-0000-000000000000', { role: 'member' })).status).toBe(404);
+    expect((await admin.patch('/api/admin/users/not-a-uuid', { role: 'member' })).status).toBe(404);
+    const me = (await admin.get('/api/auth/me')).body.id;
+    expect((await admin.patch(`/api/admin/users/${me}`, { suspended: true })).status).toBe(409);
+  });
+});

@@ -1,0 +1,68 @@
+import { randomBytes } from 'node:crypto';
+import pg from 'pg';
+import { sql } from 'drizzle-orm';
+import { openDatabase, type Database } from '../database/database';
+
+export const TEST_POSTGRES_URL = process.env.TEST_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:5432/test';
+
+/** True when a PostgreSQL server answers at TEST_POSTGRES_URL (checked once per test file). */
+export async function postgresAnswers(): Promise<boolean> {
+  const client = new pg.Client({ connectionString: TEST_POSTGRES_URL, connectionTimeoutMillis: 1500 });
+  try {
+    await client.connect();
+    await client.query('select 1');
+    return true;
+  } catch {
+    return false;
+  } finally {
+    await client.end().catch(() => {});
+  }
+}
+
+export type Driver = 'pglite' | 'postgres';
+
+export interface TestDatabase extends Database {
+  /** Empties every table between tests (cheaper than a new database). */
+  reset(): Promise<void>;
+}
+
+async function onServer(statement: string) {
+  const client = new pg.Client({ connectionString: TEST_POSTGRES_URL });
+  await client.connect();
+  try {
+    await client.query(statement);
+  } finally {
+    await client.end();
+  }
+}
+
+/** An in-memory PGlite, or a database of its own on the PostgreSQL server (dropped on close), so test files never meet. */
+export async function openTestDatabase(driver: Driver): Promise<TestDatabase> {
+  let url: string | undefined;
+  let name: string | undefined;
+  if (driver === 'postgres') {
+    name = `barwright_test_${randomBytes(6).toString('hex')}`;
+    await onServer(`CREATE DATABASE "${name}"`);
+    const u = new URL(TEST_POSTGRES_URL);
+    u.pathname = `/${name}`;
+    url = u.toString();
+  }
+  const database = await openDatabase(url ? { kind: 'postgres', url } : { kind: 'pglite' });
+  return {
+    ...database,
+    reset: async () => {
+      await database.db.execute(sql`TRUNCATE users, sessions, account_tokens RESTART IDENTITY CASCADE`);
+    },
+    close: async () => {
+      await database.close();
+      if (name) await onServer(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+    },
+  };
+}
+
+/** The drivers to run a suite against: PGlite always, PostgreSQL when a server answers (else said so). */
+export async function availableDrivers(): Promise<Driver[]> {
+  if (await postgresAnswers()) return ['pglite', 'postgres'];
+  console.warn(`PostgreSQL server not reachable at ${TEST_POSTGRES_URL}: the postgres-driver runs of this suite are skipped.`);
+  return ['pglite'];
+}
