@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from './app';
 import { createMailer } from './mail/mailer';
 import { openTestDatabase, type TestDatabase } from './testing/test-database';
-import { Client, startTestServer, type TestServer } from './testing/test-app';
+import { Client, cookiesOf, startTestServer, type TestServer } from './testing/test-app';
 
 describe('the app shell', () => {
   let database: TestDatabase;
@@ -54,7 +54,7 @@ describe('the app shell', () => {
     const res = await request(real).get('/api/dev/mailbox');
     expect(res.status).toBe(404);
     const me = await request(real).get('/api/auth/me');
-    expect(me.headers['set-cookie'].join()).toMatch(/XSRF-TOKEN=.*Secure/);
+    expect(cookiesOf(me).join()).toMatch(/XSRF-TOKEN=.*Secure/);
     mailer.close();
   });
 

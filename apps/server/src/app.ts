@@ -66,10 +66,8 @@ export function createApp(deps: AppDeps): express.Express {
   );
   api.use((req, _res, next) => {
     // The absolute timeout: a session older than this ends however active it is.
-    if (req.session.startedAt && Date.now() - req.session.startedAt > SESSION_ABSOLUTE_MS) {
-      return req.session.regenerate(next);
-    }
-    next();
+    if (req.session.startedAt && Date.now() - req.session.startedAt > SESSION_ABSOLUTE_MS) req.session.regenerate(next);
+    else next();
   });
   api.use(passport.initialize());
   api.use(passport.session());

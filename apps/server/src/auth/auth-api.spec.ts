@@ -2,7 +2,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { accountTokens, sessions, users } from '../../../../db/schema';
 import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, makeUser, startTestServer, TEST_PASSWORD, type TestServer } from '../testing/test-app';
+import { Client, cookiesOf, sidOf, makeUser, startTestServer, TEST_PASSWORD, type TestServer } from '../testing/test-app';
 
 const drivers = await availableDrivers();
 const linkToken = (text: string) => text.match(/token=([A-Za-z0-9_-]+)/)?.[1] ?? '';
@@ -92,17 +92,17 @@ describe.each(drivers)('accounts API on %s', (driver) => {
     it('gives a new session id at sign-in and keeps the error the same for unknown e-mail and wrong password', async () => {
       await makeUser(database, 'ada@example.test');
       const c = new Client(server.app);
-      const before = (await c.get('/api/auth/me')).headers['set-cookie']?.find((s: string) => s.startsWith('barwright.sid'));
+      const before = sidOf(await c.get('/api/auth/me'));
       const wrong = await c.post('/api/auth/sign-in', { email: 'ada@example.test', password: 'wrong-password-123' });
       const unknown = await c.post('/api/auth/sign-in', { email: 'nobody@example.test', password: 'wrong-password-123' });
       expect(wrong.status).toBe(401);
       expect(unknown.status).toBe(401);
       expect(unknown.body).toEqual(wrong.body);
       const ok = await c.signIn('ada@example.test');
-      const after = ok.headers['set-cookie'].find((s: string) => s.startsWith('barwright.sid'));
+      const after = cookiesOf(ok).find((s) => s.startsWith('barwright.sid'));
       expect(after).toBeDefined();
-      expect(after!.split(';')[0]).not.toBe(before?.split(';')[0]);
-      const cookie = ok.headers['set-cookie'].find((s: string) => s.startsWith('barwright.sid'))!;
+      expect(after!.split(';')[0]).not.toBe(before);
+      const cookie = cookiesOf(ok).find((s) => s.startsWith('barwright.sid'))!;
       expect(cookie).toMatch(/HttpOnly/);
       expect(cookie).toMatch(/SameSite=Lax/);
       expect(cookie).not.toMatch(/Secure/);
@@ -113,7 +113,7 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       await makeUser(database, 'bo@example.test');
       const c = new Client(server.app);
       const res = await c.signIn('bo@example.test');
-      const sid = res.headers['set-cookie'].find((s: string) => s.startsWith('barwright.sid'))!.split(';')[0];
+      const sid = sidOf(res)!;
       expect((await c.post('/api/auth/sign-out')).status).toBe(204);
       const replay = await new Client(server.app).agent.get('/api/auth/me').set('Cookie', sid);
       expect(replay.status).toBe(401);
@@ -124,7 +124,7 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       await makeUser(database, 'cy@example.test');
       const c = new Client(server.app);
       const res = await c.signIn('cy@example.test');
-      const sid = res.headers['set-cookie'].find((s: string) => s.startsWith('barwright.sid'))!.split(';')[0];
+      const sid = sidOf(res)!;
       const restarted = await startTestServer(database);
       const me = await new Client(restarted.app).agent.get('/api/auth/me').set('Cookie', sid);
       await restarted.close();

@@ -1,5 +1,4 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
-import type { Passport } from 'passport';
 import { eq } from 'drizzle-orm';
 import { resetConfirmBody, resetRequestBody, signInBody, signUpBody, updateProfileBody, verifyBody } from '@barwright/contracts';
 import { users, type UserRow } from '../../../../db/schema';
@@ -8,11 +7,11 @@ import { issueCsrfToken } from '../http/csrf';
 import { parseBody } from '../http/validate';
 import type { createRateLimits } from '../http/rate-limits';
 import * as accounts from './account-service';
-import type { SignInOutcome } from './passport-setup';
+import type { PassportInstance } from './passport-setup';
 import { toMe } from './users';
 
 export interface AuthRouterDeps extends accounts.AccountDeps {
-  passport: Passport;
+  passport: PassportInstance;
   limits: ReturnType<typeof createRateLimits>;
   secureCookies: boolean;
 }
@@ -26,10 +25,10 @@ export function requireUser(req: Request): UserRow {
 function signIn(deps: AuthRouterDeps): RequestHandler {
   return (req, res, next) => {
     parseBody(signInBody, req.body);
-    deps.passport.authenticate('local', (error: unknown, user: UserRow | false, outcome: SignInOutcome) => {
+    deps.passport.authenticate('local', (error: unknown, user: UserRow | false, info?: { message?: string }) => {
       if (error) return next(error);
       if (!user) {
-        const suspended = 'refused' in outcome && outcome.refused === 'suspended';
+        const suspended = info?.message === 'suspended';
         return next(
           suspended
             ? new HttpError(403, 'suspended', 'This account is suspended. Contact your club administrator.')

@@ -13,14 +13,19 @@ declare global {
   }
 }
 
-export type SignInOutcome = { user: UserRow } | { refused: 'invalid_credentials' | 'suspended' };
+type SignInOutcome = { user: UserRow } | { refused: 'invalid_credentials' | 'suspended' };
 
 /** A passport instance of this app's own (no global singleton): local strategy on e-mail + password. */
-export function createPassport(db: Db): Passport {
+export type PassportInstance = InstanceType<typeof Passport>;
+
+export function createPassport(db: Db): PassportInstance {
   const passport = new Passport();
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
-      checkCredentials(db, email, password).then((outcome) => done(null, 'user' in outcome ? outcome.user : false, outcome), done);
+      checkCredentials(db, email, password).then(
+        (outcome) => done(null, 'user' in outcome ? outcome.user : false, { message: 'refused' in outcome ? outcome.refused : 'ok' }),
+        done,
+      );
     }),
   );
   passport.serializeUser<string>((user, done) => done(null, user.id));

@@ -6,6 +6,11 @@ import { createMailer } from '../mail/mailer';
 import { insertUser } from '../auth/users';
 import type { TestDatabase } from './test-database';
 
+/** The Set-Cookie lines of a response, always as a list. */
+export const cookiesOf = (res: request.Response): string[] => ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+/** `barwright.sid=…` as a Cookie header value, or undefined when the response set none. */
+export const sidOf = (res: request.Response) => cookiesOf(res).find((c) => c.startsWith('barwright.sid='))?.split(';')[0];
+
 export const TEST_PASSWORD = 'quiet-walnut-crosscut-49';
 
 export interface TestServer {
