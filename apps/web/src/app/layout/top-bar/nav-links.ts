@@ -1,0 +1,15 @@
+/** One destination in the top bar. */
+export interface NavLink {
+  label: string;
+  path: string;
+  icon: string;
+  testId: string;
+}
+
+/** Which destinations a visitor sees: People only for admins, Mailbox only in local mail mode. */
+export function navLinksFor(options: { isAdmin: boolean; localMail: boolean }): NavLink[] {
+  const links: NavLink[] = [{ label: 'Home', path: '/', icon: 'home', testId: 'nav-home' }];
+  if (options.isAdmin) links.push({ label: 'People', path: '/admin/people', icon: 'group', testId: 'nav-people' });
+  if (options.localMail) links.push({ label: 'Mailbox', path: '/mailbox', icon: 'mail', testId: 'nav-mailbox' });
+  return links;
+}

@@ -1,0 +1,36 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatMenuModule } from '@angular/material/menu';
+import { RouterLink, RouterLinkActive } from '@angular/router';
+import { map } from 'rxjs';
+import { AuthStore } from '../../core/auth/auth-store';
+import { ConfigStore } from '../../core/config/config-store';
+import { AccountMenu } from '../account-menu/account-menu';
+import { navLinksFor } from './nav-links';
+
+/** Below this width the navigation folds into a "Menu" button. */
+const COMPACT_QUERY = '(max-width: 719.98px)';
+
+@Component({
+  selector: 'bw-top-bar',
+  imports: [RouterLink, RouterLinkActive, MatButtonModule, MatIconModule, MatMenuModule, AccountMenu],
+  templateUrl: './top-bar.html',
+  styleUrl: './top-bar.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class TopBar {
+  protected readonly auth = inject(AuthStore);
+  private readonly config = inject(ConfigStore);
+
+  protected readonly compact = toSignal(
+    inject(BreakpointObserver)
+      .observe(COMPACT_QUERY)
+      .pipe(map((state) => state.matches)),
+    { initialValue: false },
+  );
+
+  protected readonly links = computed(() => navLinksFor({ isAdmin: this.auth.isAdmin(), localMail: this.config.config().localMail }));
+}
