@@ -1,0 +1,90 @@
+import { PDFParse } from 'pdf-parse';
+import { describe, expect, it } from 'vitest';
+import { planCut } from '../cut-plan';
+import { demoDesign, demoInInches, demoProfile } from '../testing/export-fixtures';
+import { handMadeProfile } from '../testing/hand-made-profile';
+import { exportDesign } from './index';
+import { PAGE_MARGIN_MM } from './pdf-tiles';
+
+/** PDF user space: 1 unit = 1/72 in (ISO 32000-1 §8.3.2.3); inch = 25.4 mm (NIST). */
+const PT_PER_MM = 72 / 25.4;
+
+async function pdfOf(design = demoDesign, profile = demoProfile): Promise<Uint8Array> {
+  const file = await exportDesign(design, 'pdf', { profile });
+  expect(file).toMatchObject({ filename: 'bar.pdf', mime: 'application/pdf' });
+  return file.content as Uint8Array;
+}
+
+/** Text and page count read back with pdf-parse (an independent PDF text extractor from npm). */
+async function textOf(bytes: Uint8Array) {
+  const parser = new PDFParse({ data: bytes.slice() });
+  try {
+    const text = await parser.getText();
+    return { text: text.text, pages: text.total };
+  } finally {
+    await parser.destroy();
+  }
+}
+
+/**
+ * Bounding boxes of the stroked paths on a page, in points, read with pdfjs-dist (Mozilla's PDF
+ * engine, on which pdf-parse is built; independent of pdf-lib, which wrote the file).
+ */
+async function pathBoxes(bytes: Uint8Array, pageNumber: number) {
+  const pdfjs = await import('pdfjs-dist/legacy/build/pdf.mjs');
+  const doc = await pdfjs.getDocument({ data: bytes.slice(), verbosity: 0 }).promise;
+  const page = await doc.getPage(pageNumber);
+  const ops = await page.getOperatorList();
+  const boxes = ops.fnArray.flatMap((fn: number, i: number) => {
+    if (fn !== pdfjs.OPS.constructPath) return [];
+    const [x0, y0, x1, y1] = Array.from(ops.argsArray[i][2] as ArrayLike<number>);
+    return [{ width: x1 - x0, height: y1 - y0, x0, y0 }];
+  });
+  const view = page.view;
+  await doc.destroy();
+  return { boxes, size: [view[2] - view[0], view[3] - view[1]] };
+}
+
+describe('PDF template', () => {
+  it('holds the title, the calibration note, the cut plan and the cautions as text', async () => {
+    const { text, pages } = await textOf(await pdfOf());
+    const plan = planCut(demoDesign, demoProfile);
+    expect(pages).toBe(2);
+    expect(text).toContain('24-lobe sine rosette, A2 tool steel, annealed, bar 150 mm');
+    expect(text).toContain('Calibration square: it must measure 10 mm x 10 mm on paper.');
+    expect(text).toContain(`Passes: ${plan.passes} at 0.0762 mm step-over`);
+    expect(text).toContain(`${plan.totalMinutes.toFixed(1)} min in all`);
+    expect(text).toContain(`${Math.round(plan.rpm)} rpm`);
+    expect(text).toContain('Wear eye protection');
+    expect(text).toContain('No gloves, loose clothing');
+    expect(text).toMatch(/Heat treatment[\s\S]*HRC 57-62/);
+  });
+
+  it('is A4 landscape with a 10 mm calibration square and the bar drawn at 1:1', async () => {
+    const { boxes, size } = await pathBoxes(await pdfOf(), 1);
+    expect(size[0]).toBeCloseTo(297 * PT_PER_MM, 2);
+    expect(size[1]).toBeCloseTo(210 * PT_PER_MM, 2);
+    const square = boxes.find((b) => Math.abs(b.width - b.height) < 1e-3 && b.width < 40);
+    expect(square?.width).toBeCloseTo(10 * PT_PER_MM, 2);
+    const bar = boxes.find((b) => Math.abs(b.width - 150 * PT_PER_MM) < 0.05 && b.height > 10 * PT_PER_MM);
+    expect(bar?.x0).toBeCloseTo(PAGE_MARGIN_MM * PT_PER_MM, 2);
+  });
+
+  it('uses Letter and a 1 in square for an inch design', async () => {
+    const bytes = await pdfOf(demoInInches());
+    const { boxes, size } = await pathBoxes(bytes, 1);
+    expect(size).toEqual([792, 612]);
+    expect(boxes.some((b) => Math.abs(b.width - 72) < 1e-3 && Math.abs(b.height - 72) < 1e-3)).toBe(true);
+    expect((await textOf(bytes)).text).toContain('1 in x 1 in');
+  });
+
+  it('tiles a bar longer than the page over several overlapping pages', async () => {
+    const long = structuredClone(demoDesign);
+    long.bar.length = 600;
+    const { text, pages } = await textOf(await pdfOf(long, handMadeProfile(long, 0.1)));
+    expect(text).toContain('Tile 1 of 3');
+    expect(text).toContain('Tile 3 of 3');
+    expect(text).toContain('tile 2 starts here');
+    expect(pages).toBeGreaterThanOrEqual(4);
+  });
+});

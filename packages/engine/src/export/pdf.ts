@@ -1,0 +1,143 @@
+import { MM_PER_INCH, type Units } from '@barwright/contracts';
+import {
+  PDFDocument,
+  StandardFonts,
+  clip,
+  closePath,
+  endPath,
+  lineTo,
+  moveTo,
+  popGraphicsState,
+  pushGraphicsState,
+  rectangle,
+  setDashPattern,
+  setFillingGrayscaleColor,
+  setLineWidth,
+  setStrokingGrayscaleColor,
+  setStrokingRgbColor,
+  fillAndStroke,
+  stroke,
+  type PDFFont,
+  type PDFOperator,
+  type PDFPage,
+} from 'pdf-lib';
+import type { CutPlan } from '../cut-plan';
+import { SHORT_CAUTION } from '../cut-plan-notes';
+import { formatLength } from '../length-format';
+import type { Point } from '../types';
+import type { BarDrawing } from './bar-drawing';
+import { addPlanPages } from './pdf-plan-pages';
+import { winAnsiText } from './pdf-text';
+import { PAGE_MARGIN_MM, PAPER_POINTS, PT_PER_MM, tileRanges, type Paper, type Tile } from './pdf-tiles';
+
+export interface PdfJob {
+  title: string;
+  units: Units;
+  drawing: BarDrawing;
+  plan: CutPlan;
+  materialName: string;
+  /** Default: A4 for a mm design, Letter for an inch design. */
+  paper?: Paper;
+}
+
+/** Side of the calibration square: 10 mm, or 1 in for an inch design. */
+export function calibrationSideMm(units: Units): number {
+  return units === 'in' ? MM_PER_INCH : 10;
+}
+
+/**
+ * A printable 1:1 template: one landscape page per tile of the bar (with a calibration square,
+ * x marks and seam marks), then the cut plan. Deterministic: no dates are written.
+ */
+export async function barPdf(job: PdfJob): Promise<Uint8Array> {
+  const doc = await PDFDocument.create({ updateMetadata: false });
+  doc.setTitle(winAnsiText(job.title));
+  doc.setCreator('Barwright');
+  const fonts = { regular: await doc.embedFont(StandardFonts.Helvetica), bold: await doc.embedFont(StandardFonts.HelveticaBold) };
+  const size = PAPER_POINTS[job.paper ?? (job.units === 'in' ? 'letter' : 'a4')];
+  const usableMm = size[0] / PT_PER_MM - 2 * PAGE_MARGIN_MM;
+  const tiles = tileRanges(job.drawing.length, usableMm);
+  for (const tile of tiles) drawTilePage(doc.addPage([size[0], size[1]]), job, tile, tiles, fonts);
+  addPlanPages(doc, size, fonts, job);
+  return doc.save();
+}
+
+function drawTilePage(page: PDFPage, job: PdfJob, tile: Tile, tiles: readonly Tile[], fonts: { regular: PDFFont; bold: PDFFont }): void {
+  const { drawing } = job;
+  const k = PT_PER_MM;
+  const margin = PAGE_MARGIN_MM * k;
+  const { height } = page.getSize();
+  const unit = job.units;
+  const toPt = ([x, y]: Point): Point => [margin + (x - tile.xFrom) * k, height / 2 + (y - drawing.backY) * k];
+  const text = (s: string, x: number, y: number, size = 9, font = fonts.regular) => page.drawText(winAnsiText(s), { x, y, size, font });
+
+  text(job.title, margin, height - margin - 12, 13, fonts.bold);
+  const span = `x ${fmt(tile.xFrom, unit)} to ${fmt(tile.xTo, unit)} ${unit}`;
+  text(`Tile ${tile.index + 1} of ${tiles.length}: ${span}. Print at 100 % (actual size), not "fit to page".`, margin, height - margin - 28);
+  text('Grey: the bar, cut edge on top. Dashed red: the cutter-centre path. Thin line: the blank before cutting.', margin, height - margin - 41);
+  const { plan } = job;
+  const summary = `Cut plan: ${plan.passes} passes of ${formatLength(plan.stepOver, unit)}, about ${plan.totalMinutes.toFixed(1)} min at ${Math.round(plan.rpm)} rpm. The full plan and the cautions are on the last pages.`;
+  text(summary, margin, height - margin - 54);
+
+  const clipWidth = (tile.xTo - tile.xFrom) * k;
+  page.pushOperators(pushGraphicsState(), rectangle(margin, 0, clipWidth, height), clip(), endPath());
+  page.pushOperators(pushGraphicsState(), setLineWidth(0.6), setStrokingGrayscaleColor(0), setFillingGrayscaleColor(0.88), ...path(drawing.outline.map(toPt), true), fillAndStroke(), popGraphicsState());
+  page.pushOperators(pushGraphicsState(), setLineWidth(0.4), setStrokingRgbColor(0.7, 0, 0.12), setDashPattern([2, 2], 0), ...path(drawing.cutterPath.map(toPt), false), stroke(), popGraphicsState());
+  const blank = [toPt([tile.xFrom, drawing.blankEdgeY]), toPt([tile.xTo, drawing.blankEdgeY])];
+  page.pushOperators(pushGraphicsState(), setLineWidth(0.3), setStrokingGrayscaleColor(0.4), ...path(blank, false), stroke(), popGraphicsState());
+  page.pushOperators(popGraphicsState());
+
+  drawTicks(page, job, tile, toPt, text);
+  drawSeams(page, tile, tiles, toPt, drawing, text);
+  drawCalibrationSquare(page, unit, margin, text);
+  text(`CAUTION: ${SHORT_CAUTION}`, margin, margin - 14, 7.5);
+}
+
+type TextFn = (s: string, x: number, y: number, size?: number) => void;
+
+/** Marks along the back of the bar: every 10 mm with a figure every 50 mm, or every 1/4 in with a figure every inch. */
+function drawTicks(page: PDFPage, job: PdfJob, tile: Tile, toPt: (p: Point) => Point, text: TextFn): void {
+  const stepMm = job.units === 'in' ? MM_PER_INCH / 4 : 10;
+  const labelEvery = job.units === 'in' ? 4 : 5;
+  const ops: PDFOperator[] = [pushGraphicsState(), setLineWidth(0.5), setStrokingGrayscaleColor(0)];
+  for (let i = Math.ceil(tile.xFrom / stepMm - 1e-9); i * stepMm <= tile.xTo + 1e-9; i++) {
+    const [x, y] = toPt([i * stepMm, job.drawing.backY]);
+    const long = i % labelEvery === 0;
+    ops.push(moveTo(x, y), lineTo(x, y - (long ? 8 : 4)));
+    if (long) text(`${fmt(i * stepMm, job.units)} ${job.units}`, x + 1.5, y - 16, 7);
+  }
+  page.pushOperators(...ops, stroke(), popGraphicsState());
+}
+
+/** Dashed lines where the neighbouring tiles start and end, for lining the sheets up. */
+function drawSeams(page: PDFPage, tile: Tile, tiles: readonly Tile[], toPt: (p: Point) => Point, drawing: BarDrawing, text: TextFn): void {
+  const marks: Array<[number, string]> = [];
+  const next = tiles[tile.index + 1];
+  const previous = tiles[tile.index - 1];
+  if (next) marks.push([next.xFrom, `tile ${next.index + 1} starts here`]);
+  if (previous) marks.push([previous.xTo, `tile ${previous.index + 1} ends here`]);
+  for (const [xMm, label] of marks) {
+    const [x, low] = toPt([xMm, drawing.backY - 6]);
+    const [, high] = toPt([xMm, drawing.blankEdgeY + 6]);
+    page.pushOperators(pushGraphicsState(), setLineWidth(0.4), setDashPattern([4, 2], 0), moveTo(x, low), lineTo(x, high), stroke(), popGraphicsState());
+    text(label, x + 2, high + 2, 7);
+  }
+}
+
+/** The square the printout is checked with: 10 mm, or 1 in for an inch design. */
+function drawCalibrationSquare(page: PDFPage, units: Units, margin: number, text: TextFn): void {
+  const side = calibrationSideMm(units) * PT_PER_MM;
+  const y = margin + 4;
+  page.pushOperators(pushGraphicsState(), setLineWidth(0.5), setStrokingGrayscaleColor(0), rectangle(margin, y, side, side), stroke(), popGraphicsState());
+  const label = units === 'in' ? '1 in x 1 in' : '10 mm x 10 mm';
+  text(`Calibration square: it must measure ${label} on paper.`, margin + side + 6, y + side / 2 - 3);
+}
+
+function path(points: readonly Point[], closed: boolean): PDFOperator[] {
+  const ops = points.map(([x, y], i) => (i === 0 ? moveTo(x, y) : lineTo(x, y)));
+  return closed ? [...ops, closePath()] : ops;
+}
+
+function fmt(mm: number, units: Units): string {
+  return String(+(units === 'in' ? mm / MM_PER_INCH : mm).toFixed(units === 'in' ? 3 : 1));
+}
