@@ -6,7 +6,7 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { ConfigStore } from '../../../core/config/config-store';
 import { barleycorn, lineStudyPaths, SketchSpec, sketchHeight } from './line-study-sketch';
 
-const SKETCH: SketchSpec = { width: 480, lines: 16, spacing: 11, amplitude: 9, period: 36, phase: barleycorn };
+const SKETCH: SketchSpec = { width: 480, lines: 13, spacing: 13, amplitude: 11, period: 44, phase: barleycorn };
 
 /** One thing a signed-in member can do next. */
 interface NextStep {
