@@ -1,2 +1,3 @@
 export * from './users';
 export * from './sessions';
+export * from './boards';

@@ -15,6 +15,10 @@ import { securityHeaders } from './http/security-headers';
 import type { LocalSmtp } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { webAppRouter } from './web/web-app';
+import { BoardAccessEvents } from './boards/board-access';
+import { boardsRouter, invitationsRouter } from './boards/boards-router';
+import { designsRouter } from './designs/designs-router';
+import { DesignDocStore } from './realtime/design-doc-store';
 
 /** Idle and absolute session lifetimes. */
 export const SESSION_IDLE_MS = 7 * 24 * 3600_000;
@@ -34,6 +38,16 @@ export interface AppDeps {
   demo?: boolean;
   rateLimits?: Partial<RateLimitSettings>;
   log?: (error: unknown) => void;
+  /** Shared with the realtime gateway so role changes reach open sockets. */
+  accessEvents?: BoardAccessEvents;
+  /** Closes the open sockets of a design (it was deleted); the realtime gateway provides it. */
+  closeDesignSockets?: (designId: string) => void;
+}
+
+/** What main.ts needs besides the handler: the same session parser for the socket upgrade. */
+export interface AppLocals {
+  sessionParser: express.RequestHandler;
+  accessEvents: BoardAccessEvents;
 }
 
 /** Builds the Express app. It never listens: main.ts does, and tests call it through supertest. */
@@ -44,8 +58,21 @@ export function createApp(deps: AppDeps): express.Express {
   const passport = createPassport(deps.db);
   const limits = createRateLimits({ ...DEFAULT_RATE_LIMITS, ...deps.rateLimits });
 
+  const accessEvents = deps.accessEvents ?? new BoardAccessEvents();
+  const store = new DesignDocStore(deps.db);
+  const sessionParser = session({
+    name: SESSION_COOKIE,
+    secret: deps.sessionSecret,
+    store: sessionStore,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: secureCookies, maxAge: SESSION_IDLE_MS },
+  });
+
   const app = express();
   app.disable('x-powered-by');
+  Object.assign(app.locals, { sessionParser, accessEvents } satisfies AppLocals);
   app.use(securityHeaders(secureCookies));
 
   const api = express.Router();
@@ -53,17 +80,7 @@ export function createApp(deps: AppDeps): express.Express {
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok', database: deps.databaseKind } satisfies Health);
   });
-  api.use(
-    session({
-      name: SESSION_COOKIE,
-      secret: deps.sessionSecret,
-      store: sessionStore,
-      resave: false,
-      saveUninitialized: false,
-      rolling: true,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: secureCookies, maxAge: SESSION_IDLE_MS },
-    }),
-  );
+  api.use(sessionParser);
   api.use((req, _res, next) => {
     // The absolute timeout: a session older than this ends however active it is.
     if (req.session.startedAt && Date.now() - req.session.startedAt > SESSION_ABSOLUTE_MS) req.session.regenerate(next);
@@ -77,6 +94,10 @@ export function createApp(deps: AppDeps): express.Express {
   });
   api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies }));
   api.use('/admin', adminRouter({ db: deps.db, sessionStore }));
+  const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log };
+  api.use('/boards', boardsRouter(boardDeps));
+  api.use('/invitations', invitationsRouter(boardDeps));
+  api.use('/designs', designsRouter({ db: deps.db, store, closeDesignSockets: deps.closeDesignSockets ?? (() => {}) }));
   if (deps.localSmtp) api.use('/dev', mailboxRouter(deps.localSmtp));
   api.use(apiNotFound);
 

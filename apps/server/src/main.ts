@@ -1,5 +1,8 @@
 import http from 'node:http';
-import { createApp } from './app';
+import { createApp, type AppLocals } from './app';
+import { BoardAccessEvents } from './boards/board-access';
+import { CLOSE_CODES } from '@barwright/contracts';
+import { CollabGateway } from './realtime/collab-gateway';
 import { loadConfig } from './config';
 import { DataDirBusyError } from './database/data-dir-lock';
 import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
@@ -22,7 +25,11 @@ async function main() {
   let seeded = false;
   if (config.demoData) seeded = await seedDemoScenario(database.db);
 
+  const accessEvents = new BoardAccessEvents();
+  let gateway: CollabGateway | undefined;
   const app = createApp({
+    accessEvents,
+    closeDesignSockets: (designId) => gateway?.closeWhere((c) => c.designId === designId, CLOSE_CODES.forbidden, 'design deleted'),
     db: database.db,
     databaseKind: database.kind,
     mailer,
@@ -33,6 +40,8 @@ async function main() {
     demo: config.demoData,
   });
   const server = http.createServer(app);
+  gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents });
+  gateway.attach(server);
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve));
 
   const ms = Math.round(performance.now() - started);
@@ -49,6 +58,7 @@ async function main() {
     if (stopping) return;
     stopping = true;
     log(`${signal}: shutting down`);
+    await gateway?.close();
     server.closeAllConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     mailer.close();

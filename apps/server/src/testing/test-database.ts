@@ -51,7 +51,7 @@ export async function openTestDatabase(driver: Driver): Promise<TestDatabase> {
   return {
     ...database,
     reset: async () => {
-      await database.db.execute(sql`TRUNCATE users, sessions, account_tokens RESTART IDENTITY CASCADE`);
+      await database.db.execute(sql`TRUNCATE users, sessions, account_tokens, boards, board_members, board_invitations, designs, design_updates, design_versions RESTART IDENTITY CASCADE`);
     },
     close: async () => {
       await database.close();

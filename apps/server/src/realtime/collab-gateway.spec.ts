@@ -1,0 +1,158 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
+import * as Y from 'yjs';
+import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { CLOSE_CODES } from '@barwright/contracts';
+import { DESIGN_MAP, readDesign, setDesignField } from '@barwright/contracts/design-doc';
+import { designUpdates } from '../../../../db/schema';
+import type { AppLocals } from '../app';
+import { BoardAccessEvents } from '../boards/board-access';
+import { openTestDatabase, type TestDatabase } from '../testing/test-database';
+import { Client, makeUser, sidOf, startTestServer, type TestServer } from '../testing/test-app';
+import { collabClient, eventually } from '../testing/collab-client';
+import { CollabGateway } from './collab-gateway';
+
+describe('collaboration gateway', () => {
+  let database: TestDatabase;
+  let server: TestServer;
+  let httpServer: http.Server;
+  let gateway: CollabGateway;
+  let baseUrl: string;
+  let owner: Client;
+  let ownerCookie: string;
+  let designId: string;
+  let boardId: string;
+  const clients: { destroy(): void }[] = [];
+
+  beforeAll(async () => {
+    database = await openTestDatabase('pglite');
+    const accessEvents = new BoardAccessEvents();
+    server = await startTestServer(database, { accessEvents });
+    httpServer = http.createServer(server.app);
+    gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, log: () => {} });
+    gateway.attach(httpServer);
+    await new Promise<void>((r) => httpServer.listen(0, '127.0.0.1', r));
+    baseUrl = `http://127.0.0.1:${(httpServer.address() as AddressInfo).port}`;
+  });
+  afterAll(async () => {
+    await gateway.close();
+    httpServer.closeAllConnections();
+    await new Promise((r) => httpServer.close(r));
+    await server.close();
+    await database.close();
+  });
+  beforeEach(async () => {
+    await database.reset();
+    await makeUser(database, 'owner@example.test');
+    owner = new Client(server.app);
+    ownerCookie = sidOf(await owner.signIn('owner@example.test'))!;
+    boardId = (await owner.post('/api/boards', { name: 'Collab' })).body.id;
+    designId = (await owner.post(`/api/boards/${boardId}/designs`, { title: 'Shared' })).body.id;
+  });
+  afterEach(() => {
+    for (const c of clients.splice(0)) c.destroy();
+  });
+
+  async function member(email: string, role: 'editor' | 'viewer') {
+    const user = await makeUser(database, email);
+    const { boardMembers } = await import('../../../../db/schema');
+    await database.db.insert(boardMembers).values({ boardId, userId: user.id, role });
+    const c = new Client(server.app);
+    return { user, cookie: sidOf(await c.signIn(email))! };
+  }
+  const open = (cookie: string) => {
+    const c = collabClient(baseUrl, designId, cookie);
+    clients.push(c);
+    return c;
+  };
+  const lobes = (doc: Y.Doc) => (readDesign(doc) as any).rosette?.layers?.[0]?.lobes;
+
+  it('refuses the upgrade without a session (4401) and for non-members (4403)', async () => {
+    const anonymous = open('barwright.sid=nothing');
+    expect((await anonymous.closed()).code).toBe(CLOSE_CODES.unauthorized);
+    await makeUser(database, 'outsider@example.test');
+    const outsiderCookie = sidOf(await new Client(server.app).signIn('outsider@example.test'))!;
+    expect((await open(outsiderCookie).closed()).code).toBe(CLOSE_CODES.forbidden);
+  });
+
+  it('serves the stored design and relays edits between two editors', async () => {
+    const { cookie } = await member('ed@example.test', 'editor');
+    const a = open(ownerCookie);
+    const b = open(cookie);
+    await Promise.all([a.synced(), b.synced()]);
+    await eventually(() => lobes(a.doc) === 24 && lobes(b.doc) === 24, 5000, 'initial state');
+    setDesignField(a.doc, ['rosette', 'layers', 0, 'lobes'], 36);
+    await eventually(() => lobes(b.doc) === 36, 2000, 'relayed edit');
+    b.doc.getText('notes').insert(0, 'Cut in A2 next week.');
+    await eventually(() => a.doc.getText('notes').toString() === 'Cut in A2 next week.');
+    const stored = await gateway.store.loadDoc(designId);
+    expect(lobes(stored)).toBe(36);
+  });
+
+  it('drops a viewer\'s edits: never relayed, never stored', async () => {
+    const { cookie } = await member('vi@example.test', 'viewer');
+    const a = open(ownerCookie);
+    const v = open(cookie);
+    await Promise.all([a.synced(), v.synced()]);
+    const rowsBefore = await gateway.store.rowCount(designId);
+    setDesignField(v.doc, ['rosette', 'layers', 0, 'lobes'], 99);
+    setDesignField(a.doc, ['bar', 'length'], 140);
+    await eventually(() => (readDesign(v.doc) as any).bar.length === 140);
+    await new Promise((r) => setTimeout(r, 200));
+    expect(lobes(a.doc)).toBe(24);
+    expect(await gateway.store.rowCount(designId)).toBe(rowsBefore + 1);
+  });
+
+  it('applies a role change and a removal to open sockets at once', async () => {
+    const { user, cookie } = await member('ch@example.test', 'editor');
+    const a = open(ownerCookie);
+    const e = open(cookie);
+    await Promise.all([a.synced(), e.synced()]);
+    expect((await owner.patch(`/api/boards/${boardId}/members/${user.id}`, { role: 'viewer' })).status).toBe(200);
+    await new Promise((r) => setTimeout(r, 100));
+    setDesignField(e.doc, ['rosette', 'layers', 0, 'lobes'], 50);
+    await new Promise((r) => setTimeout(r, 300));
+    expect(lobes(a.doc)).toBe(24);
+    const closed = e.closed();
+    await owner.send('delete', `/api/boards/${boardId}/members/${user.id}`);
+    expect((await closed).code).toBe(CLOSE_CODES.forbidden);
+  });
+
+  it('converges with 20 clients making random concurrent edits through random disconnects', async () => {
+    const n = 20;
+    const peers = Array.from({ length: n }, () => open(ownerCookie));
+    await Promise.all(peers.map((p) => p.synced()));
+    let seed = 7;
+    const random = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+    for (let round = 0; round < 60; round++) {
+      const p = peers[Math.floor(random() * n)];
+      const r = random();
+      if (r < 0.15) p.provider.disconnect();
+      else if (r < 0.3) p.provider.connect();
+      else if (r < 0.65) setDesignField(p.doc, ['rosette', 'layers', 0, 'lobes'], 1 + Math.floor(random() * 100));
+      else p.doc.getText('notes').insert(Math.floor(random() * (p.doc.getText('notes').length + 1)), String.fromCharCode(97 + (round % 26)));
+      if (round % 10 === 0) await new Promise((res) => setTimeout(res, 10));
+    }
+    for (const p of peers) p.provider.connect();
+    const state = (d: Y.Doc) => JSON.stringify([d.getMap(DESIGN_MAP).toJSON(), d.getText('notes').toString()]);
+    await eventually(() => peers.every((p) => p.provider.synced && state(p.doc) === state(peers[0].doc)), 15000, 'convergence');
+    const stored = await gateway.store.loadDoc(designId);
+    expect(state(stored)).toBe(state(peers[0].doc));
+    expect(peers[0].doc.getText('notes').length).toBeGreaterThan(0);
+  });
+
+  it('compacts stored updates without changing the document', async () => {
+    const a = open(ownerCookie);
+    await a.synced();
+    for (let i = 1; i <= 30; i++) setDesignField(a.doc, ['rosette', 'layers', 0, 'lobes'], i);
+    await eventually(() => true);
+    await new Promise((r) => setTimeout(r, 300));
+    const before = await gateway.store.loadDoc(designId);
+    const { before: rows } = await gateway.store.compact(designId);
+    expect(rows).toBeGreaterThan(10);
+    expect(await gateway.store.rowCount(designId)).toBe(1);
+    const after = await gateway.store.loadDoc(designId);
+    expect(readDesign(after)).toEqual(readDesign(before));
+    expect((await database.db.select().from(designUpdates))[0].merged).toBeGreaterThanOrEqual(rows);
+  });
+});

@@ -1,0 +1,18 @@
+import * as Y from 'yjs';
+import { docs } from '@y/websocket-server/utils';
+import type { DesignDocStore } from './design-doc-store';
+
+/** The documents y-websocket holds open, by design id (the library keeps them in one module-level map). */
+const liveDoc = (designId: string): Y.Doc | undefined => docs.get(designId);
+
+/** The current document: the live one when someone has it open, else a copy loaded from storage. */
+export async function currentDoc(store: DesignDocStore, designId: string): Promise<Y.Doc> {
+  return liveDoc(designId) ?? (await store.loadDoc(designId));
+}
+
+/** Applies a change made on the server (a restored version) as a new edit: stored first, then relayed to everyone. */
+export async function applyServerUpdate(store: DesignDocStore, designId: string, update: Uint8Array): Promise<void> {
+  await store.append(designId, update);
+  const live = liveDoc(designId);
+  if (live) Y.applyUpdate(live, update, 'server');
+}
