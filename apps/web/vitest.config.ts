@@ -1,0 +1,12 @@
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vitest/config';
+
+// Pure functions of the web app (no TestBed, no DOM); pages and flows are covered by e2e/.
+export default defineConfig({
+  root: fileURLToPath(new URL('.', import.meta.url)),
+  test: {
+    include: ['src/**/*.spec.ts'],
+    environment: 'node',
+    setupFiles: ['src/test-setup.ts'],
+  },
+});
