@@ -10,6 +10,7 @@ import { ConfigStore } from '../../../core/config/config-store';
 import { contractValidator } from '../../../shared/forms/contract-validator';
 import { fieldMessage } from '../../../shared/forms/field-message';
 import { formProblem } from '../../../shared/forms/form-problem';
+import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 import { AccountApi } from '../account-api';
 
 /** Asks for a reset link. The answer is the same whether or not the address has an account. */
@@ -30,11 +31,13 @@ export class ForgotPasswordPage {
   protected readonly problem = signal<string | null>(null);
   protected readonly sentTo = signal<string | null>(null);
   protected readonly fieldMessage = fieldMessage;
+  private readonly focusInvalid = injectInvalidFocus();
 
   protected async requestReset(): Promise<void> {
     this.problem.set(null);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      this.focusInvalid();
       return;
     }
     this.busy.set(true);
@@ -44,6 +47,7 @@ export class ForgotPasswordPage {
       this.sentTo.set(email.trim());
     } catch (error) {
       this.problem.set(formProblem(error, this.form));
+      this.focusInvalid();
     } finally {
       this.busy.set(false);
     }

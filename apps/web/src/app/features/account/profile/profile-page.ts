@@ -13,6 +13,7 @@ import { Notifier } from '../../../core/error-handling/notifier';
 import { contractValidator } from '../../../shared/forms/contract-validator';
 import { fieldMessage } from '../../../shared/forms/field-message';
 import { formProblem } from '../../../shared/forms/form-problem';
+import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 import { AccountApi } from '../account-api';
 
 @Component({
@@ -39,6 +40,7 @@ export class ProfilePage {
   protected readonly problem = signal<string | null>(null);
   protected readonly resend = signal<'idle' | 'sending' | 'sent'>('idle');
   protected readonly fieldMessage = fieldMessage;
+  private readonly focusInvalid = injectInvalidFocus();
 
   constructor() {
     // Fill the form from the account whenever the server's answer changes (after a save, too).
@@ -52,6 +54,7 @@ export class ProfilePage {
     this.problem.set(null);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      this.focusInvalid();
       return;
     }
     this.busy.set(true);
@@ -61,6 +64,7 @@ export class ProfilePage {
       void this.notifier.tell('Profile saved.', undefined, 3000);
     } catch (error) {
       this.problem.set(formProblem(error, this.form));
+      this.focusInvalid();
     } finally {
       this.busy.set(false);
     }

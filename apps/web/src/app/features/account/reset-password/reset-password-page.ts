@@ -8,6 +8,7 @@ import { PASSWORD_MAX, PASSWORD_MIN, passwordSchema } from '@barwright/contracts
 import { contractValidator } from '../../../shared/forms/contract-validator';
 import { fieldMessage } from '../../../shared/forms/field-message';
 import { formProblem } from '../../../shared/forms/form-problem';
+import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 import { ApiError } from '../../../core/http/api-error';
 import { AccountApi } from '../account-api';
 
@@ -40,12 +41,14 @@ export class ResetPasswordPage {
   protected readonly done = signal(false);
   protected readonly passwordVisible = signal(false);
   protected readonly fieldMessage = fieldMessage;
+  private readonly focusInvalid = injectInvalidFocus();
 
   protected async setPassword(): Promise<void> {
     this.problem.set(null);
     const token = this.token();
     if (!token || this.form.invalid) {
       this.form.markAllAsTouched();
+      this.focusInvalid();
       return;
     }
     this.busy.set(true);
@@ -54,6 +57,7 @@ export class ResetPasswordPage {
       this.done.set(true);
     } catch (error) {
       this.problem.set(isBadLink(error) ? BAD_LINK : formProblem(error, this.form));
+      this.focusInvalid();
     } finally {
       this.busy.set(false);
     }

@@ -11,6 +11,7 @@ import { Notifier } from '../../../core/error-handling/notifier';
 import { contractValidator } from '../../../shared/forms/contract-validator';
 import { fieldMessage } from '../../../shared/forms/field-message';
 import { formProblem } from '../../../shared/forms/form-problem';
+import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 
 const SIGN_IN_PROBLEMS = {
   invalid_credentials: 'That e-mail and password do not match an account. Check both, or reset the password.',
@@ -40,11 +41,13 @@ export class SignInPage {
   protected readonly problem = signal<string | null>(null);
   protected readonly passwordVisible = signal(false);
   protected readonly fieldMessage = fieldMessage;
+  private readonly focusInvalid = injectInvalidFocus();
 
   protected async signIn(): Promise<void> {
     this.problem.set(null);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      this.focusInvalid();
       return;
     }
     this.busy.set(true);
@@ -54,6 +57,7 @@ export class SignInPage {
       void this.notifier.tell(`Signed in as ${me.displayName}.`, undefined, 4000);
     } catch (error) {
       this.problem.set(formProblem(error, this.form, SIGN_IN_PROBLEMS));
+      this.focusInvalid();
     } finally {
       this.busy.set(false);
     }

@@ -11,6 +11,7 @@ import { ConfigStore } from '../../../core/config/config-store';
 import { contractValidator } from '../../../shared/forms/contract-validator';
 import { fieldMessage } from '../../../shared/forms/field-message';
 import { formProblem } from '../../../shared/forms/form-problem';
+import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 import { AccountApi } from '../account-api';
 
 @Component({
@@ -36,11 +37,13 @@ export class SignUpPage {
   /** The address the verification mail went to, once the account exists. */
   protected readonly sentTo = signal<string | null>(null);
   protected readonly fieldMessage = fieldMessage;
+  private readonly focusInvalid = injectInvalidFocus();
 
   protected async signUp(): Promise<void> {
     this.problem.set(null);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
+      this.focusInvalid();
       return;
     }
     this.busy.set(true);
@@ -50,6 +53,7 @@ export class SignUpPage {
       this.sentTo.set(body.email.trim());
     } catch (error) {
       this.problem.set(formProblem(error, this.form, { conflict: 'That e-mail address cannot be used for a new account. If it is yours, sign in or reset the password.' }));
+      this.focusInvalid();
     } finally {
       this.busy.set(false);
     }
