@@ -40,6 +40,14 @@ describe('planCut on the demo bar', () => {
     expect(plan.totalMinutes).toBeLessThanOrEqual(40);
   });
 
+  it('lands in the same ranges with the engine\'s own profile (common practice)', () => {
+    expect(planCut(EXAMPLE_DESIGN).totalMinutes).toBeGreaterThanOrEqual(30);
+    expect(planCut(EXAMPLE_DESIGN).totalMinutes).toBeLessThanOrEqual(40);
+    const trial = planCut(withMaterialDefaults(EXAMPLE_DESIGN, 'acrylic'));
+    expect(trial.totalMinutes).toBeGreaterThanOrEqual(0.5);
+    expect(trial.totalMinutes).toBeLessThanOrEqual(1.5);
+  });
+
   it('takes about a minute as an acrylic trial with the acrylic defaults (common practice)', () => {
     const trial = planCut(withMaterialDefaults(EXAMPLE_DESIGN, 'acrylic'), demoProfile);
     expect(trial.passes).toBeLessThanOrEqual(2);

@@ -20,7 +20,7 @@ interface Move {
 function replay(text: string) {
   const state = { motion: 'G0' as 'G0' | 'G1', x: NaN, y: NaN, z: NaN, feed: NaN, units: '', absolute: false, spindle: 0, ended: false };
   const moves: Move[] = [];
-  for (const { words } of parseStringSync(text) as Array<{ words: Array<[string, number]> }>) {
+  for (const { words } of parseStringSync(text)) {
     let moved = false;
     for (const [letter, value] of words) {
       if (letter === 'G' && (value === 0 || value === 1)) state.motion = value === 0 ? 'G0' : 'G1';

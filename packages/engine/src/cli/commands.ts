@@ -1,0 +1,121 @@
+import { MM_PER_INCH, type Design } from '@barwright/contracts';
+import { planCut } from '../cut-plan';
+import { EXPORT_FORMATS, exportDesign, type ExportFormat } from '../export/index';
+import { computeLineStudy } from '../line-study';
+import { lineStudySvg } from '../line-study-svg';
+import { computeProfile } from '../profile';
+import { UsageError } from './design-file';
+import { fileUnits, planInFileUnits, profileInFileUnits } from './file-units';
+import { jsonText } from './json-text';
+
+/** What a command may do to the outside world. */
+export interface CommandIo {
+  stdout(text: string): void;
+  writeFile(path: string, content: string | Uint8Array): Promise<void>;
+}
+
+export type OptionValues = Record<string, string | boolean | undefined>;
+
+export interface Command {
+  summary: string;
+  usage: string;
+  details: string;
+  options: Record<string, { type: 'string' | 'boolean' }>;
+  run(design: Design, values: OptionValues, io: CommandIo): Promise<void>;
+}
+
+/** Finest sampling the CLI accepts, mm: finer only costs time. */
+export const MIN_STEP_MM = 0.001;
+
+const profileCommand: Command = {
+  summary: 'the cutter path, bar edge and follower path as JSON',
+  usage: 'barwright profile FILE [--step S]',
+  details: [
+    'Prints { units, period, cutterPath, barEdge, followerPath, minRadiusOfCurvature, warnings }.',
+    'Paths are [[x, y], ...]: x along the bar, y the height, 0 at the cutter path\'s lowest point.',
+    '  --step S   sampling interval along x, in the file\'s units (default: fine enough for 0.1 % of the amplitude)',
+  ].join('\n'),
+  options: { step: { type: 'string' } },
+  async run(design, values, io) {
+    const step = stepInMm(design, values.step);
+    const profile = computeProfile(design, step === undefined ? {} : { step });
+    io.stdout(jsonText(profileInFileUnits(profile, fileUnits(design.units))) + '\n');
+  },
+};
+
+const studyCommand: Command = {
+  summary: 'the line study\'s engraved lines as JSON, or their SVG drawing',
+  usage: 'barwright study FILE [--svg OUT]',
+  details: [
+    'Prints { units, spacing, width, length, lines: [{ index, phase, points }] } (phase: a fraction of one period).',
+    '  --svg OUT   write the drawing of the lines to OUT instead',
+  ].join('\n'),
+  options: { svg: { type: 'string' } },
+  async run(design, values, io) {
+    const study = computeLineStudy(design);
+    if (typeof values.svg === 'string') {
+      await io.writeFile(values.svg, lineStudySvg(study));
+      io.stdout(`wrote ${values.svg}\n`);
+      return;
+    }
+    const u = fileUnits(design.units);
+    const lines = study.lines.map((line) => ({ index: line.index, phase: line.phase, points: u.points(line.points) }));
+    io.stdout(jsonText({ units: design.units, spacing: u.length(study.spacing), width: u.length(study.width), length: u.length(study.length), lines }) + '\n');
+  },
+};
+
+const planCommand: Command = {
+  summary: 'the cut plan: depth, passes, time, speeds, warnings and cautions, as JSON',
+  usage: 'barwright plan FILE',
+  details: [
+    'Prints { units, material, surfaceSpeed, depth, passes, minutesPerPass, totalMinutes, rpm, feedPerMinute,',
+    'chipLoad, stepOver, warnings, reminders, cautions, heatTreatment? }. Lengths in the file\'s units,',
+    'feedPerMinute in the file\'s units per minute, surfaceSpeed in m/min.',
+  ].join('\n'),
+  options: {},
+  async run(design, _values, io) {
+    io.stdout(jsonText(planInFileUnits(planCut(design), fileUnits(design.units))) + '\n');
+  },
+};
+
+const exportCommand: Command = {
+  summary: 'write the bar as svg, dxf, gcode, csv or pdf',
+  usage: 'barwright export FILE --format svg|dxf|gcode|csv|pdf [--out OUT]',
+  details: [
+    '  --format F   svg: bar outline at 1:1 in mm; dxf: R12 drawing; gcode: RS274NGC program of the passes;',
+    '               csv: the profile; pdf: a 1:1 printable template with the cut plan',
+    '  --out OUT    file to write (default bar.svg, bar.dxf, bar.nc, bar.csv or bar.pdf)',
+    'DXF, G-code and CSV are in the file\'s units.',
+  ].join('\n'),
+  options: { format: { type: 'string' }, out: { type: 'string' } },
+  async run(design, values, io) {
+    const format = values.format;
+    if (typeof format !== 'string') throw new UsageError(`export needs --format ${EXPORT_FORMATS.join('|')}`);
+    if (!(EXPORT_FORMATS as readonly string[]).includes(format)) {
+      throw new UsageError(`--format: must be one of ${EXPORT_FORMATS.join(', ')} (got "${format}")`);
+    }
+    const file = await exportDesign(design, format as ExportFormat);
+    const out = typeof values.out === 'string' ? values.out : file.filename;
+    await io.writeFile(out, file.content);
+    io.stdout(`wrote ${out} (${file.mime}, ${file.content.length} ${typeof file.content === 'string' ? 'characters' : 'bytes'})\n`);
+  },
+};
+
+export const COMMANDS: Readonly<Record<string, Command>> = {
+  profile: profileCommand,
+  study: studyCommand,
+  plan: planCommand,
+  export: exportCommand,
+};
+
+/** Reads --step (file units) as mm; undefined when absent. */
+function stepInMm(design: Design, raw: string | boolean | undefined): number | undefined {
+  if (raw === undefined || typeof raw === 'boolean') return undefined;
+  const value = Number(raw);
+  const perUnit = design.units === 'in' ? MM_PER_INCH : 1;
+  const minimum = MIN_STEP_MM / perUnit;
+  if (raw.trim() === '' || !Number.isFinite(value) || value < minimum || value > design.bar.length) {
+    throw new UsageError(`--step: must be a number between ${+minimum.toFixed(6)} and ${design.bar.length} ${design.units} (got "${raw}")`);
+  }
+  return value * perUnit;
+}
