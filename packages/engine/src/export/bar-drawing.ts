@@ -13,6 +13,8 @@ export interface BarDrawing {
   blankEdgeY: number;
   /** Height of the drawn back of the bar. The design fixes only the cut edge, so this is a drawing band. */
   backY: number;
+  /** Highest point drawn: the blank's edge or the cutter path, whichever is higher. */
+  topY: number;
   /** Closed outline: the edge left to right, then the back right to left. */
   outline: Point[];
 }
@@ -36,6 +38,7 @@ export function barDrawing(designMm: Design, profile: Profile): BarDrawing {
     cutterPath,
     blankEdgeY: top + designMm.plan.cleanup,
     backY,
+    topY: cutterPath.reduce((m, p) => Math.max(m, p[1]), top + designMm.plan.cleanup),
     outline: [...edge, [length, backY], [0, backY]],
   };
 }

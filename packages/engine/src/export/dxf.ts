@@ -30,7 +30,7 @@ export function barDxf(drawing: BarDrawing, units: Units): string {
   pair(20, num(drawing.backY));
   pair(9, '$EXTMAX');
   pair(10, num(drawing.length));
-  pair(20, num(drawing.blankEdgeY));
+  pair(20, num(drawing.topY));
   pair(0, 'ENDSEC');
 
   pair(0, 'SECTION');

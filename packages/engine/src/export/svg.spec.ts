@@ -38,4 +38,16 @@ describe('SVG export', () => {
     const path = points(svg.g.polyline.points);
     expect(largestGap(demoProfile.cutterPath, path)).toBeLessThan(DRAWING_TOLERANCE_MM + 1e-4);
   });
+
+  it('keeps everything drawn inside the page', async () => {
+    const { svg } = await parsedSvg();
+    const [, , width, height] = svg.viewBox.split(' ').map(Number);
+    const [tx, ty] = /translate\(([-\d.]+) ([-\d.]+)\)/.exec(svg.g.transform)!.slice(1).map(Number);
+    for (const [x, y] of [...points(svg.g.polygon.points), ...points(svg.g.polyline.points)]) {
+      expect(tx + x).toBeGreaterThanOrEqual(0);
+      expect(tx + x).toBeLessThanOrEqual(width);
+      expect(ty - y).toBeGreaterThanOrEqual(0);
+      expect(ty - y).toBeLessThanOrEqual(height);
+    }
+  });
 });

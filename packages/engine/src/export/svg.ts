@@ -14,8 +14,8 @@ const DECIMALS = 4;
 export function barSvg(drawing: BarDrawing, title: string): string {
   const m = SVG_MARGIN_MM;
   const width = drawing.length + 2 * m;
-  const height = drawing.blankEdgeY - drawing.backY + 2 * m;
-  const top = m + drawing.blankEdgeY;
+  const height = drawing.topY - drawing.backY + 2 * m;
+  const top = m + drawing.topY;
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<svg xmlns="http://www.w3.org/2000/svg" version="1.1" width="${fixed(width, DECIMALS)}mm" height="${fixed(height, DECIMALS)}mm" viewBox="0 0 ${fixed(width, DECIMALS)} ${fixed(height, DECIMALS)}">`,
