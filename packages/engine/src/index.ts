@@ -1,0 +1,23 @@
+// Public API of the engine. Each module adds its own lines; keep insertions small.
+export * from './types';
+export { toMm, fromMm, toMmValue } from './units';
+export { type WaveFn, layerWave, sineWave, pointedWave, flatWave, scallopWave, eccentricWave, fourierWave, measuredWave } from './waves';
+export { rosetteRadius, sampleRosette, sampleRevolution, rosetteRepeats, rosetteMinRadius } from './rosette';
+export { type RubberReading, readRubber, rubberReach } from './rubber';
+export { lowerDiscEnvelope, upperDiscEnvelope } from './disc-envelope';
+export { barEdge, cutterHeights, counterPhaseDesign, invertHeights } from './bar';
+export { followerPath } from './follower';
+export { rosetteCurvatureRadius, graphCurvatureRadius, minCrestRadius, detailLossWarnings } from './curvature';
+export { type BarGrid, barGrid, defaultStep } from './bar-grid';
+export { type ProfileOptions, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';
+export { type PeriodProfile, periodProfile } from './period-profile';
+export { type LineStudy, computeLineStudy, vGrooveWidth } from './line-study';
+export { linePhase, reducedPhase } from './phase-schedule';
+export { type LineStudySvgOptions, lineStudySvg } from './line-study-svg';
+export { EXPORT_FORMATS, type ExportFormat, type ExportedFile, type ExportOptions, exportDesign } from './export';
+export { type CutPlan, type CutPlanOptions, planCut, peakToValley, steepestSlope, LEAD_CLEARANCE_MM, RETURN_SPEED_FACTOR } from './cut-plan';
+export { type CutCheckInput, cutPlanWarnings } from './cut-plan-warnings';
+export { SAFETY_CAUTIONS, SHORT_CAUTION, setUpReminders } from './cut-plan-notes';
+export { type MaterialPreset, type CuttingFigures, MATERIAL_PRESETS, PRESET_CUTTER_DIAMETER_MM, cuttingFigures, withMaterialDefaults } from './materials';
+export { spindleRpm, spindleRpmFromSfm, sfmToMPerMin, feedPerMinute } from './spindle-speed';
+export { formatLength, LENGTH_DECIMALS } from './length-format';

@@ -1,0 +1,46 @@
+import type { Design } from '@barwright/contracts';
+import { barEdge, cutterHeights } from './bar';
+import { barGrid, type BarGrid } from './bar-grid';
+import { followerPath } from './follower';
+import { trackRubber } from './rubber-track';
+import { toMm } from './units';
+
+/**
+ * One period of an endless bar: cutter path, bar edge and follower path at x = i·h for i = 0 … M−1
+ * (mm), free of the bar's ends. Heights are relative to the cutter path's lowest point; the follower
+ * is also given relative to its own lowest point, as the engraved line reads it.
+ */
+export interface PeriodProfile {
+  grid: BarGrid;
+  cutter: Float64Array;
+  bar: Float64Array;
+  follower: Float64Array;
+  /** The follower path minus its lowest value. */
+  line: Float64Array;
+}
+
+export function periodProfile(design: Design, step?: number): PeriodProfile {
+  const mm = design.units === 'mm' ? design : toMm(design);
+  const grid = barGrid(mm, step);
+  const m = grid.perPeriod;
+  const track = trackRubber(mm, grid, 0, m - 1);
+  let sMin = Infinity;
+  for (const v of track.s) sMin = Math.min(sMin, v);
+  const cutter = cutterHeights(track.s, mm.motion.leverRatio, sMin);
+  const rc = mm.cutter.diameter / 2;
+  const rf = mm.follower.radius;
+  const bar = periodicEnvelope(cutter, Math.ceil(rc / grid.step) + 1, (y) => barEdge(y, grid.step, rc));
+  const follower = periodicEnvelope(bar, Math.ceil(rf / grid.step) + 1, (y) => followerPath(y, grid.step, rf));
+  let fMin = Infinity;
+  for (const v of follower) fMin = Math.min(fMin, v);
+  const line = follower.map((v) => v - fMin);
+  return { grid, cutter, bar, follower, line };
+}
+
+/** Applies a windowed envelope to a periodic sequence by wrapping `pad` samples round each end. */
+function periodicEnvelope(values: Float64Array, pad: number, envelope: (y: Float64Array) => Float64Array): Float64Array {
+  const m = values.length;
+  const wrapped = new Float64Array(m + 2 * pad);
+  for (let i = 0; i < wrapped.length; i++) wrapped[i] = values[((((i - pad) % m) + m) % m)];
+  return envelope(wrapped).slice(pad, pad + m);
+}

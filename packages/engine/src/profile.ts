@@ -1,0 +1,142 @@
+import type { Design } from '@barwright/contracts';
+import { barEdge, counterPhaseDesign, cutterHeights, invertHeights } from './bar';
+import { barGrid, nodeX, type BarGrid } from './bar-grid';
+import { detailLossWarnings, minCrestRadius } from './curvature';
+import { followerAt, followerPath } from './follower';
+import { rubberAt, trackRubber } from './rubber-track';
+import type { EngineWarning, Point, Profile } from './types';
+import { toMm } from './units';
+
+export interface ProfileOptions {
+  /** Sampling interval along x (mm); the grid uses the largest step not above it that divides the period. */
+  step?: number;
+  /** Compute a companion bar instead: shifted half a period, or mirrored top to bottom. */
+  companion?: 'counter-phase' | 'inverted';
+}
+
+/** The profile as typed arrays over the points x (mm): the nodes on the bar, then its end if off the grid. */
+export interface BarSamples {
+  grid: BarGrid;
+  x: Float64Array;
+  cutter: Float64Array;
+  bar: Float64Array;
+  follower: Float64Array;
+  minRadiusOfCurvature: number;
+  warnings: EngineWarning[];
+}
+
+/** Cutter path, bar edge and follower path of a validated design, in mm whatever the file's units. */
+export function computeProfile(design: Design, options: ProfileOptions = {}): Profile {
+  const samples = computeBarSamples(design, options);
+  const { x, cutter, bar, follower } = samples;
+  const points = (y: Float64Array): Point[] => {
+    const out: Point[] = [];
+    for (let i = 0; i < y.length; i++) out.push([x[i], y[i]]);
+    return out;
+  };
+  return {
+    period: samples.grid.period,
+    step: samples.grid.step,
+    cutterPath: points(cutter),
+    barEdge: points(bar),
+    followerPath: points(follower),
+    minRadiusOfCurvature: samples.minRadiusOfCurvature,
+    warnings: samples.warnings,
+  };
+}
+
+/** The counter-phase companion's profile (the bar shifted half a period). */
+export function counterPhaseProfile(design: Design, options: Omit<ProfileOptions, 'companion'> = {}): Profile {
+  return computeProfile(design, { ...options, companion: 'counter-phase' });
+}
+
+/** The inverted companion's profile (the cutter path mirrored top to bottom, then cut afresh). */
+export function invertedProfile(design: Design, options: Omit<ProfileOptions, 'companion'> = {}): Profile {
+  return computeProfile(design, { ...options, companion: 'inverted' });
+}
+
+/** The same computation as `computeProfile`, returning typed arrays (for batches and exports). */
+export function computeBarSamples(design: Design, options: ProfileOptions = {}): BarSamples {
+  const mm = design.units === 'mm' ? design : toMm(design);
+  const d = options.companion === 'counter-phase' ? counterPhaseDesign(mm) : mm;
+  const grid = barGrid(d, options.step);
+  const { step: h, lastNode } = grid;
+  const rc = d.cutter.diameter / 2;
+  const rf = d.follower.radius;
+  const margin = Math.ceil(rc / h) + 1; // the cutter runs past both ends of the bar
+  const track = trackRubber(d, grid, -margin, lastNode + 1 + margin);
+  const offGrid = !grid.endOnGrid;
+  const sEnd = offGrid ? rubberAt(d, grid, (2 * Math.PI * grid.length) / d.motion.travelPerRev) : NaN;
+  const onBar = track.s.subarray(margin, margin + lastNode + 1);
+  const sMin = Math.min(minOf(onBar), offGrid ? sEnd : Infinity);
+  let yExt = cutterHeights(track.s, d.motion.leverRatio, sMin);
+  let yEnd = d.motion.leverRatio * (sEnd - sMin);
+  if (options.companion === 'inverted') {
+    const yMax = Math.max(maxOf(yExt.subarray(margin, margin + lastNode + 1)), offGrid ? yEnd : -Infinity);
+    yExt = invertHeights(yExt, yMax);
+    yEnd = yMax - yEnd;
+  }
+  const edgeExt = barEdge(yExt, h, rc);
+  const count = lastNode + 1 + (offGrid ? 1 : 0);
+  const x = new Float64Array(count);
+  for (let i = 0; i < count; i++) x[i] = i > lastNode ? grid.length : nodeX(grid, i);
+  const cutter = new Float64Array(count);
+  const bar = new Float64Array(count);
+  cutter.set(yExt.subarray(margin, margin + lastNode + 1));
+  bar.set(edgeExt.subarray(margin, margin + lastNode + 1));
+  if (offGrid) {
+    cutter[count - 1] = yEnd;
+    bar[count - 1] = addEndToEdge(bar, yExt, margin, grid, rc, yEnd);
+  }
+  const follower = followerOverBar(bar, x, grid, rf, offGrid);
+  const from = Math.min(lastNode, Math.ceil(rf / h) + 1);
+  const to = Math.max(from, lastNode - from);
+  const loss = detailLossWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period });
+  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to), warnings: [...track.warnings, ...loss] };
+}
+
+/**
+ * The bar's end point lies between nodes: its edge is eroded by brute force over the cutter nodes
+ * in reach, and the cutter at the end trims the nodes near it.
+ */
+function addEndToEdge(bar: Float64Array, yExt: Float64Array, margin: number, grid: BarGrid, rc: number, yEnd: number): number {
+  const { step: h, lastNode, length } = grid;
+  let edge = yEnd - rc;
+  for (let j = 0; j < yExt.length; j++) {
+    const dx = length - (j - margin) * h;
+    const reach = rc * rc - dx * dx;
+    if (reach < 0) continue;
+    edge = Math.min(edge, yExt[j] - Math.sqrt(reach));
+    const i = j - margin;
+    if (i >= 0 && i <= lastNode) bar[i] = Math.min(bar[i], yEnd - Math.sqrt(reach));
+  }
+  return edge;
+}
+
+/** The follower over the bar's own points, the end point (if off the grid) included by brute force. */
+function followerOverBar(bar: Float64Array, x: Float64Array, grid: BarGrid, rf: number, offGrid: boolean): Float64Array {
+  const nodes = grid.lastNode + 1;
+  const follower = new Float64Array(bar.length);
+  follower.set(followerPath(bar.subarray(0, nodes), grid.step, rf));
+  if (!offGrid) return follower;
+  const end = bar.length - 1;
+  for (let i = 0; i < nodes; i++) {
+    const dx = grid.length - x[i];
+    if (dx <= rf) follower[i] = Math.max(follower[i], bar[end] + Math.sqrt(rf * rf - dx * dx));
+  }
+  const near = Math.max(0, nodes - Math.ceil(rf / grid.step) - 2);
+  follower[end] = followerAt(grid.length, x.subarray(near), bar.subarray(near), rf);
+  return follower;
+}
+
+function minOf(values: Float64Array): number {
+  let m = Infinity;
+  for (const v of values) if (v < m) m = v;
+  return m;
+}
+
+function maxOf(values: Float64Array): number {
+  let m = -Infinity;
+  for (const v of values) if (v > m) m = v;
+  return m;
+}

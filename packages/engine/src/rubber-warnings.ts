@@ -1,0 +1,134 @@
+import type { Rubber } from '@barwright/contracts';
+import type { RubberReading } from './rubber';
+import type { EngineWarning } from './types';
+
+export interface RubberWarningInput {
+  /** Rosette radii with `pad` extra samples each side, as given to readRubber. */
+  radii: Float64Array;
+  pad: number;
+  reading: RubberReading;
+  rubber: Rubber;
+  dTheta: number;
+  /** Bar x of the first reading (mm) and bar travel per sample (mm). */
+  firstX: number;
+  step: number;
+  leverRatio: number;
+  /** Set when the readings are one period of a periodic sequence (period on the bar, mm). */
+  period?: number;
+}
+
+interface Region {
+  from: number;
+  to: number;
+  amount: number;
+}
+
+/**
+ * Where the rubber loses the rosette's detail, from where it rests (the contact of each reading):
+ * - a bridged valley: the contact jumps over profile points the rubber never touches; the amount is
+ *   the largest gap between those points and the rubber bridging them;
+ * - a rounded cusp (round rubber): the contact dwells on one point while the rubber swings about it
+ *   through the angle 2β between the flanks' normals; the amount is ρ·(sec β − 1), how far the
+ *   rubber's path stands below the sharp corner its flanks would make.
+ * Amounts are bar heights (mm, times the lever ratio); the smallest reported is 0.1 % of the
+ * readings' swing or 0.1 µm.
+ */
+export function rubberWarnings(input: RubberWarningInput): EngineWarning[] {
+  const { s, contact } = input.reading;
+  const n = s.length;
+  const length = input.period === undefined ? n : 2 * n; // a periodic sequence is scanned twice round
+  const ring = (i: number) => (input.period === undefined ? i : ((i % n) + n) % n);
+  const c = new Int32Array(length);
+  for (let i = 0; i < length; i++) c[i] = i + contact[i < n ? i : i - n];
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < n; i++) {
+    lo = Math.min(lo, s[i]);
+    hi = Math.max(hi, s[i]);
+  }
+  const threshold = Math.max(1e-4 / input.leverRatio, 1e-3 * (hi - lo));
+  const geometry = { ...input, ring, c };
+  const bridges = bridgedValleys(geometry, length).filter((r) => r.amount > threshold);
+  const cusps = input.rubber.shape === 'round' && input.rubber.radius > 0 ? roundedCusps(geometry, length, input.rubber.radius) : [];
+  return [
+    ...describe(keepOnce(bridges, n, input.period), input, 'valley-bridged'),
+    ...describe(keepOnce(cusps.filter((r) => r.amount > threshold), n, input.period), input, 'cusp-rounded'),
+  ];
+}
+
+type Geometry = RubberWarningInput & { ring: (i: number) => number; c: Int32Array };
+
+function bridgedValleys(g: Geometry, length: number): Region[] {
+  const regions: Region[] = [];
+  for (let i = 0; i + 1 < length; i++) {
+    if (g.c[i + 1] - g.c[i] < 2) continue;
+    let gap = 0;
+    for (let j = g.c[i] + 1; j < g.c[i + 1]; j++) gap = Math.max(gap, Math.min(gapTo(g, j, i), gapTo(g, j, i + 1)));
+    const last = regions[regions.length - 1];
+    if (last && g.c[i] <= last.to) [last.to, last.amount] = [g.c[i + 1], Math.max(last.amount, gap)];
+    else regions.push({ from: g.c[i], to: g.c[i + 1], amount: gap });
+  }
+  return regions;
+}
+
+/** How far profile point j stays from the rubber resting at reading i (rosette length units). */
+function gapTo(g: Geometry, j: number, i: number): number {
+  const r = g.radii[g.pad + g.ring(j)];
+  const si = g.reading.s[g.ring(i)];
+  const a = (j - i) * g.dTheta;
+  if (g.rubber.shape === 'flat') return si - r * Math.cos(a);
+  return Math.hypot(r * Math.cos(a) - si, r * Math.sin(a)) - g.rubber.radius;
+}
+
+function roundedCusps(g: Geometry, length: number, rho: number): Region[] {
+  const runs: { from: number; to: number }[] = [];
+  let start = 0;
+  for (let i = 1; i <= length; i++) {
+    if (i < length && g.c[i] === g.c[i - 1]) continue;
+    if (i - start >= 3) {
+      const last = runs[runs.length - 1];
+      if (last && start - last.to <= 2 && g.c[start] - g.c[last.to] <= 2) last.to = i - 1;
+      else runs.push({ from: start, to: i - 1 });
+    }
+    start = i;
+  }
+  return runs.map(({ from, to }) => {
+    const swing = normalAngle(g, to) - normalAngle(g, from);
+    return { from, to, amount: rho * (1 / Math.cos(Math.abs(swing) / 2) - 1) };
+  });
+}
+
+/** Direction (rad) from the contact point to the rubber's centre at reading i. */
+function normalAngle(g: Geometry, i: number): number {
+  const j = g.c[i];
+  const r = g.radii[g.pad + g.ring(j)];
+  const s = g.reading.s[g.ring(i)];
+  const a = (j - i) * g.dTheta; // contact angle relative to the ray at reading i
+  return i * g.dTheta + Math.atan2(-r * Math.sin(a), s - r * Math.cos(a));
+}
+
+/** For a periodic sequence scanned twice, keeps each region once (those starting in the middle period). */
+function keepOnce(regions: Region[], n: number, period: number | undefined): Region[] {
+  if (period === undefined) return regions;
+  return regions
+    .filter((r) => r.from >= n / 2 && r.from < n + n / 2)
+    .map((r) => ({ from: r.from % n, to: r.from % n + (r.to - r.from), amount: r.amount }));
+}
+
+function describe(regions: Region[], input: RubberWarningInput, code: 'valley-bridged' | 'cusp-rounded'): EngineWarning[] {
+  const repeat = input.period === undefined ? '' : `, and every ${round(input.period)} mm along the bar`;
+  return regions.map((r) => {
+    const amount = r.amount * input.leverRatio;
+    const at = { xFrom: input.firstX + r.from * input.step, xTo: input.firstX + r.to * input.step };
+    const where = `at x ${round(at.xFrom)}–${round(at.xTo)} mm${repeat}`;
+    const message =
+      code === 'valley-bridged'
+        ? `The rubber bridges a rosette valley narrower than itself ${where}: the bar misses ${round(amount)} mm of its depth.`
+        : `The rubber rounds a sharp rosette crest ${where}: the bar's crest stands ${round(amount)} mm below the sharp corner.`;
+    return { code, message, at, amount };
+  });
+}
+
+function round(v: number): number {
+  return +v.toFixed(4);
+}
