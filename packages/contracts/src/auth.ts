@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { unitsSchema } from './design';
 
 /** Request bodies and answers of the account and admin routes. */

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { emailSchema } from './auth';
 
 export const BOARD_ROLES = ['owner', 'editor', 'viewer'] as const;
