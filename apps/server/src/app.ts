@@ -15,6 +15,7 @@ import { securityHeaders } from './http/security-headers';
 import type { LocalSmtp } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { webAppRouter } from './web/web-app';
+import { openApiDocument } from './openapi/openapi-document';
 import { BoardAccessEvents } from './boards/board-access';
 import { boardsRouter, invitationsRouter } from './boards/boards-router';
 import { designsRouter } from './designs/designs-router';
@@ -77,6 +78,10 @@ export function createApp(deps: AppDeps): express.Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
+  const openapi = openApiDocument();
+  api.get('/openapi.json', (_req, res) => {
+    res.json(openapi);
+  });
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok', database: deps.databaseKind } satisfies Health);
   });

@@ -53,26 +53,28 @@ export const updateProfileBody = z
 export type UpdateProfileBody = z.input<typeof updateProfileBody>;
 
 /** `GET /api/auth/me`. */
-export interface Me {
-  id: string;
-  email: string;
-  displayName: string;
-  role: Role;
-  emailVerified: boolean;
-  units: 'mm' | 'in';
-}
+export const meSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  displayName: z.string(),
+  role: roleSchema,
+  emailVerified: z.boolean(),
+  units: unitsSchema,
+});
+export type Me = z.infer<typeof meSchema>;
 
 /** A row of `GET /api/admin/users`. */
-export interface AdminUser {
-  id: string;
-  email: string;
-  displayName: string;
-  role: Role;
-  emailVerified: boolean;
-  suspended: boolean;
-  createdAt: string;
-  lastSignInAt: string | null;
-}
+export const adminUserSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  displayName: z.string(),
+  role: roleSchema,
+  emailVerified: z.boolean(),
+  suspended: z.boolean(),
+  createdAt: z.string(),
+  lastSignInAt: z.string().nullable(),
+});
+export type AdminUser = z.infer<typeof adminUserSchema>;
 
 export const adminUpdateUserBody = z
   .strictObject({ role: roleSchema.optional(), suspended: z.boolean({ error: 'must be true or false' }).optional() })
@@ -80,23 +82,20 @@ export const adminUpdateUserBody = z
 export type AdminUpdateUserBody = z.input<typeof adminUpdateUserBody>;
 
 /** A message kept by the local fake SMTP server, `GET /api/dev/mailbox`. */
-export interface MailboxMessage {
-  id: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-  sentAt: string;
-}
+export const mailboxMessageSchema = z.object({
+  id: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string(),
+  sentAt: z.string(),
+});
+export type MailboxMessage = z.infer<typeof mailboxMessageSchema>;
 
 /** `GET /api/health`. */
-export interface Health {
-  status: 'ok';
-  database: 'pglite' | 'postgres';
-}
+export const healthSchema = z.object({ status: z.literal('ok'), database: z.enum(['pglite', 'postgres']) });
+export type Health = z.infer<typeof healthSchema>;
 
 /** `GET /api/config`: what the web app needs to know about the server it talks to. */
-export interface ClientConfig {
-  localMail: boolean;
-  demo: boolean;
-}
+export const clientConfigSchema = z.object({ localMail: z.boolean(), demo: z.boolean() });
+export type ClientConfig = z.infer<typeof clientConfigSchema>;

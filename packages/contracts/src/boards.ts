@@ -29,57 +29,49 @@ export const createDesignBody = z.strictObject({
 export const updateDesignBody = z.strictObject({ title: name(DESIGN_TITLE_MAX) });
 export const createVersionBody = z.strictObject({ name: name(VERSION_NAME_MAX) });
 
-export interface BoardSummary {
-  id: string;
-  name: string;
-  role: BoardRole;
-  ownerName: string;
-  archived: boolean;
-  designCount: number;
-  updatedAt: string;
-}
+const boardRoleSchema = z.enum(BOARD_ROLES);
 
-export interface BoardMember {
-  userId: string;
-  displayName: string;
-  email: string;
-  role: BoardRole;
-}
+export const boardSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  role: boardRoleSchema,
+  ownerName: z.string(),
+  archived: z.boolean(),
+  designCount: z.number().int(),
+  updatedAt: z.string(),
+});
+export type BoardSummary = z.infer<typeof boardSummarySchema>;
 
-export interface BoardInvitation {
-  id: string;
-  email: string;
-  role: 'editor' | 'viewer';
-  expiresAt: string;
-  invitedBy: string;
-}
+export const boardMemberSchema = z.object({ userId: z.string(), displayName: z.string(), email: z.string(), role: boardRoleSchema });
+export type BoardMember = z.infer<typeof boardMemberSchema>;
 
-export interface DesignSummary {
-  id: string;
-  boardId: string;
-  title: string;
-  updatedAt: string;
+export const boardInvitationSchema = z.object({ id: z.string(), email: z.string(), role: inviteRoleSchema, expiresAt: z.string(), invitedBy: z.string() });
+export type BoardInvitation = z.infer<typeof boardInvitationSchema>;
+
+export const designSummarySchema = z.object({
+  id: z.string(),
+  boardId: z.string(),
+  title: z.string(),
+  updatedAt: z.string(),
   /** Set while a deleted design waits out its 30 days; restorable until `purgeAt`. */
-  deletedAt: string | null;
-  purgeAt: string | null;
-}
+  deletedAt: z.string().nullable(),
+  purgeAt: z.string().nullable(),
+});
+export type DesignSummary = z.infer<typeof designSummarySchema>;
 
-export interface BoardDetail extends BoardSummary {
-  members: BoardMember[];
+export const boardDetailSchema = boardSummarySchema.extend({
+  members: z.array(boardMemberSchema),
   /** Open invitations; only the owner sees them. */
-  invitations: BoardInvitation[];
-  designs: DesignSummary[];
-}
+  invitations: z.array(boardInvitationSchema),
+  designs: z.array(designSummarySchema),
+});
+export type BoardDetail = z.infer<typeof boardDetailSchema>;
 
-export interface DesignVersion {
-  id: string;
-  name: string;
-  authorName: string;
-  createdAt: string;
-}
+export const boardListSchema = z.object({ mine: z.array(boardSummarySchema), shared: z.array(boardSummarySchema) });
+
+export const designVersionSchema = z.object({ id: z.string(), name: z.string(), authorName: z.string(), createdAt: z.string() });
+export type DesignVersion = z.infer<typeof designVersionSchema>;
 
 /** `GET /api/designs/:id/meta`: what the editor needs besides the document. */
-export interface DesignMeta extends DesignSummary {
-  boardName: string;
-  role: BoardRole;
-}
+export const designMetaSchema = designSummarySchema.extend({ boardName: z.string(), role: boardRoleSchema });
+export type DesignMeta = z.infer<typeof designMetaSchema>;
