@@ -43,6 +43,8 @@ export interface AppDeps {
   accessEvents?: BoardAccessEvents;
   /** Closes the open sockets of a design (it was deleted); the realtime gateway provides it. */
   closeDesignSockets?: (designId: string) => void;
+  /** Closes every open socket of a user (suspended); the realtime gateways provide it. */
+  closeUserSockets?: (userId: string) => void;
 }
 
 /** What main.ts needs besides the handler: the same session parser for the socket upgrade. */
@@ -98,7 +100,7 @@ export function createApp(deps: AppDeps): express.Express {
     res.json({ localMail: Boolean(deps.localSmtp), demo: Boolean(deps.demo) } satisfies ClientConfig);
   });
   api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies }));
-  api.use('/admin', adminRouter({ db: deps.db, sessionStore }));
+  api.use('/admin', adminRouter({ db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}) }));
   const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log };
   api.use('/boards', boardsRouter(boardDeps));
   api.use('/invitations', invitationsRouter(boardDeps));

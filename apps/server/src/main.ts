@@ -30,6 +30,7 @@ async function main() {
   const app = createApp({
     accessEvents,
     closeDesignSockets: (designId) => gateway?.closeWhere((c) => c.designId === designId, CLOSE_CODES.forbidden, 'design deleted'),
+    closeUserSockets: (userId) => gateway?.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended'),
     db: database.db,
     databaseKind: database.kind,
     mailer,

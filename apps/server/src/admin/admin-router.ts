@@ -17,7 +17,7 @@ export function requireRole(...roles: Role[]): RequestHandler {
   };
 }
 
-export function adminRouter(deps: { db: Db; sessionStore: DatabaseSessionStore }): Router {
+export function adminRouter(deps: { db: Db; sessionStore: DatabaseSessionStore; closeUserSockets: (userId: string) => void }): Router {
   const router = Router();
   router.use(requireRole('admin'));
   router.get('/users', async (_req, res) => {
@@ -36,7 +36,10 @@ export function adminRouter(deps: { db: Db; sessionStore: DatabaseSessionStore }
     if (body.role) changes.role = body.role;
     if (body.suspended !== undefined) changes.suspendedAt = body.suspended ? (target.suspendedAt ?? new Date()) : null;
     const [row] = await deps.db.update(users).set(changes).where(eq(users.id, target.id)).returning();
-    if (body.suspended) await deps.sessionStore.destroyUserSessions(target.id);
+    if (body.suspended) {
+      await deps.sessionStore.destroyUserSessions(target.id);
+      deps.closeUserSockets(target.id);
+    }
     res.json(toAdminUser(row));
   });
   return router;

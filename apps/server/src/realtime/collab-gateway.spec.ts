@@ -27,7 +27,10 @@ describe('collaboration gateway', () => {
   beforeAll(async () => {
     database = await openTestDatabase('pglite');
     const accessEvents = new BoardAccessEvents();
-    server = await startTestServer(database, { accessEvents });
+    server = await startTestServer(database, {
+      accessEvents,
+      closeUserSockets: (userId) => gateway.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended'),
+    });
     httpServer = http.createServer(server.app);
     gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, log: () => {} });
     gateway.attach(httpServer);
@@ -116,6 +119,18 @@ describe('collaboration gateway', () => {
     const closed = e.closed();
     await owner.send('delete', `/api/boards/${boardId}/members/${user.id}`);
     expect((await closed).code).toBe(CLOSE_CODES.forbidden);
+  });
+
+  it('closes a suspended member\'s sockets at once', async () => {
+    const { user, cookie } = await member('su@example.test', 'editor');
+    await makeUser(database, 'boss@example.test', 'admin');
+    const admin = new Client(server.app);
+    await admin.signIn('boss@example.test');
+    const e = open(cookie);
+    await e.synced();
+    const closed = e.closed();
+    expect((await admin.patch(`/api/admin/users/${user.id}`, { suspended: true })).status).toBe(200);
+    expect((await closed).code).toBe(CLOSE_CODES.unauthorized);
   });
 
   it('converges with 20 clients making random concurrent edits through random disconnects', async () => {
