@@ -1,7 +1,8 @@
 import type { Design } from '@barwright/contracts';
 import { barEdge, counterPhaseDesign, cutterHeights, invertHeights } from './bar';
 import { barGrid, nodeX, type BarGrid } from './bar-grid';
-import { detailLossWarnings, minCrestRadius } from './curvature';
+import { minCrestRadius } from './curvature';
+import { detailLossWarnings } from './detail-loss';
 import { followerAt, followerPath } from './follower';
 import { rubberAt, trackRubber } from './rubber-track';
 import type { EngineWarning, Point, Profile } from './types';
@@ -89,10 +90,11 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
     bar[count - 1] = addEndToEdge(bar, yExt, margin, grid, rc, yEnd);
   }
   const follower = followerOverBar(bar, x, grid, rf, offGrid);
-  const from = Math.min(lastNode, Math.ceil(rf / h) + 1);
+  // The loss analysis reads the follower up to |rf − rc| to the side: keep it clear of the bar's ends.
+  const from = Math.min(lastNode, Math.ceil((rf + Math.abs(rf - rc)) / h) + 2);
   const to = Math.max(from, lastNode - from);
   const loss = detailLossWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period });
-  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to), warnings: [...track.warnings, ...loss] };
+  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to, Math.min(10, grid.perPeriod / 50)), warnings: [...track.warnings, ...loss] };
 }
 
 /**

@@ -29,7 +29,8 @@ interface Region {
  *   the largest gap between those points and the rubber bridging them;
  * - a rounded cusp (round rubber): the contact dwells on one point while the rubber swings about it
  *   through the angle 2β between the flanks' normals; the amount is ρ·(sec β − 1), how far the
- *   rubber's path stands below the sharp corner its flanks would make.
+ *   rubber's path stands below the sharp corner its flanks would make (for a valley bridged by a
+ *   round rubber touching two straight flanks, the same formula gives the gap).
  * Amounts are bar heights (mm, times the lever ratio); the smallest reported is 0.1 % of the
  * readings' swing or 0.1 µm.
  */
@@ -80,31 +81,37 @@ function gapTo(g: Geometry, j: number, i: number): number {
   return Math.hypot(r * Math.cos(a) - si, r * Math.sin(a)) - g.rubber.radius;
 }
 
+/**
+ * Runs of readings resting on the same profile point; a zone is a chain of such runs (of two or more
+ * readings, on neighbouring points) holding at least one of three or more. Its swing is the turn of
+ * the sampled profile's edge normals across the zone's points, exact for a corner on the samples.
+ */
 function roundedCusps(g: Geometry, length: number, rho: number): Region[] {
-  const runs: { from: number; to: number }[] = [];
+  const zones: { from: number; to: number; long: boolean }[] = [];
   let start = 0;
   for (let i = 1; i <= length; i++) {
     if (i < length && g.c[i] === g.c[i - 1]) continue;
-    if (i - start >= 3) {
-      const last = runs[runs.length - 1];
-      if (last && start - last.to <= 2 && g.c[start] - g.c[last.to] <= 2) last.to = i - 1;
-      else runs.push({ from: start, to: i - 1 });
-    }
+    const size = i - start;
+    const last = zones[zones.length - 1];
+    if (size >= 2 && last && last.to === start - 1 && g.c[start] - g.c[last.to] === 1) [last.to, last.long] = [i - 1, last.long || size >= 3];
+    else if (size >= 2) zones.push({ from: start, to: i - 1, long: size >= 3 });
     start = i;
   }
-  return runs.map(({ from, to }) => {
-    const swing = normalAngle(g, to) - normalAngle(g, from);
-    return { from, to, amount: rho * (1 / Math.cos(Math.abs(swing) / 2) - 1) };
-  });
+  return zones
+    .filter((z) => z.long)
+    .map(({ from, to }) => {
+      const swing = edgeNormal(g, g.c[to]) - edgeNormal(g, g.c[from] - 1);
+      return { from, to, amount: rho * (1 / Math.cos(Math.abs(swing) / 2) - 1) };
+    });
 }
 
-/** Direction (rad) from the contact point to the rubber's centre at reading i. */
-function normalAngle(g: Geometry, i: number): number {
-  const j = g.c[i];
-  const r = g.radii[g.pad + g.ring(j)];
-  const s = g.reading.s[g.ring(i)];
-  const a = (j - i) * g.dTheta; // contact angle relative to the ray at reading i
-  return i * g.dTheta + Math.atan2(-r * Math.sin(a), s - r * Math.cos(a));
+/** Direction (rad) of the outward normal of the sampled profile's edge from point j to j + 1. */
+function edgeNormal(g: Geometry, j: number): number {
+  const r0 = g.radii[g.pad + g.ring(j)];
+  const r1 = g.radii[g.pad + g.ring(j + 1)];
+  const tx = r1 * Math.cos(g.dTheta) - r0;
+  const ty = r1 * Math.sin(g.dTheta);
+  return j * g.dTheta + Math.atan2(-tx, ty);
 }
 
 /** For a periodic sequence scanned twice, keeps each region once (those starting in the middle period). */

@@ -1,0 +1,53 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { lowerDiscEnvelope, upperDiscEnvelope } from './disc-envelope';
+
+/** The definition, by brute force: min over the samples within reach of y_j − √(r² − d²). */
+function bruteErosion(y: ArrayLike<number>, step: number, r: number): number[] {
+  return Array.from(y, (_, i) => {
+    let m = Infinity;
+    for (let j = 0; j < y.length; j++) {
+      const d = (i - j) * step;
+      if (Math.abs(d) <= r) m = Math.min(m, y[j] - Math.sqrt(r * r - d * d));
+    }
+    return m;
+  });
+}
+
+const curve = fc.array(fc.double({ min: -3, max: 3, noNaN: true }), { minLength: 1, maxLength: 300 });
+
+describe('disc envelopes', () => {
+  it('erosion equals its definition for any samples, step and radius', () => {
+    fc.assert(
+      fc.property(curve, fc.double({ min: 0.005, max: 0.5, noNaN: true }), fc.double({ min: 0, max: 4, noNaN: true }), (values, step, radius) => {
+        const y = Float64Array.from(values);
+        const fast = lowerDiscEnvelope(y, step, radius);
+        bruteErosion(y, step, radius).forEach((v, i) => expect(Math.abs(fast[i] - v)).toBeLessThan(1e-9));
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it('dilation is the mirror of erosion', () => {
+    fc.assert(
+      fc.property(curve, fc.double({ min: 0.01, max: 0.2, noNaN: true }), fc.double({ min: 0, max: 2, noNaN: true }), (values, step, radius) => {
+        const y = Float64Array.from(values);
+        const up = upperDiscEnvelope(y, step, radius);
+        bruteErosion(y.map((v) => -v), step, radius).forEach((v, i) => expect(Math.abs(up[i] + v)).toBeLessThan(1e-9));
+      }),
+      { numRuns: 100 },
+    );
+  });
+
+  it('is the identity for radius 0, and a flat line drops by the radius', () => {
+    const y = Float64Array.from([1, 2, 3]);
+    expect(Array.from(lowerDiscEnvelope(y, 0.1, 0))).toEqual([1, 2, 3]);
+    expect(Array.from(lowerDiscEnvelope(new Float64Array(50).fill(2), 0.01, 0.3))).toEqual(new Array(50).fill(1.7));
+  });
+
+  it('opening (erode then dilate by the same disc) never rises above the curve and keeps what the disc fits', () => {
+    const y = Float64Array.from({ length: 2000 }, (_, i) => 0.5 * Math.cos(i * 0.01) + 0.1 * Math.abs(Math.sin(i * 0.004)));
+    const opened = upperDiscEnvelope(lowerDiscEnvelope(y, 0.01, 0.5), 0.01, 0.5);
+    opened.forEach((v, i) => expect(v).toBeLessThanOrEqual(y[i] + 1e-12));
+  });
+});
