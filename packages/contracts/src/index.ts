@@ -3,3 +3,14 @@ export * from './api-error';
 export * from './auth';
 export * from './boards';
 export * from './design-presets';
+// The community: publishing, explore, ratings, comments, remix, shop log, notifications.
+export * from './entries';
+export * from './ratings';
+export * from './comments';
+export * from './comment-html';
+export * from './remix';
+export * from './design-diff';
+export * from './shop-log';
+export * from './measured-rosette';
+export * from './notifications';
+export * from './socket-events';
