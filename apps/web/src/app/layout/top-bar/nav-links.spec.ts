@@ -6,4 +6,8 @@ describe('navLinksFor', () => {
     expect(navLinksFor({ isAdmin: false, localMail: false }).map((l) => l.label)).toEqual(['Home']);
     expect(navLinksFor({ isAdmin: true, localMail: true }).map((l) => l.label)).toEqual(['Home', 'People', 'Mailbox']);
   });
+
+  it('shows Boards to signed-in members only', () => {
+    expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Boards']);
+  });
 });

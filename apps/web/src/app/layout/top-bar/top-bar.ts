@@ -32,5 +32,5 @@ export class TopBar {
     { initialValue: false },
   );
 
-  protected readonly links = computed(() => navLinksFor({ isAdmin: this.auth.isAdmin(), localMail: this.config.config().localMail }));
+  protected readonly links = computed(() => navLinksFor({ isAdmin: this.auth.isAdmin(), localMail: this.config.config().localMail, signedIn: this.auth.signedIn() }));
 }
