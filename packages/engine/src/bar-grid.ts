@@ -30,13 +30,13 @@ export interface BarGrid {
 const MAX_DEFAULT_SAMPLES = 150_000;
 
 /**
- * The default step: 1/1000 of the period, which bounds the amplitude error of the samples by 0.1 %
- * even at a sharp crest (the error there is at most slope·h/2 = A·h/P for a triangle), at most
- * 0.02 mm, and no finer than the bar length over 150 000.
+ * The default step: 1/2000 of the period, which bounds the height error of the samples by 0.1 %
+ * even with sharp crests and valleys (a triangle's sampled extreme misses by at most slope·h/2 =
+ * A·h/P, at each end), at most 0.02 mm, and no finer than the bar length over 150 000.
  */
 export function defaultStep(design: Design): number {
   const period = design.motion.travelPerRev / rosetteRepeats(design.rosette);
-  return Math.max(design.bar.length / MAX_DEFAULT_SAMPLES, Math.min(period / 1000, 0.02));
+  return Math.max(design.bar.length / MAX_DEFAULT_SAMPLES, Math.min(period / 2000, 0.02));
 }
 
 /** The grid for a millimetre design at (at most) the requested step. */

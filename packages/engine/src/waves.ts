@@ -34,6 +34,7 @@ export function flatWave(clip: number): WaveFn {
  */
 export function scallopWave(aspect: number): WaveFn {
   if (aspect >= 1) return (t) => 2 * Math.sqrt(Math.max(0, 1 - (wrapAngle(t) / Math.PI) ** 2)) - 1;
+  if (!(aspect > 1e-9)) return (t) => 1 - 2 * (wrapAngle(t) / Math.PI) ** 2; // a very shallow arc is a parabola
   const q = (1 + aspect * aspect) / (2 * aspect); // arc radius over half-width
   return (t) => {
     const u = wrapAngle(t) / Math.PI;
@@ -47,12 +48,13 @@ export function scallopWave(aspect: number): WaveFn {
  * reads r(θ) = e·cosθ + √(R0² − e²·sin²θ); w is (r − R0)/e so that r = R0 + e·w.
  */
 export function eccentricWave(baseRadius: number, eccentricity: number): WaveFn {
-  if (eccentricity <= 0) return sineWave;
+  if (!(eccentricity > 0)) return sineWave;
   const e2 = eccentricity * eccentricity;
   const r2 = baseRadius * baseRadius;
   return (t) => {
     const sin = Math.sin(t);
-    return (eccentricity * Math.cos(t) + Math.sqrt(r2 - e2 * sin * sin) - baseRadius) / eccentricity;
+    // (√(R0² − e²sin²θ) − R0)/e written as −e·sin²θ/(√(…) + R0), free of cancellation for small e
+    return Math.cos(t) - (eccentricity * sin * sin) / (Math.sqrt(r2 - e2 * sin * sin) + baseRadius);
   };
 }
 

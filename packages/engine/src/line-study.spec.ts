@@ -1,0 +1,123 @@
+import { EXAMPLE_DESIGN, type Design, type PhaseSchedule } from '@barwright/contracts';
+import { describe, expect, it } from 'vitest';
+import { computeLineStudy, vGrooveWidth } from './line-study';
+import { periodProfile } from './period-profile';
+import { linePhase } from './phase-schedule';
+import { computeProfile } from './profile';
+import type { Point } from './types';
+
+/** Height of a polyline at x, by linear interpolation. */
+function heightAt(points: Point[], x: number): number {
+  let k = 1;
+  while (k < points.length - 1 && points[k][0] < x) k++;
+  const [x0, y0] = points[k - 1];
+  const [x1, y1] = points[k];
+  return y0 + ((x - x0) / (x1 - x0)) * (y1 - y0);
+}
+
+function withSchedule(schedule: PhaseSchedule, patch: Partial<Design> = {}): Design {
+  return { ...EXAMPLE_DESIGN, ...patch, study: { ...EXAMPLE_DESIGN.study, schedule, lines: 12 } };
+}
+
+/** A lopsided wave (sin t + 0.45·sin 2t, a sawtooth-like lean), so that mirroring and shifting differ. */
+const LOPSIDED: Partial<Design> = {
+  rosette: { baseRadius: 50, layers: [{ lobes: 24, amplitude: 1.5, phase: 0, wave: { shape: 'fourier', terms: [{ k: 1, a: 0, b: 1 }, { k: 2, a: 0, b: 0.45 }] } }] },
+};
+
+describe('V-groove width', () => {
+  it('is w = 2·d·tan(α/2) (V-cutter geometry, common practice)', () => {
+    expect(vGrooveWidth(0.1, 120)).toBeCloseTo(0.2 * Math.sqrt(3), 12);
+    expect(vGrooveWidth(0.25, 90)).toBeCloseTo(0.5, 12);
+    expect(vGrooveWidth(0, 60)).toBe(0);
+    expect(computeLineStudy(EXAMPLE_DESIGN).width).toBeCloseTo(0.2 * Math.sqrt(3), 12);
+  });
+});
+
+describe('phase schedules', () => {
+  it('give the phase of line j as a fraction of the period', () => {
+    const phases = (s: PhaseSchedule) => Array.from({ length: 10 }, (_, j) => linePhase(s, j));
+    expect(phases({ kind: 'none' })).toEqual(new Array(10).fill(0));
+    expect(phases({ kind: 'alternate' })).toEqual([0, 0.5, 0, 0.5, 0, 0.5, 0, 0.5, 0, 0.5]);
+    expect(phases({ kind: 'ramp', steps: 4 })).toEqual([0, 0.125, 0.25, 0.375, 0.5, 0.375, 0.25, 0.125, 0, 0.125]);
+    expect(phases({ kind: 'twist', step: 0.1 })[7]).toBeCloseTo(0.7, 12);
+    expect(phases({ kind: 'list', phases: [0, 0.2, 0.7] })).toEqual([0, 0.2, 0.7, 0, 0.2, 0.7, 0, 0.2, 0.7, 0]);
+    const sine = phases({ kind: 'sine', period: 8, depth: 0.3 });
+    expect(sine[2]).toBeCloseTo(0.3, 12);
+    expect(sine[6]).toBeCloseTo(-0.3, 12);
+  });
+});
+
+describe('computeLineStudy', () => {
+  it('lays the lines at the spacing, as long as the bar, each from x = 0 to the bar length', () => {
+    const study = computeLineStudy(withSchedule({ kind: 'none' }));
+    expect(study.spacing).toBe(0.45);
+    expect(study.length).toBe(150);
+    expect(study.lines).toHaveLength(12);
+    study.lines.forEach((line, j) => {
+      expect(line.index).toBe(j);
+      expect(line.points[0][0]).toBe(0);
+      expect(line.points[line.points.length - 1][0]).toBe(150);
+      for (let k = 1; k < line.points.length; k++) expect(line.points[k][0]).toBeGreaterThan(line.points[k - 1][0]);
+      for (const x of [3.3, 70.1, 149]) expect(heightAt(line.points, x) - j * 0.45).toBeCloseTo(heightAt(study.lines[0].points, x), 9);
+    });
+  });
+
+  it('engraves the mirror of the follower path: Y_0(x) = F(−x), F from its lowest point', () => {
+    const design = withSchedule({ kind: 'none' }, LOPSIDED);
+    const study = computeLineStudy(design);
+    const profile = computeProfile(design, { step: 0.005 });
+    const fMin = Math.min(...profile.followerPath.slice(2000, 26000).map((p) => p[1]));
+    const P = profile.period;
+    for (const x of [0.7, 1.9, 3.3, 10.2, 50]) {
+      const mirrored = heightAt(profile.followerPath, 24 * P - x) - fMin; // F(−x) = F(kP − x)
+      expect(Math.abs(heightAt(study.lines[0].points, x) - mirrored)).toBeLessThan(0.01);
+    }
+    // mirroring is not a shift: the lopsided line does not match the bar read forwards at any phase
+    const forward = (x: number, shift: number) => heightAt(profile.followerPath, 40 + x + shift) - fMin;
+    const misfit = (shift: number) => Math.max(...[0.3, 0.8, 1.1, 1.7, 2.2, 2.9, 3.6, 4.0].map((x) => Math.abs(heightAt(study.lines[0].points, x) - forward(x, shift))));
+    expect(Math.min(...Array.from({ length: 100 }, (_, k) => misfit((k / 100) * P)))).toBeGreaterThan(0.03);
+  });
+
+  it('shifts line j by its phase Δ_j: alternate lines half a period apart (barleycorn)', () => {
+    const study = computeLineStudy(withSchedule({ kind: 'alternate' }, LOPSIDED));
+    const P = 100 / 24;
+    expect(study.lines[1].phase).toBe(0.5);
+    for (const x of [5, 20.25, 77]) {
+      // Y_1(x) = p + F(P/2 − x) = p + Y_0(x − P/2)
+      expect(heightAt(study.lines[1].points, x) - 0.45).toBeCloseTo(heightAt(study.lines[0].points, x - P / 2), 2);
+      expect(heightAt(study.lines[2].points, x) - 0.9).toBeCloseTo(heightAt(study.lines[0].points, x), 9);
+    }
+  });
+
+  it('reduces the reported phase to [0, 1) and follows a listed schedule', () => {
+    const study = computeLineStudy(withSchedule({ kind: 'list', phases: [0, -0.25, 1.5] }));
+    expect(study.lines.slice(0, 4).map((l) => l.phase)).toEqual([0, 0.75, 0.5, 0]);
+  });
+
+  it('keeps the shape within its drawing tolerance with a few dozen points a period', () => {
+    const design = withSchedule({ kind: 'twist', step: 0.07 });
+    const { line, grid } = periodProfile(design, 0.002);
+    const study = computeLineStudy(design);
+    const height = Math.max(...line);
+    const tolerance = Math.min(0.01, Math.max(5e-4, 0.01 * height));
+    for (const l of study.lines.slice(0, 4)) {
+      const shift = linePhase(design.study.schedule, l.index) * grid.period;
+      for (let x = 0.013; x < 150; x += 0.37) {
+        const u = shift - x;
+        const i = Math.round((u - Math.floor(u / grid.period) * grid.period) / grid.step) % grid.perPeriod;
+        expect(Math.abs(heightAt(l.points, x) - l.index * 0.45 - line[i])).toBeLessThan(tolerance + 0.003);
+      }
+      expect(l.points.length / 36).toBeLessThan(40);
+    }
+  });
+
+  it('draws 200 lines quickly (well under 100 ms here; the benchmark reports the real figure)', () => {
+    const design = { ...EXAMPLE_DESIGN, study: { ...EXAMPLE_DESIGN.study, lines: 200 } };
+    const profile = computeProfile(design, { step: 0.01 });
+    computeLineStudy(design, profile);
+    const t = performance.now();
+    const study = computeLineStudy(design, profile);
+    expect(performance.now() - t).toBeLessThan(100);
+    expect(study.lines).toHaveLength(200);
+  });
+});
