@@ -20,6 +20,10 @@ import { BoardAccessEvents } from './boards/board-access';
 import { boardsRouter, invitationsRouter } from './boards/boards-router';
 import { designsRouter } from './designs/designs-router';
 import { DesignDocStore } from './realtime/design-doc-store';
+// The community (publishing, Explore, ratings, comments, remix, shop log, notifications).
+import { createCommunity } from './community/community';
+import type { CommunityLimits } from './community/community-limits';
+import { NotificationEvents } from './notifications/notification-events';
 
 /** Idle and absolute session lifetimes. */
 export const SESSION_IDLE_MS = 7 * 24 * 3600_000;
@@ -45,12 +49,17 @@ export interface AppDeps {
   closeDesignSockets?: (designId: string) => void;
   /** Closes every open socket of a user (suspended); the realtime gateways provide it. */
   closeUserSockets?: (userId: string) => void;
+  /** The community: shared with the notification socket gateway; where photos are stored (DATA_DIR/uploads); lower limits for tests. */
+  notificationEvents?: NotificationEvents;
+  uploadsDir?: string;
+  communityLimits?: Partial<CommunityLimits>;
 }
 
 /** What main.ts needs besides the handler: the same session parser for the socket upgrade. */
 export interface AppLocals {
   sessionParser: express.RequestHandler;
   accessEvents: BoardAccessEvents;
+  notificationEvents: NotificationEvents;
 }
 
 /** Builds the Express app. It never listens: main.ts does, and tests call it through supertest. */
@@ -75,7 +84,11 @@ export function createApp(deps: AppDeps): express.Express {
 
   const app = express();
   app.disable('x-powered-by');
-  Object.assign(app.locals, { sessionParser, accessEvents } satisfies AppLocals);
+  const community = createCommunity({
+    db: deps.db, store, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.sessionSecret,
+    events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, log,
+  });
+  Object.assign(app.locals, { sessionParser, accessEvents, notificationEvents: community.events } satisfies AppLocals);
   app.use(securityHeaders(secureCookies));
 
   const api = express.Router();
@@ -101,10 +114,11 @@ export function createApp(deps: AppDeps): express.Express {
   });
   api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies }));
   api.use('/admin', adminRouter({ db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}) }));
-  const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log };
+  const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log, notifyInvited: community.notifier.invited.bind(community.notifier) };
   api.use('/boards', boardsRouter(boardDeps));
   api.use('/invitations', invitationsRouter(boardDeps));
   api.use('/designs', designsRouter({ db: deps.db, store, closeDesignSockets: deps.closeDesignSockets ?? (() => {}) }));
+  api.use(community.router);
   if (deps.localSmtp) api.use('/dev', mailboxRouter(deps.localSmtp));
   api.use(apiNotFound);
 

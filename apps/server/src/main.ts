@@ -1,4 +1,5 @@
 import http from 'node:http';
+import path from 'node:path';
 import { createApp, type AppLocals } from './app';
 import { BoardAccessEvents } from './boards/board-access';
 import { CLOSE_CODES } from '@barwright/contracts';
@@ -10,6 +11,9 @@ import { createMailer } from './mail/mailer';
 import { openConfiguredDatabase, sessionSecretFor } from './runtime';
 import { seedDemoScenario } from '../../../seeds/seed-demo';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../../seeds/demo-scenario';
+import { NotificationEvents } from './notifications/notification-events';
+import { NotifyGateway } from './notifications/notify-gateway';
+import { DIGEST_CHECK_MS, sendDueDigests } from './notifications/digests';
 
 const log = (line: string) => console.log(`[barwright] ${line}`);
 
@@ -27,22 +31,34 @@ async function main() {
 
   const accessEvents = new BoardAccessEvents();
   let gateway: CollabGateway | undefined;
+  let notify: NotifyGateway | undefined;
+  const notificationEvents = new NotificationEvents();
+  const sessionSecret = sessionSecretFor(config);
   const app = createApp({
     accessEvents,
     closeDesignSockets: (designId) => gateway?.closeWhere((c) => c.designId === designId, CLOSE_CODES.forbidden, 'design deleted'),
-    closeUserSockets: (userId) => gateway?.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended'),
+    closeUserSockets: (userId) => {
+      gateway?.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended');
+      notify?.disconnectUser(userId);
+    },
     db: database.db,
     databaseKind: database.kind,
     mailer,
     localSmtp,
-    sessionSecret: sessionSecretFor(config),
+    sessionSecret,
     publicUrl: config.publicUrl,
     webDist: config.webDist,
     demo: config.demoData,
+    notificationEvents,
+    uploadsDir: path.join(config.dataDir, 'uploads'),
   });
   const server = http.createServer(app);
   gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents });
   gateway.attach(server);
+  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents });
+  notify.attach(server);
+  const digests = setInterval(() => void sendDueDigests({ db: database.db, mailer, publicUrl: config.publicUrl, secret: sessionSecret }).catch(console.error), DIGEST_CHECK_MS);
+  digests.unref();
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve));
 
   const ms = Math.round(performance.now() - started);
@@ -60,6 +76,8 @@ async function main() {
     stopping = true;
     log(`${signal}: shutting down`);
     await gateway?.close();
+    clearInterval(digests);
+    notify?.close();
     server.closeAllConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     mailer.close();

@@ -18,6 +18,8 @@ export interface BoardsRouterDeps {
   publicUrl: string;
   accessEvents: BoardAccessEvents;
   log: (error: unknown) => void;
+  /** Tells an invitee who already has an account in the app too (the community's notifier). */
+  notifyInvited?: (input: { email: string; board: { id: string; name: string }; inviter: { id: string; displayName: string }; role: string }) => Promise<void>;
 }
 
 export function boardsRouter(deps: BoardsRouterDeps): Router {
@@ -58,6 +60,7 @@ export function boardsRouter(deps: BoardsRouterDeps): Router {
     const [board] = await db.select().from(boards).where(eq(boards.id, req.params.id));
     const url = `${deps.publicUrl}/boards/invitations/accept?token=${token}`;
     await deps.mailer.send(body.email, invitationMail(user.displayName, board.name, body.role, url)).catch(deps.log);
+    await deps.notifyInvited?.({ email: body.email, board: { id: board.id, name: board.name }, inviter: user, role: body.role });
     res.status(201).json({ id: invitation.id, email: invitation.email, role: invitation.role, expiresAt: invitation.expiresAt.toISOString(), invitedBy: user.displayName });
   });
   router.delete('/:id/invitations/:invitationId', async (req, res) => {

@@ -1,0 +1,71 @@
+import { and, arrayContains, count, desc, eq, getTableColumns, gte, isNull, lte, sql, type SQL } from 'drizzle-orm';
+import type { ExplorePage, ExploreQuery, ExploreSort } from '@barwright/contracts';
+import { entries, users } from '../../../../db/schema';
+import type { Db } from '../database/database';
+import { toEntryCard } from '../publishing/entry-views';
+
+/** Cutter sizes are stored as computed from inches too (4.7625 mm = 3/16 in): compare with a hair of slack. */
+const MM_SLACK = 1e-6;
+
+/** Everything a card shows; the text-search document stays in the database. */
+const { search: _search, ...cardColumns } = getTableColumns(entries);
+
+const tsQuery = (q: string) => sql`websearch_to_tsquery('english', ${q})`;
+
+/** The WHERE of a query: listed entries (not hidden, not deleted) matching every filter given. */
+export function exploreConditions(q: ExploreQuery): SQL {
+  const where: SQL[] = [isNull(entries.deletedAt), isNull(entries.hiddenAt)];
+  if (q.lobes !== undefined) where.push(eq(entries.lobes, q.lobes));
+  if (q.wave) where.push(eq(entries.wave, q.wave));
+  if (q.material) where.push(eq(entries.material, q.material));
+  if (q.cutterMin !== undefined) where.push(gte(entries.cutterDiameterMm, q.cutterMin - MM_SLACK));
+  if (q.cutterMax !== undefined) where.push(lte(entries.cutterDiameterMm, q.cutterMax + MM_SLACK));
+  if (q.tags?.length) where.push(arrayContains(entries.tags, q.tags));
+  if (q.author) where.push(eq(entries.authorId, q.author));
+  if (q.q) where.push(sql`${entries.search} @@ ${tsQuery(q.q)}`);
+  return and(...where)!;
+}
+
+/**
+ * Each sort matches one partial index of the entries table (see db/schema/community.ts), ending
+ * with the newest first and the id so that the order is total and pages never overlap.
+ */
+function orderFor(sort: ExploreSort, q: ExploreQuery): SQL[] {
+  const tail = [desc(entries.publishedAt), desc(entries.id)];
+  switch (sort) {
+    case 'top':
+      return [desc(entries.ratingScore), ...tail];
+    case 'remixed':
+      return [desc(entries.remixCount), ...tail];
+    case 'discussed':
+      return [desc(entries.commentCount), ...tail];
+    case 'relevance':
+      return [sql`ts_rank(${entries.search}, ${tsQuery(q.q ?? '')}) DESC`, ...tail];
+    case 'newest':
+      return tail;
+  }
+}
+
+export const sortOf = (q: ExploreQuery): ExploreSort => q.sort ?? (q.q ? 'relevance' : 'newest');
+
+/** One page of Explore, with the total over all pages. */
+export async function explorePage(db: Db, q: ExploreQuery): Promise<ExplorePage> {
+  const where = exploreConditions(q);
+  const sort = sortOf(q);
+  const rows = await db
+    .select({ entry: cardColumns, authorName: users.displayName })
+    .from(entries)
+    .innerJoin(users, eq(users.id, entries.authorId))
+    .where(where)
+    .orderBy(...orderFor(sort, q))
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
+  const [{ total }] = await db.select({ total: count() }).from(entries).where(where);
+  return {
+    items: rows.map((r) => toEntryCard(r.entry, { id: r.entry.authorId, displayName: r.authorName })),
+    total,
+    page: q.page,
+    pageSize: q.pageSize,
+    sort,
+  };
+}

@@ -1,0 +1,36 @@
+import type { Notification } from '@barwright/contracts';
+import type { NotificationRow } from '../../../../db/schema';
+
+const quoted = (title?: string) => `“${title ?? 'a bar'}”`;
+
+/** The sentence and the app link of a notification (pure; the words are kept from the moment it happened). */
+export function describeNotification(row: Pick<NotificationRow, 'kind' | 'data' | 'entryId'>): { text: string; link: string } {
+  const who = row.data.actorName ?? 'Someone';
+  const entryLink = `/entries/${row.entryId}`;
+  switch (row.kind) {
+    case 'remix':
+      return { text: `${who} remixed your bar ${quoted(row.data.entryTitle)}.`, link: entryLink };
+    case 'rating':
+      return { text: `${who} rated your bar ${quoted(row.data.entryTitle)}: ${row.data.stars} of 5 stars.`, link: entryLink };
+    case 'comment':
+      return { text: `${who} commented on your bar ${quoted(row.data.entryTitle)}.`, link: `${entryLink}#comments` };
+    case 'invitation':
+      return {
+        text: `${who} invited you to the board ${quoted(row.data.boardName)} as ${row.data.role === 'editor' ? 'an editor' : 'a viewer'}. Accept with the link in the invitation e-mail.`,
+        link: '/boards',
+      };
+  }
+}
+
+export function toNotification(row: NotificationRow): Notification {
+  return {
+    id: row.id,
+    kind: row.kind,
+    ...describeNotification(row),
+    actor: row.actorId ? { id: row.actorId, displayName: row.data.actorName ?? '' } : null,
+    entryId: row.entryId,
+    boardId: row.boardId,
+    read: row.readAt !== null,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
