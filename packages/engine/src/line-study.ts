@@ -26,13 +26,14 @@ interface Template {
 /**
  * Line j is Y_j(x) = j·p + F(Δ_j − x): the follower path F (relative to its lowest point) mirrored,
  * as the work moves against the bar, and shifted by the schedule's phase Δ_j. F is one period of an
- * endless bar (no end effects), decimated once to an error of 1 % of its height (0.5 µm to 10 µm,
- * below what a 1:1 print resolves),
- * so each line is that template laid end to end. Passing the profile reuses its sampling step.
+ * endless bar (no end effects), decimated once to an error of 2 % of its height (at most 0.02 mm,
+ * a tenth of a pixel on a whole-bar view and well inside the groove's stroke; at least 0.5 µm),
+ * so each line is that template laid end to end. A given profile (in mm, as computeProfile returns
+ * it; a companion's too) supplies that period when the bar holds one clear of its ends.
  */
 export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
   const mm = design.units === 'mm' ? design : toMm(design);
-  const template = lineTemplate(mm, profile?.step);
+  const template = lineTemplate(mm, profile);
   const { lineSpacing: spacing, lines: count, schedule, vAngle, depth } = mm.study;
   const length = mm.bar.length;
   const lines = Array.from({ length: count }, (_, index) => {
@@ -47,21 +48,50 @@ export function vGrooveWidth(depth: number, vAngle: number): number {
   return 2 * depth * Math.tan((vAngle * Math.PI) / 360);
 }
 
-function lineTemplate(design: Design, step: number | undefined): Template {
-  const { grid, line } = periodProfile(design, step);
-  const m = grid.perPeriod;
+function lineTemplate(design: Design, profile: Profile | undefined): Template {
+  const period = (profile && periodFromProfile(design, profile)) ?? periodFromDesign(design, profile?.step);
+  const { line, step } = period;
+  const m = line.length;
   const closed = new Float64Array(m + 1);
   closed.set(line);
   closed[m] = line[0];
   let top = 0;
   for (const v of line) top = Math.max(top, v);
-  const tolerance = Math.min(0.01, Math.max(5e-4, 0.01 * top));
+  const tolerance = Math.max(5e-4, Math.min(0.02, 0.02 * top));
   const keep = decimateGraph(closed, tolerance);
   return {
-    period: grid.period,
-    u: Float64Array.from(keep, (i) => i * grid.step),
+    period: m * step,
+    u: Float64Array.from(keep, (i) => i * step),
     v: Float64Array.from(keep, (i) => closed[i]),
   };
+}
+
+interface PeriodLine {
+  /** One period of the follower path from u = 0, minus its lowest value (mm). */
+  line: Float64Array;
+  step: number;
+}
+
+function periodFromDesign(design: Design, step: number | undefined): PeriodLine {
+  const { grid, line } = periodProfile(design, step);
+  return { line, step: grid.step };
+}
+
+/**
+ * One period of a given profile's follower path, so that a companion's profile draws its own
+ * study: taken from u = kP clear of the bar's ends (the path repeats exactly there), or undefined
+ * when the bar is too short for that.
+ */
+function periodFromProfile(design: Design, profile: Profile): PeriodLine | undefined {
+  const m = Math.round(profile.period / profile.step);
+  if (Math.abs(m * profile.step - profile.period) > 1e-9 * profile.period || m < 2) return undefined;
+  const margin = Math.ceil((design.cutter.diameter / 2 + design.follower.radius) / profile.step) + 2;
+  const start = m * Math.ceil(margin / m);
+  if (start + m + margin >= profile.followerPath.length) return undefined;
+  const line = Float64Array.from({ length: m }, (_, k) => profile.followerPath[start + k][1]);
+  let low = Infinity;
+  for (const v of line) low = Math.min(low, v);
+  return { line: line.map((v) => v - low), step: profile.step };
 }
 
 /** The template's height at u (mm, any real), linear between its vertices like the drawn polyline. */

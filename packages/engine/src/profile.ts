@@ -31,8 +31,8 @@ export function computeProfile(design: Design, options: ProfileOptions = {}): Pr
   const samples = computeBarSamples(design, options);
   const { x, cutter, bar, follower } = samples;
   const points = (y: Float64Array): Point[] => {
-    const out: Point[] = [];
-    for (let i = 0; i < y.length; i++) out.push([x[i], y[i]]);
+    const out: Point[] = new Array(y.length);
+    for (let i = 0; i < y.length; i++) out[i] = [x[i], y[i]];
     return out;
   };
   return {

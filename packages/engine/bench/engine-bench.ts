@@ -1,0 +1,114 @@
+/**
+ * Engine benchmark: `npm run bench -w packages/engine`. Prints the figures the issue asks for:
+ * profile + follower of a 150 mm bar at 0.01 mm beside clipper-lib computing the same envelopes,
+ * a line study of 200 lines, and 500 different designs (profile + study thumbnail data) on one core.
+ * Times are medians of repeated runs (the machine may be shared), after a warm-up.
+ */
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
+import { computeBarSamples, computeLineStudy, computeProfile, rosetteRepeats } from '../src/index';
+import { clipperEnvelopes, topHeights } from '../src/testing/clipper-envelope';
+
+function median(runs: number, work: () => unknown): { median: number; best: number } {
+  for (let i = 0; i < Math.min(20, runs); i++) work();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t = performance.now();
+    work();
+    times.push(performance.now() - t);
+  }
+  times.sort((a, b) => a - b);
+  return { median: times[Math.floor(runs / 2)], best: times[0] };
+}
+
+const ms = (v: number) => `${v.toFixed(2)} ms`;
+
+function profileFigures(): void {
+  const samples = computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 });
+  const profile = median(200, () => computeProfile(EXAMPLE_DESIGN, { step: 0.01 }));
+  const typed = median(200, () => computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 }));
+  console.log(`profile + follower, 150 mm bar at 0.01 mm (${samples.x.length} samples, cutter Ø ${EXAMPLE_DESIGN.cutter.diameter}):`);
+  console.log(`  computeProfile       median ${ms(profile.median)}, best ${ms(profile.best)}   (target < 5 ms)`);
+  console.log(`  typed arrays only    median ${ms(typed.median)}, best ${ms(typed.best)}`);
+
+  // The same envelopes with clipper-lib: the region below the cutter path offset by −rc, then +rf,
+  // arcs to 0.1 µm (our envelopes agree with Clipper's to about that).
+  const rc = EXAMPLE_DESIGN.cutter.diameter / 2;
+  const rf = EXAMPLE_DESIGN.follower.radius;
+  const t = performance.now();
+  const clipper = clipperEnvelopes(samples.x, samples.cutter, rc, rf, { arcTolerance: 1e-4 });
+  const clipperMs = performance.now() - t;
+  const follower = topHeights(clipper.follower, clipper.scale, samples.x);
+  const bar = topHeights(clipper.bar, clipper.scale, samples.x);
+  let worst = 0;
+  const margin = Math.ceil((2 * (rc + rf)) / samples.grid.step);
+  for (let i = margin; i < samples.x.length - margin; i++) {
+    worst = Math.max(worst, Math.abs(follower[i] - samples.follower[i]), Math.abs(bar[i] - samples.bar[i]));
+  }
+  console.log(`  clipper-lib offsets  ${ms(clipperMs)} (one run)   → engine is ${(clipperMs / profile.median).toFixed(0)}× faster`);
+  console.log(`  largest difference from clipper-lib (bar edge and follower, away from the ends): ${(worst * 1000).toFixed(3)} µm`);
+}
+
+function studyFigures(): void {
+  const design: Design = { ...EXAMPLE_DESIGN, study: { ...EXAMPLE_DESIGN.study, lines: 200 } };
+  const profile = computeProfile(design, { step: 0.01 });
+  const study = computeLineStudy(design, profile);
+  const points = study.lines.reduce((n, l) => n + l.points.length, 0);
+  const fromProfile = median(60, () => computeLineStudy(design, profile));
+  const fromDesign = median(60, () => computeLineStudy(design));
+  console.log(`line study, 200 lines of 150 mm (${points} points drawn):`);
+  console.log(`  with the profile's step  median ${ms(fromProfile.median)}, best ${ms(fromProfile.best)}   (target < 16 ms)`);
+  console.log(`  at the default step      median ${ms(fromDesign.median)}, best ${ms(fromDesign.best)}`);
+}
+
+/** 500 different designs from a fixed-seed generator: lobes, waves, rubbers, cutters, schedules. */
+function sweepDesigns(count: number): Design[] {
+  let seed = 12345;
+  const random = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+  const pick = <T>(items: readonly T[]) => items[Math.floor(random() * items.length)];
+  const waves: Design['rosette']['layers'][0]['wave'][] = [
+    { shape: 'sine' },
+    { shape: 'pointed' },
+    { shape: 'scallop' },
+    { shape: 'flat', clip: 0.5 },
+    { shape: 'fourier', terms: [{ k: 1, a: 1, b: 0 }, { k: 3, a: 0.2, b: 0.3 }] },
+  ];
+  const schedules: Design['study']['schedule'][] = [{ kind: 'none' }, { kind: 'alternate' }, { kind: 'ramp', steps: 6 }, { kind: 'sine', period: 30, depth: 0.25 }, { kind: 'twist', step: 0.05 }];
+  return Array.from({ length: count }, () => ({
+    ...EXAMPLE_DESIGN,
+    rosette: {
+      baseRadius: 40 + 20 * random(),
+      layers: [
+        { lobes: pick([6, 8, 12, 16, 18, 24, 30, 36, 48]), amplitude: 0.5 + 2 * random(), phase: random(), wave: pick(waves) },
+        ...(random() < 0.3 ? [{ lobes: pick([2, 3, 4]), amplitude: 0.5 * random(), phase: random(), wave: { shape: 'sine' as const } }] : []),
+      ],
+    },
+    rubber: random() < 0.8 ? { shape: 'round' as const, radius: 3 * random() } : { shape: 'flat' as const, width: 1 + 4 * random() },
+    motion: { travelPerRev: 60 + 80 * random(), leverRatio: 0.5 + random() },
+    cutter: { diameter: pick([3.175, 4.7625, 6.35]), flutes: 2 },
+    follower: { radius: pick([1.5875, 2.38125, 3.175]) },
+    study: { ...EXAMPLE_DESIGN.study, lines: 30, schedule: pick(schedules) },
+  }));
+}
+
+function sweepFigures(): void {
+  const designs = sweepDesigns(500);
+  // Thumbnail data: about 1500 samples along the bar (at least 50 a period), 30 lines.
+  const thumbnail = (d: Design) => {
+    const period = d.motion.travelPerRev / rosetteRepeats(d.rosette);
+    const profile = computeProfile(d, { step: Math.min(period / 50, d.bar.length / 1500) });
+    return computeLineStudy(d, profile);
+  };
+  thumbnail(designs[0]);
+  const runs = [0, 1, 2].map(() => {
+    const t = performance.now();
+    for (const d of designs) thumbnail(d);
+    return performance.now() - t;
+  });
+  runs.sort((a, b) => a - b);
+  console.log(`500 different designs, profile + 30-line study thumbnail data, one core:`);
+  console.log(`  median ${ms(runs[1])}, best ${ms(runs[0])}   (target < 2000 ms)`);
+}
+
+profileFigures();
+studyFigures();
+sweepFigures();
