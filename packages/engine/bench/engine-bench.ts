@@ -9,7 +9,7 @@ import { computeBarSamples, computeLineStudy, computeProfile, rosetteRepeats } f
 import { clipperEnvelopes, topHeights } from '../src/testing/clipper-envelope';
 
 function median(runs: number, work: () => unknown): { median: number; best: number } {
-  for (let i = 0; i < Math.min(20, runs); i++) work();
+  for (let i = 0; i < Math.min(50, runs); i++) work();
   const times: number[] = [];
   for (let i = 0; i < runs; i++) {
     const t = performance.now();
@@ -24,8 +24,8 @@ const ms = (v: number) => `${v.toFixed(2)} ms`;
 
 function profileFigures(): void {
   const samples = computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 });
-  const profile = median(200, () => computeProfile(EXAMPLE_DESIGN, { step: 0.01 }));
-  const typed = median(200, () => computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 }));
+  const profile = median(400, () => computeProfile(EXAMPLE_DESIGN, { step: 0.01 }));
+  const typed = median(400, () => computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 }));
   console.log(`profile + follower, 150 mm bar at 0.01 mm (${samples.x.length} samples, cutter Ø ${EXAMPLE_DESIGN.cutter.diameter}):`);
   console.log(`  computeProfile       median ${ms(profile.median)}, best ${ms(profile.best)}   (target < 5 ms)`);
   console.log(`  typed arrays only    median ${ms(typed.median)}, best ${ms(typed.best)}`);
