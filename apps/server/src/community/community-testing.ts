@@ -1,4 +1,5 @@
 import * as Y from 'yjs';
+import { CookieAccessInfo } from 'cookiejar';
 import type { Design } from '@barwright/contracts';
 import { readDesign, writeDesign } from '@barwright/contracts/design-doc';
 import type { TestDatabase } from '../testing/test-database';
@@ -41,4 +42,24 @@ export async function publishedBar(m: Member, title: string, options: { preset?:
   const res = await m.client.post(`/api/designs/${design.body.id}/publish`, { title, description: options.description ?? '', tags: options.tags ?? [] });
   if (res.status !== 201) throw new Error(`publish: ${res.status} ${JSON.stringify(res.body)}`);
   return { designId: design.body.id as string, entryId: res.body.entryId as string };
+}
+
+/** The XSRF token the client's cookie jar holds (what a browser's page would echo in X-XSRF-TOKEN). */
+export async function xsrfOf(client: Client): Promise<string> {
+  const access = new CookieAccessInfo('127.0.0.1', '/', false, true);
+  let cookie = client.agent.jar.getCookie('XSRF-TOKEN', access);
+  if (!cookie) {
+    await client.get('/api/auth/me');
+    cookie = client.agent.jar.getCookie('XSRF-TOKEN', access);
+  }
+  return decodeURIComponent(cookie?.value ?? '');
+}
+
+/** A multipart upload the way a browser form sends it. */
+export async function upload(client: Client, path: string, file: { field?: string; data: Buffer; name: string } | undefined, fields: Record<string, string>) {
+  const token = await xsrfOf(client); // first: the agent attaches its cookies when the request is made
+  let req = client.agent.post(path).set('X-XSRF-TOKEN', token);
+  for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+  if (file) req = req.attach(file.field ?? 'photo', file.data, file.name);
+  return req;
 }
