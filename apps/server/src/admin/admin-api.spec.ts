@@ -1,26 +1,18 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, makeUser, startTestServer, type TestServer } from '../testing/test-app';
+import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, makeUser, useTestServer, type TestServer } from '../testing/test-app';
 
 const drivers = await availableDrivers();
 type Who = 'anonymous' | 'member' | 'moderator' | 'admin';
 const WHO: Who[] = ['anonymous', 'member', 'moderator', 'admin'];
 
 describe.each(drivers)('admin API on %s', (driver) => {
+  const ctx = useTestServer(driver);
   let database: TestDatabase;
   let server: TestServer;
   let targetId: string;
-
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  beforeAll(() => void ({ database, server } = ctx));
   beforeEach(async () => {
-    await database.reset();
     await makeUser(database, 'member@example.test', 'member');
     await makeUser(database, 'moderator@example.test', 'moderator');
     await makeUser(database, 'admin@example.test', 'admin');

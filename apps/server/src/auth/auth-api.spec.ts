@@ -2,24 +2,16 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { accountTokens, sessions, users } from '../../../../db/schema';
 import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, cookiesOf, sidOf, makeUser, startTestServer, TEST_PASSWORD, type TestServer } from '../testing/test-app';
+import { Client, cookiesOf, sidOf, makeUser, startTestServer, TEST_PASSWORD, useTestServer, type TestServer } from '../testing/test-app';
 
 const drivers = await availableDrivers();
 const linkToken = (text: string) => text.match(/token=([A-Za-z0-9_-]+)/)?.[1] ?? '';
 
 describe.each(drivers)('accounts API on %s', (driver) => {
+  const ctx = useTestServer(driver);
   let database: TestDatabase;
   let server: TestServer;
-
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
-  beforeEach(() => database.reset());
+  beforeAll(() => void ({ database, server } = ctx));
 
   async function signUpAndVerify(email: string) {
     const c = new Client(server.app);

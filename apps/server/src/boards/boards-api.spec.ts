@@ -1,27 +1,19 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { EXAMPLE_DESIGN } from '@barwright/contracts';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, makeUser, startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, makeUser, useTestServer, type TestServer } from '../testing/test-app';
 
 const drivers = await availableDrivers();
 const tokenIn = (text: string) => text.match(/token=([A-Za-z0-9_-]+)/)?.[1] ?? '';
 
 describe.each(drivers)('boards API on %s', (driver) => {
+  const ctx = useTestServer(driver);
   let database: TestDatabase;
   let server: TestServer;
   let owner: Client;
   let boardId: string;
-
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  beforeAll(() => void ({ database, server } = ctx));
   beforeEach(async () => {
-    await database.reset();
     for (const name of ['owner', 'editor', 'viewer', 'outsider']) await makeUser(database, `${name}@example.test`);
     owner = new Client(server.app);
     await owner.signIn('owner@example.test');

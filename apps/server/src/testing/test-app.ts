@@ -4,7 +4,8 @@ import { createApp, type AppDeps } from '../app';
 import { startLocalSmtp, type LocalSmtp } from '../mail/local-smtp';
 import { createMailer } from '../mail/mailer';
 import { insertUser } from '../auth/users';
-import type { TestDatabase } from './test-database';
+import { afterAll, beforeAll, beforeEach } from 'vitest';
+import { openTestDatabase, type Driver, type TestDatabase } from './test-database';
 
 /** The Set-Cookie lines of a response, always as a list. */
 export const cookiesOf = (res: request.Response): string[] => ([] as string[]).concat(res.headers['set-cookie'] ?? []);
@@ -77,4 +78,22 @@ export class Client {
 export async function makeUser(database: TestDatabase, email: string, role: 'member' | 'moderator' | 'admin' = 'member') {
   const user = await insertUser(database.db, { email, displayName: email.split('@')[0], password: TEST_PASSWORD, role, verified: true });
   return user!;
+}
+
+/**
+ * Registers the usual hooks of an API suite: one database and app per file (opened once, since a
+ * database costs seconds), emptied before each test. Read `ctx.database` / `ctx.server` inside tests.
+ */
+export function useTestServer(driver: Driver, overrides: Partial<AppDeps> = {}) {
+  const ctx = {} as { database: TestDatabase; server: TestServer };
+  beforeAll(async () => {
+    ctx.database = await openTestDatabase(driver);
+    ctx.server = await startTestServer(ctx.database, overrides);
+  });
+  afterAll(async () => {
+    await ctx.server?.close();
+    await ctx.database?.close();
+  });
+  beforeEach(() => ctx.database.reset());
+  return ctx;
 }
