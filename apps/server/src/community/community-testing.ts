@@ -63,3 +63,10 @@ export async function upload(client: Client, path: string, file: { field?: strin
   if (file) req = req.attach(file.field ?? 'photo', file.data, file.name);
   return req;
 }
+
+/** The session cookie (`barwright.sid=…`) the client holds, to open a socket as that member. */
+export function sessionCookieOf(client: Client): string {
+  const cookie = client.agent.jar.getCookie('barwright.sid', new CookieAccessInfo('127.0.0.1', '/', false, false)); // http-only: not a script's access
+  if (!cookie) throw new Error('the client has no session cookie');
+  return `barwright.sid=${cookie.value}`;
+}
