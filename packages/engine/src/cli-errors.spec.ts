@@ -1,6 +1,7 @@
 import { EXAMPLE_DESIGN } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { EXIT_OK, EXIT_USAGE, runCli, type CliIo } from './cli';
+import { fromMm } from './units';
 
 /** Runs the CLI in-process against an in-memory file system. */
 async function run(argv: string[], files: Record<string, string> = {}) {
@@ -81,6 +82,13 @@ describe('CLI commands in-process', () => {
     const svg = await run(['study', 'd.json', '--svg', 'study.svg'], files);
     expect(svg.code).toBe(EXIT_OK);
     expect(String(svg.written['study.svg'])).toContain('<svg');
+  });
+
+  it('titles the study drawing in the file\'s units', async () => {
+    const inch = fromMm({ ...EXAMPLE_DESIGN, study: { ...EXAMPLE_DESIGN.study, lineSpacing: 0.4572 } }, 'in');
+    const svg = await run(['study', 'd.json', '--svg', 'study.svg'], { 'd.json': JSON.stringify(inch) });
+    expect(svg.code, svg.stderr).toBe(EXIT_OK);
+    expect(String(svg.written['study.svg'])).toMatch(/<title>Line study: 40 lines at 0\.018 in, groove [0-9.]+ in wide<\/title>/);
   });
 
   it('exports every format, defaulting the file name', async () => {

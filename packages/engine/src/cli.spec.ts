@@ -5,6 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { toMm } from './units';
 
 const ENGINE = fileURLToPath(new URL('..', import.meta.url));
 const ROOT = join(ENGINE, '../..');
@@ -45,6 +46,12 @@ async function designFile(name: string, value: unknown): Promise<string> {
   const path = join(dir, name);
   await writeFile(path, typeof value === 'string' ? value : JSON.stringify(value));
   return path;
+}
+
+/** Every length a message states in `unit`, in order: `1–2 in` gives 1 and 2. */
+function lengthsIn(message: string, unit: 'mm' | 'in'): number[] {
+  const pattern = new RegExp(`(-?\\d+(?:\\.\\d+)?(?:e-?\\d+)?)(?:–(-?\\d+(?:\\.\\d+)?(?:e-?\\d+)?))? ${unit}\\b`, 'g');
+  return [...message.matchAll(pattern)].flatMap((m) => (m[2] === undefined ? [Number(m[1])] : [Number(m[1]), Number(m[2])]));
 }
 
 describe('barwright CLI (spawned with node)', () => {
@@ -91,6 +98,42 @@ describe('barwright CLI (spawned with node)', () => {
     expect(profile.period).toBeCloseTo(100 / 24 / MM_PER_INCH, 6);
     expect(profile.cutterPath.at(-1)[0]).toBeCloseTo(150 / MM_PER_INCH, 6);
     expect(Math.max(...profile.cutterPath.map((p: number[]) => p[1]))).toBeCloseTo(1.5 / MM_PER_INCH, 3);
+  });
+
+  it('writes warning messages in inches for an inch design, agreeing with the mm design (inch = 25.4 mm, NIST)', async () => {
+    // Scalloped lobes meet in cusps that a 0.1 in rubber cannot reach, and the crests are narrower than the cutter.
+    const inch = {
+      ...structuredClone(EXAMPLE_DESIGN),
+      units: 'in',
+      rosette: { baseRadius: 2, layers: [{ lobes: 24, amplitude: 0.06, phase: 0, wave: { shape: 'scallop' } }] },
+      rubber: { shape: 'round', radius: 0.1 },
+      motion: { travelPerRev: 4, leverRatio: 1 },
+      cutter: { diameter: 0.1875, flutes: 2 },
+      bar: { length: 6, thickness: 0.3125, material: 'a2' },
+      follower: { radius: 0.09375 },
+      study: { lineSpacing: 0.018, lines: 40, schedule: { kind: 'alternate' }, vAngle: 120, depth: 0.004 },
+      plan: { stepOver: 0.003, cleanup: 0.01, travelSpeed: 4 },
+    } as const;
+    const [a, b] = await Promise.all([
+      barwright(['profile', await designFile('scallop-in.json', inch)]),
+      barwright(['profile', await designFile('scallop-mm.json', toMm(inch as any))]),
+    ]);
+    expect(a.code, a.stderr).toBe(0);
+    const inWarnings = JSON.parse(a.stdout).warnings;
+    const mmWarnings = JSON.parse(b.stdout).warnings;
+    expect(inWarnings.map((w: any) => w.code)).toEqual(['valley-bridged', 'detail-lost-follower']);
+    expect(mmWarnings.map((w: any) => w.code)).toEqual(inWarnings.map((w: any) => w.code));
+    inWarnings.forEach((w: any, i: number) => {
+      expect(w.message).not.toMatch(/\bmm\b/);
+      const inches = lengthsIn(w.message, 'in');
+      const mms = lengthsIn(mmWarnings[i].message, 'mm');
+      expect(inches.length).toBeGreaterThanOrEqual(3);
+      expect(inches).toHaveLength(mms.length);
+      inches.forEach((v, k) => expect(v * MM_PER_INCH).toBeCloseTo(mms[k], 3));
+      expect(inches[0]).toBeCloseTo(w.at.xFrom, 4);
+      expect(inches[1]).toBeCloseTo(w.at.xTo, 4);
+      expect(inches.some((v) => Math.abs(v - w.amount) < 1e-5)).toBe(true);
+    });
   });
 
   it('exits with code 2 and names the field for a bad design file', async () => {

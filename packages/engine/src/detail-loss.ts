@@ -1,4 +1,6 @@
+import type { Units } from '@barwright/contracts';
 import { graphCurvatureRadius } from './curvature';
+import { formatLength, formatLengthRange } from './length-format';
 import type { EngineWarning } from './types';
 
 export interface DetailLossInput {
@@ -13,6 +15,8 @@ export interface DetailLossInput {
   to: number;
   /** Period on the bar (mm): zones repeating every period are reported once. */
   period: number;
+  /** Units the messages are written in (the design file's); `at` and `amount` stay in mm. */
+  units: Units;
 }
 
 interface Zone {
@@ -111,22 +115,19 @@ function describe(zone: Zone, input: DetailLossInput, kind: 'crest' | 'bridged' 
   const at = { xFrom: zone.from * input.step, xTo: zone.to * input.step };
   const amount = Math.abs(zone.diff);
   const radius = Math.abs(graphCurvatureRadius(input.cutter, zone.worst, input.step));
-  const where = `at x ${fixed(at.xFrom)}–${fixed(at.xTo)} mm${repeats ? `, and every ${fixed(input.period)} mm along the bar` : ''}`;
-  const shape = `radius of curvature ${fixed(radius)} mm`;
-  const rc = fixed(input.cutterRadius);
-  const rf = fixed(input.followerRadius);
+  const len = (mm: number) => formatLength(mm, input.units);
+  const where = `at x ${formatLengthRange(at.xFrom, at.xTo, input.units)}${repeats ? `, and every ${len(input.period)} along the bar` : ''}`;
+  const shape = `radius of curvature ${len(radius)}`;
+  const rc = len(input.cutterRadius);
+  const rf = len(input.followerRadius);
   if (kind === 'crest') {
-    const message = `The follower rounds a crest of the bar ${where}: the cutter path's crest (${shape}) is narrower than the cutter (radius ${rc} mm), and the engraved line loses ${fixed(amount)} mm there.`;
+    const message = `The follower rounds a crest of the bar ${where}: the cutter path's crest (${shape}) is narrower than the cutter (radius ${rc}), and the engraved line loses ${len(amount)} there.`;
     return { code: 'detail-lost-follower', message, at, amount };
   }
   if (kind === 'bridged') {
-    const message = `The follower (radius ${rf} mm) cannot reach the bottom of a bar valley ${where}: the engraved line misses ${fixed(amount)} mm of its depth.`;
+    const message = `The follower (radius ${rf}) cannot reach the bottom of a bar valley ${where}: the engraved line misses ${len(amount)} of its depth.`;
     return { code: 'detail-lost-follower', message, at, amount };
   }
-  const message = `A valley of the cutter path ${where} (${shape}) is narrower than the cutter (radius ${rc} mm) cuts for a follower of radius ${rf} mm: the engraved line reads it blunter, by up to ${fixed(amount)} mm.`;
+  const message = `A valley of the cutter path ${where} (${shape}) is narrower than the cutter (radius ${rc}) cuts for a follower of radius ${rf}: the engraved line reads it blunter, by up to ${len(amount)}.`;
   return { code: 'detail-lost-cutter', message, at, amount };
-}
-
-function fixed(v: number): number {
-  return +v.toFixed(4);
 }

@@ -1,3 +1,5 @@
+import type { Units } from '@barwright/contracts';
+import { formatLength } from './length-format';
 import type { LineStudy } from './line-study';
 
 export interface LineStudySvgOptions {
@@ -5,6 +7,8 @@ export interface LineStudySvgOptions {
   ground?: 'paper' | 'dark';
   /** Rendered width in pixels (default 800); the viewBox stays in mm. */
   widthPx?: number;
+  /** Units of the lengths in the drawing's title (default mm); the drawing itself stays in mm. */
+  units?: Units;
 }
 
 const GROUNDS = {
@@ -22,6 +26,7 @@ const HAIRLINE_PX = 0.75;
 export function lineStudySvg(study: LineStudy, options: LineStudySvgOptions = {}): string {
   const { background, ink } = GROUNDS[options.ground ?? 'paper'];
   const widthPx = options.widthPx ?? 800;
+  const len = (mm: number) => formatLength(mm, options.units ?? 'mm');
   const [low, high] = heightRange(study);
   const margin = Math.max(study.width, study.spacing, 0.5);
   const width = study.length + 2 * margin;
@@ -36,7 +41,7 @@ export function lineStudySvg(study: LineStudy, options: LineStudySvgOptions = {}
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<svg xmlns="http://www.w3.org/2000/svg" version="1.1" width="${num(widthPx)}px" height="${num(heightPx)}px" viewBox="0 0 ${num(width)} ${num(height)}">`,
-    `<title>Line study: ${study.lines.length} lines at ${num(study.spacing)} mm, groove ${num(study.width)} mm wide</title>`,
+    `<title>Line study: ${study.lines.length} lines at ${len(study.spacing)}, groove ${len(study.width)} wide</title>`,
     `<rect x="0" y="0" width="${num(width)}" height="${num(height)}" fill="${background}"/>`,
     `<g fill="none" stroke="${ink}" stroke-width="${num(stroke)}" stroke-linejoin="round" stroke-linecap="butt">`,
     ...lines,

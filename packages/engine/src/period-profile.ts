@@ -23,7 +23,7 @@ export function periodProfile(design: Design, step?: number): PeriodProfile {
   const mm = design.units === 'mm' ? design : toMm(design);
   const grid = barGrid(mm, step);
   const m = grid.perPeriod;
-  const track = trackRubber(mm, grid, 0, m - 1);
+  const track = trackRubber(mm, grid, 0, m - 1, design.units);
   let sMin = Infinity;
   for (const v of track.s) sMin = Math.min(sMin, v);
   const cutter = cutterHeights(track.s, mm.motion.leverRatio, sMin);

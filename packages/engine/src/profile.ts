@@ -26,7 +26,7 @@ export interface BarSamples {
   warnings: EngineWarning[];
 }
 
-/** Cutter path, bar edge and follower path of a validated design, in mm whatever the file's units. */
+/** Cutter path, bar edge and follower path of a validated design: numbers in mm whatever the file's units, warning messages in the file's units. */
 export function computeProfile(design: Design, options: ProfileOptions = {}): Profile {
   const samples = computeBarSamples(design, options);
   const { x, cutter, bar, follower } = samples;
@@ -65,7 +65,7 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   const rc = d.cutter.diameter / 2;
   const rf = d.follower.radius;
   const margin = Math.ceil(rc / h) + 1; // the cutter runs past both ends of the bar
-  const track = trackRubber(d, grid, -margin, lastNode + 1 + margin);
+  const track = trackRubber(d, grid, -margin, lastNode + 1 + margin, design.units);
   const offGrid = !grid.endOnGrid;
   const sEnd = offGrid ? rubberAt(d, grid, (2 * Math.PI * grid.length) / d.motion.travelPerRev) : NaN;
   const onBar = track.s.subarray(margin, margin + lastNode + 1);
@@ -93,7 +93,10 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   // The loss analysis reads the follower up to |rf − rc| to the side: keep it clear of the bar's ends.
   const from = Math.min(lastNode, Math.ceil((rf + Math.abs(rf - rc)) / h) + 2);
   const to = Math.max(from, lastNode - from);
-  const loss = detailLossWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period });
+  const loss = detailLossWarnings({
+    ...{ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to },
+    ...{ period: grid.period, units: design.units },
+  });
   return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to, Math.min(10, grid.perPeriod / 50)), warnings: [...track.warnings, ...loss] };
 }
 

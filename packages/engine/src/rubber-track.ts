@@ -1,4 +1,4 @@
-import type { Design } from '@barwright/contracts';
+import type { Design, Units } from '@barwright/contracts';
 import type { BarGrid } from './bar-grid';
 import { rosetteMinRadius, sampleRosette, sampleRosetteAround } from './rosette';
 import { readRubber, rubberReach, type RubberReading } from './rubber';
@@ -13,10 +13,11 @@ export interface RubberTrack {
 }
 
 /**
- * Reads the rubber at the grid nodes first … last. When they span more than a period the rosette
- * and rubber are read once over one period (nodes 0 … M−1) and the readings repeat along the bar.
+ * Reads the rubber at the grid nodes first … last of a design in mm. When they span more than a
+ * period the rosette and rubber are read once over one period (nodes 0 … M−1) and the readings
+ * repeat along the bar. Warning messages are written in `units` (the design file's).
  */
-export function trackRubber(design: Design, grid: BarGrid, first: number, last: number): RubberTrack {
+export function trackRubber(design: Design, grid: BarGrid, first: number, last: number, units: Units): RubberTrack {
   const count = last - first + 1;
   const periodic = count > grid.perPeriod;
   const start = periodic ? 0 : first;
@@ -34,6 +35,7 @@ export function trackRubber(design: Design, grid: BarGrid, first: number, last: 
     step: grid.step,
     leverRatio: design.motion.leverRatio,
     period: periodic ? grid.period : undefined,
+    units,
   });
   if (!periodic) return { first, s: reading.s, warnings };
   const s = new Float64Array(count);

@@ -1,4 +1,5 @@
-import type { Rubber } from '@barwright/contracts';
+import type { Rubber, Units } from '@barwright/contracts';
+import { formatLength, formatLengthRange } from './length-format';
 import type { RubberReading } from './rubber';
 import type { EngineWarning } from './types';
 
@@ -15,6 +16,8 @@ export interface RubberWarningInput {
   leverRatio: number;
   /** Set when the readings are one period of a periodic sequence (period on the bar, mm). */
   period?: number;
+  /** Units the messages are written in (the design file's); `at` and `amount` stay in mm. */
+  units: Units;
 }
 
 interface Region {
@@ -123,19 +126,16 @@ function keepOnce(regions: Region[], n: number, period: number | undefined): Reg
 }
 
 function describe(regions: Region[], input: RubberWarningInput, code: 'valley-bridged' | 'cusp-rounded'): EngineWarning[] {
-  const repeat = input.period === undefined ? '' : `, and every ${round(input.period)} mm along the bar`;
+  const len = (mm: number) => formatLength(mm, input.units);
+  const repeat = input.period === undefined ? '' : `, and every ${len(input.period)} along the bar`;
   return regions.map((r) => {
     const amount = r.amount * input.leverRatio;
     const at = { xFrom: input.firstX + r.from * input.step, xTo: input.firstX + r.to * input.step };
-    const where = `at x ${round(at.xFrom)}–${round(at.xTo)} mm${repeat}`;
+    const where = `at x ${formatLengthRange(at.xFrom, at.xTo, input.units)}${repeat}`;
     const message =
       code === 'valley-bridged'
-        ? `The rubber bridges a rosette valley narrower than itself ${where}: the bar misses ${round(amount)} mm of its depth.`
-        : `The rubber rounds a sharp rosette crest ${where}: the bar's crest stands ${round(amount)} mm below the sharp corner.`;
+        ? `The rubber bridges a rosette valley narrower than itself ${where}: the bar misses ${len(amount)} of its depth.`
+        : `The rubber rounds a sharp rosette crest ${where}: the bar's crest stands ${len(amount)} below the sharp corner.`;
     return { code, message, at, amount };
   });
-}
-
-function round(v: number): number {
-  return +v.toFixed(4);
 }

@@ -13,7 +13,10 @@ export type WarningCode =
   | 'cutter-off-centre'
   | 'other';
 
-/** A warning with where it applies (x range on the bar, mm) and by how much (mm). */
+/**
+ * A warning with where it applies (x range on the bar, mm) and by how much (mm). `at` and `amount`
+ * are always mm, as every number in a result; the `message` is written in the design file's units.
+ */
 export interface EngineWarning {
   code: WarningCode;
   message: string;
@@ -23,7 +26,10 @@ export interface EngineWarning {
 
 /** The result of `computeProfile`: the three paths sampled on one common x grid. */
 export interface Profile {
-  /** Period on the bar (travelPerRev / lobes of the first layer), mm. */
+  /**
+   * Period on the bar, mm: travelPerRev / G, with G the gcd of the lobe counts of the layers that
+   * move (amplitude > 0; of all layers if none moves). For one layer, travelPerRev / lobes.
+   */
   period: number;
   /** Sampling interval along x, mm. */
   step: number;

@@ -54,7 +54,7 @@ const studyCommand: Command = {
   async run(design, values, io) {
     const study = computeLineStudy(design);
     if (typeof values.svg === 'string') {
-      await io.writeFile(values.svg, lineStudySvg(study));
+      await io.writeFile(values.svg, lineStudySvg(study, { units: design.units }));
       io.stdout(`wrote ${values.svg}\n`);
       return;
     }
