@@ -99,6 +99,19 @@ describe('CLI commands in-process', () => {
     }
   });
 
+  it('writes every format to --out OUT', async () => {
+    const signatures: Record<string, RegExp> = { svg: /<svg /, dxf: /AC1009/, gcode: /G21/, csv: /^x_mm,/, pdf: /^%PDF-/ };
+    for (const [format, signature] of Object.entries(signatures)) {
+      const out = `out/my-bar-${format}.${format}`;
+      const result = await run(['export', 'd.json', '--format', format, '--out', out], files);
+      expect(result.code, format).toBe(EXIT_OK);
+      expect(Object.keys(result.written)).toEqual([out]);
+      const content = result.written[out];
+      expect(typeof content === 'string' ? content : Buffer.from(content).subarray(0, 5).toString('latin1')).toMatch(signature);
+      expect(result.stdout).toContain(`wrote ${out}`);
+    }
+  });
+
   it('reads the design from standard input with -', async () => {
     const result = await run(['plan', '-'], { '-': JSON.stringify(EXAMPLE_DESIGN) });
     expect(result.code).toBe(EXIT_OK);

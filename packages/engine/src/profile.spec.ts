@@ -1,6 +1,7 @@
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { computeLineStudy } from './line-study';
 import { computeBarSamples, computeProfile } from './profile';
 import { rosetteRepeats } from './rosette';
 import { validDesign } from './testing/design-arbitrary';
@@ -85,6 +86,21 @@ describe('computeProfile', () => {
 });
 
 describe('computeProfile, for any valid design (fast-check)', () => {
+  it('gives a line study of finite points at the line spacing, the same each time', () => {
+    fc.assert(
+      fc.property(validDesign, (design) => {
+        const profile = computeProfile(design, { step: quickStep(design) });
+        const study = computeLineStudy(design, profile);
+        expect(Number.isFinite(study.width)).toBe(true);
+        expect(study.spacing).toBeCloseTo(toMm(design).study.lineSpacing, 12);
+        expect(study.lines).toHaveLength(design.study.lines);
+        for (const line of study.lines) for (const [x, y] of line.points) expect(Number.isFinite(x) && Number.isFinite(y)).toBe(true);
+        expect(computeLineStudy(design, profile)).toEqual(study);
+      }),
+      { numRuns: Number(process.env.PROPERTY_RUNS ?? 30) },
+    );
+  });
+
   it('never gives NaN, keeps the bar edge at least rc below the path, repeats exactly every period and is deterministic', () => {
     fc.assert(
       fc.property(validDesign, (design) => {
@@ -103,6 +119,7 @@ describe('computeProfile, for any valid design (fast-check)', () => {
         for (let i = 1; i < s.x.length; i++) expect(s.x[i]).toBeGreaterThan(s.x[i - 1]);
         expect(s.x[s.x.length - 1]).toBeCloseTo(mm.bar.length, 9);
         for (const w of s.warnings) expect(Number.isFinite(w.amount ?? 0)).toBe(true);
+        if (design.units === 'in') for (const w of s.warnings) expect(w.message).not.toMatch(/\bmm\b/);
         expect(computeProfile(design, { step })).toEqual(computeProfile(design, { step }));
       }),
       { numRuns: Number(process.env.PROPERTY_RUNS ?? 60) },
