@@ -21,4 +21,4 @@ export { type CutCheckInput, cutPlanWarnings } from './cut-plan-warnings';
 export { SAFETY_CAUTIONS, SHORT_CAUTION, setUpReminders } from './cut-plan-notes';
 export { type MaterialPreset, type CuttingFigures, MATERIAL_PRESETS, PRESET_CUTTER_DIAMETER_MM, cuttingFigures, withMaterialDefaults } from './materials';
 export { spindleRpm, spindleRpmFromSfm, sfmToMPerMin, feedPerMinute } from './spindle-speed';
-export { formatLength, LENGTH_DECIMALS } from './length-format';
+export { formatLength, formatLengthRange, lengthFigure, LENGTH_DECIMALS } from './length-format';

@@ -77,6 +77,14 @@ describe('computeProfile', () => {
     }
   });
 
+  it('says when a bar of many periods is sampled more coarsely than 0.1 % needs, and by how much', () => {
+    const many: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 1000 }, rosette: { baseRadius: 50, layers: [{ lobes: 72, amplitude: 1.5, phase: 0, wave: { shape: 'sine' } }] } };
+    const [coarse] = computeProfile(many).warnings.filter((w) => w.code === 'other');
+    expect(coarse.message).toMatch(/holds 720 periods.*off by up to 0\.96 % of the amplitude.*a step of 0\.00069 mm keeps it within 0\.1 %/);
+    expect(computeProfile(many, { step: 0.01 }).warnings.filter((w) => w.code === 'other')).toEqual([]);
+    expect(computeProfile(EXAMPLE_DESIGN).warnings.filter((w) => w.code === 'other')).toEqual([]);
+  });
+
   it('is fast enough to be called often (a 150 mm bar at 0.01 mm well under 50 ms even on a busy machine)', () => {
     computeProfile(EXAMPLE_DESIGN, { step: 0.01 });
     const t = performance.now();

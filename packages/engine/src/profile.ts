@@ -1,6 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import { barEdge, counterPhaseDesign, cutterHeights, invertHeights } from './bar';
-import { barGrid, nodeX, type BarGrid } from './bar-grid';
+import { barGrid, coarseSamplingWarning, nodeX, type BarGrid } from './bar-grid';
 import { minCrestRadius } from './curvature';
 import { detailLossWarnings } from './detail-loss';
 import { followerAt, followerPath } from './follower';
@@ -97,7 +97,9 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
     ...{ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to },
     ...{ period: grid.period, units: design.units },
   });
-  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to, Math.min(10, grid.perPeriod / 50)), warnings: [...track.warnings, ...loss] };
+  const coarse = options.step === undefined ? coarseSamplingWarning(grid, design.units) : undefined;
+  const warnings = [...(coarse ? [coarse] : []), ...track.warnings, ...loss];
+  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to, Math.min(10, grid.perPeriod / 50)), warnings };
 }
 
 /**
