@@ -7,6 +7,11 @@ export const routes: Routes = [
   { path: 'admin', loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES) },
   { path: 'boards', loadChildren: () => import('./features/boards/boards.routes').then((m) => m.BOARDS_ROUTES) },
   { path: 'studio', loadChildren: () => import('./features/studio/studio.routes').then((m) => m.STUDIO_ROUTES) },
+  // The community: Explore, the design page of published entries, notifications, measured rosettes.
+  { path: 'explore', loadChildren: () => import('./features/explore/explore.routes').then((m) => m.EXPLORE_ROUTES) },
+  { path: 'entries', loadChildren: () => import('./features/entries/entries.routes').then((m) => m.ENTRIES_ROUTES) },
+  { path: 'notifications', loadChildren: () => import('./features/notifications/notifications.routes').then((m) => m.NOTIFICATIONS_ROUTES) },
+  { path: 'rosettes', loadChildren: () => import('./features/rosettes/rosettes.routes').then((m) => m.ROSETTES_ROUTES) },
   { path: 'mailbox', canMatch: [localMailGuard], loadChildren: () => import('./features/mailbox/mailbox.routes').then((m) => m.MAILBOX_ROUTES) },
   { path: '**', title: 'Page not found', loadComponent: () => import('./features/not-found/not-found-page').then((m) => m.NotFoundPage) },
 ];

@@ -3,11 +3,15 @@ import { navLinksFor } from './nav-links';
 
 describe('navLinksFor', () => {
   it('shows People only to admins and Mailbox only in local mail mode', () => {
-    expect(navLinksFor({ isAdmin: false, localMail: false }).map((l) => l.label)).toEqual(['Home']);
-    expect(navLinksFor({ isAdmin: true, localMail: true }).map((l) => l.label)).toEqual(['Home', 'People', 'Mailbox']);
+    expect(navLinksFor({ isAdmin: false, localMail: false }).map((l) => l.label)).toEqual(['Home', 'Explore']);
+    expect(navLinksFor({ isAdmin: true, localMail: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'People', 'Mailbox']);
+  });
+
+  it('shows Explore to everyone, visitors too', () => {
+    expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: false }).map((l) => l.path)).toContain('/explore');
   });
 
   it('shows Boards to signed-in members only', () => {
-    expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Boards']);
+    expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Boards']);
   });
 });

@@ -9,6 +9,7 @@ import { map } from 'rxjs';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ConfigStore } from '../../core/config/config-store';
 import { AccountMenu } from '../account-menu/account-menu';
+import { NotificationBell } from '../notification-bell/notification-bell';
 import { navLinksFor } from './nav-links';
 
 /** Below this width the navigation folds into a "Menu" button. */
@@ -16,7 +17,7 @@ const COMPACT_QUERY = '(max-width: 719.98px)';
 
 @Component({
   selector: 'bw-top-bar',
-  imports: [RouterLink, RouterLinkActive, MatButtonModule, MatIconModule, MatMenuModule, AccountMenu],
+  imports: [RouterLink, RouterLinkActive, MatButtonModule, MatIconModule, MatMenuModule, AccountMenu, NotificationBell],
   templateUrl: './top-bar.html',
   styleUrl: './top-bar.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

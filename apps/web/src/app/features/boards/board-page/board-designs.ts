@@ -8,6 +8,7 @@ import { Router, RouterLink } from '@angular/router';
 import { createDesignBody, DESIGN_TITLE_MAX, type DesignSummary } from '@barwright/contracts';
 import { Notifier } from '../../../core/error-handling/notifier';
 import { confirmWith } from '../../../shared/confirm-dialog/confirm-dialog';
+import { openPublishDialog } from '../../../shared/publish-dialog/publish-dialog';
 import { askForName } from '../../../shared/name-dialog/name-dialog';
 import { keptFor } from '../bin-time';
 import { BoardStore } from '../board-store';
@@ -34,6 +35,14 @@ export class BoardDesigns {
   protected async newDesign(): Promise<void> {
     const id = await askForNewDesign(this.dialog, (title, preset) => this.store.createDesign(title, preset));
     if (id) await this.router.navigate(['/studio', id]);
+  }
+
+  /** Community: publishes the design and opens its entry page. */
+  protected async publish(design: DesignSummary): Promise<void> {
+    const result = await openPublishDialog(this.dialog, { designId: design.id, title: design.title });
+    if (!result) return;
+    void this.notifier.tell(result.created ? `“${design.title}” is published.` : `Revision ${result.revision} of “${design.title}” is published.`, undefined, 4000);
+    await this.router.navigate(['/entries', result.entryId]);
   }
 
   protected async duplicate(design: DesignSummary): Promise<void> {

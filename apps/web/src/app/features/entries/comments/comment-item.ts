@@ -1,0 +1,39 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { renderCommentHtml, type CommentNode } from '@barwright/contracts';
+import { canDelete, canEdit, editWindowText } from './comment-rules';
+import { CommentForm } from './comment-form';
+import { CommentsStore } from './comments-store';
+
+/** One comment: its author and time, its text (escaped, links made safe by the contracts' renderer), and its actions. */
+@Component({
+  selector: 'bw-comment-item',
+  imports: [DatePipe, MatButtonModule, MatIconModule, CommentForm],
+  templateUrl: './comment-item.html',
+  styleUrl: './comment-item.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class CommentItem {
+  private readonly store = inject(CommentsStore);
+  readonly node = input.required<CommentNode>();
+  readonly myId = input<string | null>(null);
+  /** Replies can be answered only at the top level (threads are one level deep). */
+  readonly canReply = input(false);
+  /** The time the edit window is judged against; the thread ticks it each minute. */
+  readonly now = input.required<Date>();
+  readonly reply = output<void>();
+  readonly remove = output<void>();
+
+  protected readonly editing = signal(false);
+  /** The only HTML a comment becomes: every character escaped, http(s) links with a safe rel. */
+  protected readonly html = computed(() => renderCommentHtml(this.node().body ?? ''));
+  protected readonly editable = computed(() => canEdit(this.node(), this.myId(), this.now()));
+  protected readonly deletable = computed(() => canDelete(this.node(), this.myId()));
+  protected readonly windowText = computed(() => (this.editable() ? editWindowText(this.node(), this.now()) : ''));
+  protected readonly saveEdit = async (body: string) => {
+    await this.store.edit(this.node().id, body);
+    this.editing.set(false);
+  };
+}

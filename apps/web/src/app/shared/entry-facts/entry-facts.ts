@@ -1,0 +1,38 @@
+import { MM_PER_INCH, type MaterialId, type RatingSummary, type Units, type WaveShape } from '@barwright/contracts';
+
+/** Wave shapes as a card names them (short; the studio's fields say more). */
+export const WAVE_NAMES: Readonly<Record<WaveShape, string>> = {
+  sine: 'Sine',
+  pointed: 'Pointed',
+  scallop: 'Scalloped',
+  flat: 'Flat-topped',
+  eccentric: 'Eccentric circle',
+  fourier: 'Fourier series',
+  measured: 'Measured',
+};
+
+export const MATERIAL_NAMES: Readonly<Record<MaterialId, string>> = {
+  acrylic: 'Acrylic',
+  brass: 'Brass',
+  a2: 'A2 tool steel',
+  custom: 'Custom material',
+};
+
+/** A cutter diameter given in mm, in the reader's units: "4.76 mm", "0.1875 in". */
+export function cutterText(mm: number, units: Units): string {
+  if (units === 'in') return `${Number((mm / MM_PER_INCH).toFixed(4))} in`;
+  return `${Number(mm.toFixed(2))} mm`;
+}
+
+/** The mean to one decimal with the count beside it: "4.3 of 5 (12 ratings)", "No ratings yet". */
+export function ratingText(rating: Pick<RatingSummary, 'count' | 'mean'>): string {
+  if (rating.count === 0 || rating.mean === null) return 'No ratings yet';
+  return `${rating.mean.toFixed(1)} of 5 (${countText(rating.count, 'rating')})`;
+}
+
+/** "1 remix", "3 remixes", "no comments". */
+export function countText(n: number, noun: string, plural = `${noun}s`): string {
+  if (n === 0) return `no ${plural}`;
+  return `${n.toLocaleString('en')} ${n === 1 ? noun : plural}`;
+}
+
