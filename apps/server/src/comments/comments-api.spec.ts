@@ -1,9 +1,9 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { COMMENT_MAX, renderCommentHtml } from '@barwright/contracts';
 import { comments } from '../../../../db/schema';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, useTestServer, type TestServer } from '../testing/test-app';
 import { member, publishedBar, type Member } from '../community/community-testing';
 
 const drivers = await availableDrivers();
@@ -17,16 +17,9 @@ describe.each(drivers)('comments API on %s', (driver) => {
   let entryId: string;
   const path = () => `/api/entries/${entryId}/comments`;
 
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database, { communityLimits: { commentsPerMinute: 4 } });
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  const ctx = useTestServer(driver, { communityLimits: { commentsPerMinute: 4 } });
   beforeEach(async () => {
-    await database.reset();
+    ({ database, server } = ctx);
     author = await member(database, server, 'maren');
     reader = await member(database, server, 'tobias');
     entryId = (await publishedBar(author, 'Sine 24')).entryId;

@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { EXAMPLE_DESIGN } from '@barwright/contracts';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, makeUser, startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, makeUser, useTestServer, type TestServer } from '../testing/test-app';
 import { editDesign, member, publishedBar, type Member } from '../community/community-testing';
 import { entries } from '../../../../db/schema';
 import { eq } from 'drizzle-orm';
@@ -14,16 +14,9 @@ describe.each(drivers)('publishing API on %s', (driver) => {
   let author: Member;
   let other: Member;
 
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  const ctx = useTestServer(driver);
   beforeEach(async () => {
-    await database.reset();
+    ({ database, server } = ctx);
     author = await member(database, server, 'maren');
     other = await member(database, server, 'tobias');
   });

@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { entries, users } from '../../../../db/schema';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { useTestServer, type TestServer } from '../testing/test-app';
 import { member, publishedBar, type Member } from '../community/community-testing';
 import { setRating } from './ratings-service';
 import { wilsonLowerBound } from './wilson-score';
@@ -16,16 +16,9 @@ describe.each(drivers)('ratings API on %s', (driver) => {
   let rater: Member;
   let entryId: string;
 
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  const ctx = useTestServer(driver);
   beforeEach(async () => {
-    await database.reset();
+    ({ database, server } = ctx);
     author = await member(database, server, 'maren');
     rater = await member(database, server, 'tobias');
     entryId = (await publishedBar(author, 'Sine 24')).entryId;

@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { entries } from '../../../../db/schema';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, useTestServer, type TestServer } from '../testing/test-app';
 import { editDesign, member, publishedBar, type Member } from '../community/community-testing';
 import { refreshRemixCount } from '../publishing/entry-counts';
 
@@ -17,16 +17,9 @@ describe.each(drivers)('remix and lineage on %s', (driver) => {
   let ilse: Member;
   let original: string;
 
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  const ctx = useTestServer(driver);
   beforeEach(async () => {
-    await database.reset();
+    ({ database, server } = ctx);
     maren = await member(database, server, 'maren');
     tobias = await member(database, server, 'tobias');
     ilse = await member(database, server, 'ilse');

@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { MEASURED_TABLE_MAX_BYTES } from '@barwright/contracts';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, useTestServer, type TestServer } from '../testing/test-app';
 import { member, upload, xsrfOf, type Member } from '../community/community-testing';
 
 const drivers = await availableDrivers();
@@ -17,16 +17,9 @@ describe.each(drivers)('measured rosette preview on %s', (driver) => {
     return c.agent.post(PATH).set('X-XSRF-TOKEN', token).set('Content-Type', type).send(body);
   };
 
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    server = await startTestServer(database);
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-  });
+  const ctx = useTestServer(driver);
   beforeEach(async () => {
-    await database.reset();
+    ({ database, server } = ctx);
     maren = await member(database, server, 'maren');
   });
 

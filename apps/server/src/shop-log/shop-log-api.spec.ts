@@ -1,14 +1,14 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import exifr from 'exifr';
 import sharp from 'sharp';
 import { eq } from 'drizzle-orm';
 import { PHOTO_MAX_BYTES } from '@barwright/contracts';
 import { photos } from '../../../../db/schema';
-import { availableDrivers, openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, startTestServer, type TestServer } from '../testing/test-app';
+import { availableDrivers, type TestDatabase } from '../testing/test-database';
+import { Client, useTestServer, type TestServer } from '../testing/test-app';
 import { member, publishedBar, upload, xsrfOf, type Member } from '../community/community-testing';
 import { HTML_PAYLOAD, jpegWithGps, pngDeclaring, smallGif, smallPng, smallWebp } from './test-images';
 
@@ -18,25 +18,17 @@ const FIELDS = { kind: 'trial', caption: 'First pass in acrylic', material: 'cas
 describe.each(drivers)('shop log on %s', (driver) => {
   let database: TestDatabase;
   let server: TestServer;
-  let uploadsDir: string;
   let maren: Member;
   let tobias: Member;
   let entryId: string;
   let designId: string;
   const entryPhotos = () => `/api/entries/${entryId}/photos`;
 
-  beforeAll(async () => {
-    database = await openTestDatabase(driver);
-    uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-uploads-'));
-    server = await startTestServer(database, { uploadsDir, communityLimits: { photosPerDay: 4 } });
-  });
-  afterAll(async () => {
-    await server?.close();
-    await database?.close();
-    fs.rmSync(uploadsDir, { recursive: true, force: true });
-  });
+  const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-uploads-'));
+  const ctx = useTestServer(driver, { uploadsDir, communityLimits: { photosPerDay: 4 } });
+  afterAll(() => fs.rmSync(uploadsDir, { recursive: true, force: true }));
   beforeEach(async () => {
-    await database.reset();
+    ({ database, server } = ctx);
     maren = await member(database, server, 'maren');
     tobias = await member(database, server, 'tobias');
     ({ entryId, designId } = await publishedBar(maren, 'Sine 24'));
