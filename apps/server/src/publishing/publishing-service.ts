@@ -49,7 +49,7 @@ export async function publishDesign(db: Db, source: DesignRow, design: Design, u
       return { entryId: live.id, revision: number, created: false, parentEntryId: null };
     }
     const id = randomUUID();
-    const origin = await originOf(tx as unknown as Db, source.id);
+    const origin = await originOf(tx, source.id);
     await tx.insert(entries).values({
       id,
       designId: source.id,
