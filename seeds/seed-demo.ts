@@ -3,6 +3,7 @@ import { users } from '../db/schema';
 import type { Db } from '../apps/server/src/database/database';
 import { insertUser } from '../apps/server/src/auth/users';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-scenario';
+import { seedDemoCommunity } from './seed-demo-community';
 
 /** Seeds the demo scenario into an empty database; returns false (and does nothing) when users exist. */
 export async function seedDemoScenario(db: Db): Promise<boolean> {
@@ -11,5 +12,6 @@ export async function seedDemoScenario(db: Db): Promise<boolean> {
   for (const account of DEMO_ACCOUNTS) {
     await insertUser(db, { ...account, password: DEMO_PASSWORD, verified: true });
   }
+  await seedDemoCommunity(db);
   return true;
 }

@@ -1,0 +1,111 @@
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
+
+/**
+ * The Guild's bar designs for the demo: invented rosettes from the members' racks, each a valid
+ * design file. Numbers are demo data, chosen to look like a workable set-up, not recommendations.
+ */
+const base = (patch: Partial<Design>): Design => ({ ...structuredClone(EXAMPLE_DESIGN), ...patch });
+
+export interface DemoBar {
+  owner: string; // e-mail of the demo account
+  board: string;
+  title: string;
+  description: string;
+  tags: string[];
+  design: Design;
+  notes?: string;
+}
+
+export const DEMO_BARS: DemoBar[] = [
+  {
+    owner: 'maren@example.test',
+    board: 'Rack trials, winter',
+    title: 'Twenty-four sine, barleycorn',
+    description: 'The first bar from the Guild\'s 24-lobe sine rosette. A clean barleycorn at 0.45 mm spacing; cut in A2 after one acrylic trial.',
+    tags: ['barleycorn', 'sine', 'keeper'],
+    design: base({}),
+    notes: 'Trial in acrylic looked right first time. Keeper cut in A2, 15 passes.',
+  },
+  {
+    owner: 'maren@example.test',
+    board: 'Rack trials, winter',
+    title: 'Eighteen-lobe basket weave',
+    description: 'A ramped phase over six lines gives the woven look. Wants a sharp V-cutter.',
+    tags: ['basket-weave', 'sine'],
+    design: base({
+      rosette: { baseRadius: 50, layers: [{ lobes: 18, amplitude: 1.6, phase: 0, wave: { shape: 'sine' } }] },
+      study: { ...EXAMPLE_DESIGN.study, lines: 48, schedule: { kind: 'ramp', steps: 6 } },
+    }),
+  },
+  {
+    owner: 'saskia@example.test',
+    board: 'Dial work',
+    title: 'Dial moiré, thirty-six lobes',
+    description: 'Fine spacing and a slow sinusoidal phase drift for a watch dial; the moiré shows at arm\'s length.',
+    tags: ['moire', 'dial', 'fine'],
+    design: base({
+      rosette: { baseRadius: 45, layers: [{ lobes: 36, amplitude: 0.8, phase: 0, wave: { shape: 'sine' } }] },
+      follower: { radius: 2.38125 },
+      study: { lineSpacing: 0.3, lines: 80, schedule: { kind: 'sine', period: 32, depth: 0.5 }, vAngle: 120, depth: 0.06 },
+    }),
+  },
+  {
+    owner: 'saskia@example.test',
+    board: 'Dial work',
+    title: 'Scalloped forty-eight',
+    description: 'Circular-arc lobes meeting in cusps; the rubber rounds the cusps a little, which softens the line.',
+    tags: ['scallop', 'dial'],
+    design: base({
+      rosette: { baseRadius: 50, layers: [{ lobes: 48, amplitude: 0.6, phase: 0, wave: { shape: 'scallop' } }] },
+      rubber: { shape: 'round', radius: 0.8 },
+      study: { ...EXAMPLE_DESIGN.study, lineSpacing: 0.35, lines: 60, schedule: { kind: 'alternate' } },
+    }),
+  },
+  {
+    owner: 'tobias@example.test',
+    board: 'Keepers in A2',
+    title: 'Flat-topped twelve, straight lines',
+    description: 'A clipped sine gives flats between the waves. Drawn in inches; plain schedule, every line in phase.',
+    tags: ['flat', 'keeper', 'plain-waves'],
+    design: {
+      format: 'barwright.design/1',
+      units: 'in',
+      rosette: { baseRadius: 2, layers: [{ lobes: 12, amplitude: 0.06, phase: 0, wave: { shape: 'flat', clip: 0.7 } }] },
+      rubber: { shape: 'round', radius: 0.04 },
+      motion: { travelPerRev: 4, leverRatio: 1 },
+      cutter: { diameter: 0.1875, flutes: 2 },
+      bar: { length: 6, thickness: 0.3125, material: 'a2' },
+      follower: { radius: 0.09375 },
+      study: { lineSpacing: 0.018, lines: 40, schedule: { kind: 'none' }, vAngle: 120, depth: 0.004 },
+      plan: { stepOver: 0.003, cleanup: 0.01, travelSpeed: 4 },
+    },
+  },
+];
+
+/** A remix in the demo: Ibrahim's acrylic trial of Maren's first bar with a larger cutter. */
+export const DEMO_REMIX = {
+  of: 'Twenty-four sine, barleycorn',
+  by: 'ibrahim@example.test',
+  board: 'First trials',
+  title: 'Twenty-four sine, acrylic trial with a 6 mm cutter',
+  description: 'Maren\'s bar recut in cast acrylic with the 6 mm end mill I have; the crests round a little more.',
+  tags: ['barleycorn', 'trial', 'acrylic'],
+  change: (d: Design): Design => ({ ...d, cutter: { diameter: 6, flutes: 2 }, bar: { ...d.bar, material: 'acrylic' }, plan: { stepOver: 1, cleanup: 0.25, travelSpeed: 500 } }),
+};
+
+/** Who rated what (stars), and what was said. */
+export const DEMO_RATINGS: { by: string; title: string; stars: number }[] = [
+  { by: 'tobias@example.test', title: 'Twenty-four sine, barleycorn', stars: 5 },
+  { by: 'saskia@example.test', title: 'Twenty-four sine, barleycorn', stars: 4 },
+  { by: 'ibrahim@example.test', title: 'Twenty-four sine, barleycorn', stars: 5 },
+  { by: 'maren@example.test', title: 'Dial moiré, thirty-six lobes', stars: 5 },
+  { by: 'tobias@example.test', title: 'Dial moiré, thirty-six lobes', stars: 4 },
+  { by: 'maren@example.test', title: 'Flat-topped twelve, straight lines', stars: 3 },
+  { by: 'saskia@example.test', title: 'Eighteen-lobe basket weave', stars: 4 },
+];
+
+export const DEMO_COMMENTS: { by: string; title: string; body: string }[] = [
+  { by: 'tobias@example.test', title: 'Twenty-four sine, barleycorn', body: 'Cut this one last Saturday on the club engine. Fifteen passes in A2 as planned, no chatter.' },
+  { by: 'ibrahim@example.test', title: 'Twenty-four sine, barleycorn', body: 'Trying it in acrylic first with my 6 mm cutter; will post the trial.' },
+  { by: 'maren@example.test', title: 'Dial moiré, thirty-six lobes', body: 'The drift period of 32 lines is lovely. Did you try 24?' },
+];

@@ -1,0 +1,39 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { count } from 'drizzle-orm';
+import { entries, users } from '../db/schema';
+import { openTestDatabase, type TestDatabase } from '../apps/server/src/testing/test-database';
+import { Client, startTestServer, type TestServer } from '../apps/server/src/testing/test-app';
+import { seedDemoScenario } from './seed-demo';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-scenario';
+import { DEMO_BARS } from './demo-bars';
+
+describe('the demo scenario', () => {
+  let database: TestDatabase;
+  let server: TestServer;
+  beforeAll(async () => {
+    database = await openTestDatabase('pglite');
+    server = await startTestServer(database);
+  });
+  afterAll(async () => {
+    await server.close();
+    await database.close();
+  });
+
+  it('seeds an empty database once: accounts, published bars with a remix, ratings and comments', async () => {
+    expect(await seedDemoScenario(database.db)).toBe(true);
+    expect(await seedDemoScenario(database.db)).toBe(false);
+    expect((await database.db.select({ n: count() }).from(users))[0].n).toBe(DEMO_ACCOUNTS.length);
+    expect((await database.db.select({ n: count() }).from(entries))[0].n).toBe(DEMO_BARS.length + 1);
+    const explore = await request(server.app).get('/api/entries?sort=top');
+    expect(explore.body.items[0].title).toBe('Twenty-four sine, barleycorn');
+    expect(explore.body.items[0].remixCount).toBe(1);
+  });
+
+  it('uses only invented people at the reserved example.test domain, and every demo account signs in', async () => {
+    for (const a of DEMO_ACCOUNTS) {
+      expect(a.email).toMatch(/@example\.test$/);
+      await new Client(server.app).signIn(a.email, DEMO_PASSWORD);
+    }
+  });
+});
