@@ -1,6 +1,7 @@
 import { OpenAPIRegistry, OpenApiGeneratorV31, type RouteConfig } from '@asteasolutions/zod-to-openapi';
 import * as z from 'zod';
 import * as c from '@barwright/contracts';
+import { COMMUNITY_ROUTES } from './community-routes';
 
 /**
  * The OpenAPI 3.1 document of every route, generated from the contracts' zod schemas: request
@@ -75,7 +76,7 @@ const pathParams = (path: string) => {
 export function openApiDocument(extra: Route[] = []) {
   const registry = new OpenAPIRegistry();
   registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'barwright.sid' });
-  for (const r of [...ROUTES, ...extra]) {
+  for (const r of [...ROUTES, ...COMMUNITY_ROUTES, ...extra]) {
     const status = r.status ?? 200;
     const params = pathParams(r.path);
     registry.registerPath({
