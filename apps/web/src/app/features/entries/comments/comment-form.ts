@@ -14,7 +14,7 @@ import { formProblem } from '../../../shared/forms/form-problem';
   selector: 'bw-comment-form',
   imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule],
   template: `
-    <form (ngSubmit)="submit()" novalidate class="comment-form">
+    <form (submit)="$event.preventDefault(); submit()" novalidate class="comment-form">
       <mat-form-field class="field">
         <mat-label>{{ label() }}</mat-label>
         <textarea matInput [formControl]="body" rows="3" [attr.maxlength]="max" [attr.data-testid]="testId() + '-body'"></textarea>
