@@ -144,6 +144,9 @@ export const comments = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     editedAt: timestamp('edited_at', { withTimezone: true }),
     deletedAt: timestamp('deleted_at', { withTimezone: true }),
+    /** Set by moderation (db/schema/moderation.ts): seen only by its author and moderators. Reversible. */
+    hiddenAt: timestamp('hidden_at', { withTimezone: true }),
+    hiddenReason: text('hidden_reason'),
   },
   (t) => [index('comments_entry_idx').on(t.entryId, t.createdAt), index('comments_author_idx').on(t.authorId, t.createdAt)],
 );

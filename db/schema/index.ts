@@ -4,3 +4,4 @@ export * from './boards';
 export * from './community';
 export * from './shop-log';
 export * from './notifications';
+export * from './moderation';

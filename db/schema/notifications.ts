@@ -1,7 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, index, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { boards } from './boards';
-import { entries } from './community';
+import { comments, entries } from './community';
 import { users } from './users';
 
 /** What happened, for whom. `data` keeps the words of the moment (titles, names) for the sentence. */
@@ -14,6 +14,8 @@ export const notifications = pgTable(
     actorId: uuid('actor_id').references(() => users.id, { onDelete: 'set null' }),
     entryId: uuid('entry_id').references(() => entries.id, { onDelete: 'cascade' }),
     boardId: uuid('board_id').references(() => boards.id, { onDelete: 'cascade' }),
+    /** The comment a `comment` notification tells of, so it leaves the list while that comment is hidden. */
+    commentId: uuid('comment_id').references(() => comments.id, { onDelete: 'cascade' }),
     data: jsonb('data').$type<{ entryTitle?: string; boardName?: string; actorName?: string; stars?: number; role?: string }>().notNull().default({}),
     readAt: timestamp('read_at', { withTimezone: true }),
     /** Waiting for the member's daily digest e-mail. */

@@ -27,6 +27,9 @@ export const photos = pgTable(
     fileName: text('file_name').notNull(),
     thumbName: text('thumb_name').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    /** Set by moderation (db/schema/moderation.ts): seen only by its uploader and moderators. Reversible. */
+    hiddenAt: timestamp('hidden_at', { withTimezone: true }),
+    hiddenReason: text('hidden_reason'),
   },
   (t) => [
     index('photos_entry_idx').on(t.entryId, t.createdAt),

@@ -51,7 +51,7 @@ export async function openTestDatabase(driver: Driver): Promise<TestDatabase> {
   return {
     ...database,
     reset: async () => {
-      await database.db.execute(sql`TRUNCATE users, sessions, account_tokens, boards, board_members, board_invitations, designs, design_updates, design_versions, entries, entry_revisions, design_origins, entry_ratings, comments, photos, notifications, notification_settings RESTART IDENTITY CASCADE`);
+      await database.db.execute(sql`TRUNCATE users, sessions, account_tokens, boards, board_members, board_invitations, designs, design_updates, design_versions, entries, entry_revisions, design_origins, entry_ratings, comments, photos, notifications, notification_settings, showcase_items, reports, audit_log RESTART IDENTITY CASCADE`);
     },
     close: async () => {
       await database.close();
