@@ -59,3 +59,12 @@ describe('errorsByField', () => {
     expect(problemLines(errors)).toContain('Layer 1 · Lobes must be at least 1');
   });
 });
+
+describe('valueAt', () => {
+  it('reads a value by dotted path, undefined where the path leads nowhere', async () => {
+    const { valueAt } = await import('./design-values');
+    expect(valueAt(EXAMPLE_DESIGN, 'rosette.layers[0].lobes')).toBe(24);
+    expect(valueAt(EXAMPLE_DESIGN, 'rosette.layers[3].lobes')).toBeUndefined();
+    expect(valueAt(null, 'units')).toBeUndefined();
+  });
+});

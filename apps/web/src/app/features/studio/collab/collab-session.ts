@@ -1,0 +1,163 @@
+import { DOCUMENT } from '@angular/common';
+import { computed, DestroyRef, inject, Injectable, linkedSignal, signal } from '@angular/core';
+import { CLOSE_CODES, parseDesign, type Design } from '@barwright/contracts';
+import { DESIGN_MAP, NOTES_TEXT, readDesign, setDesignField } from '@barwright/contracts/design-doc';
+import { WebsocketProvider } from 'y-websocket';
+import * as Y from 'yjs';
+import { errorsByField } from '../fields/field-errors';
+import { connectionStatus, type SocketFacts } from './connection-status';
+import { addItem, clearField, removeItem, writeChangedLeaves } from './design-writes';
+import { colourFor, peersFrom, type Peer, type PresenceState } from './presence';
+
+/** Pointer updates sent at most this often (ms); awareness relays every one to everybody. */
+const POINTER_INTERVAL_MS = 40;
+
+/**
+ * One bar design's live document for the lifetime of the editor that provides it: the Yjs doc, its
+ * y-websocket connection at `/collab/<designId>`, presence (awareness) and this tab's own undo history.
+ * Everything the page reads is a signal; every edit goes into the document with this session's origin.
+ */
+@Injectable()
+export class CollabSession {
+  private readonly document = inject(DOCUMENT);
+  readonly doc = new Y.Doc();
+  /** The origin of this tab's edits: the undo manager tracks these and nobody else's. */
+  readonly origin = { tab: 'local edits' };
+  readonly notes = this.doc.getText(NOTES_TEXT);
+  private readonly designMap = this.doc.getMap(DESIGN_MAP);
+  private readonly undoManager = new Y.UndoManager([this.designMap, this.notes], { trackedOrigins: new Set([this.origin]), captureTimeout: 500 });
+  private provider: WebsocketProvider | null = null;
+
+  private readonly facts = signal<SocketFacts>({ socket: 'connecting', synced: false, closedWith: null, browserOffline: false });
+  private readonly everSynced = signal(false);
+  private readonly raw = signal<Record<string, unknown>>({});
+  private readonly others = signal<readonly Peer[]>([]);
+  private readonly stacks = signal({ undo: 0, redo: 0 });
+  private readonly writable = signal(false);
+  private readonly me = signal<PresenceState['user'] | null>(null);
+  private pointerTimer: ReturnType<typeof setTimeout> | null = null;
+  private pendingPointer: PresenceState['pointer'] | undefined;
+
+  /** The design as the document holds it now (not validated). */
+  readonly design = this.raw.asReadonly();
+  readonly parsed = computed(() => parseDesign(this.raw()));
+  /** The newest valid design: the views keep drawing it while a field holds an invalid value. */
+  readonly lastValid = linkedSignal<ReturnType<typeof parseDesign>, Design | null>({
+    source: this.parsed,
+    computation: (result, previous) => (result.ok ? result.design : (previous?.value ?? null)),
+  });
+  readonly fieldErrors = computed(() => {
+    const result = this.parsed();
+    return result.ok ? new Map<string, string>() : errorsByField(result.errors);
+  });
+  readonly status = computed(() => connectionStatus(this.facts(), CLOSE_CODES));
+  /** True once the document has arrived from the server at least once. */
+  readonly loaded = this.everSynced.asReadonly();
+  readonly peers = this.others.asReadonly();
+  readonly self = this.me.asReadonly();
+  readonly readOnly = computed(() => !this.writable());
+  readonly canUndo = computed(() => this.writable() && this.stacks().undo > 0);
+  readonly canRedo = computed(() => this.writable() && this.stacks().redo > 0);
+
+  constructor() {
+    this.designMap.observeDeep(() => this.raw.set(readDesign(this.doc)));
+    const countStacks = () => this.stacks.set({ undo: this.undoManager.undoStack.length, redo: this.undoManager.redoStack.length });
+    for (const event of ['stack-item-added', 'stack-item-popped', 'stack-cleared'] as const) this.undoManager.on(event, countStacks);
+    const view = this.document.defaultView;
+    const onlineChanged = () => this.facts.update((f) => ({ ...f, browserOffline: view?.navigator.onLine === false }));
+    view?.addEventListener('online', onlineChanged);
+    view?.addEventListener('offline', onlineChanged);
+    inject(DestroyRef).onDestroy(() => {
+      view?.removeEventListener('online', onlineChanged);
+      view?.removeEventListener('offline', onlineChanged);
+      this.close();
+    });
+  }
+
+  /** Connects to the design's document as `user`. Call once. */
+  open(designId: string, user: { id: string; name: string }): void {
+    const location = this.document.location;
+    const serverUrl = `${location.protocol === 'https:' ? 'wss' : 'ws'}://${location.host}/collab`;
+    // No BroadcastChannel: every update goes through the server, which drops a viewer's writes.
+    const provider = new WebsocketProvider(serverUrl, designId, this.doc, { disableBc: true });
+    this.provider = provider;
+    provider.on('status', ({ status }) => this.facts.update((f) => ({ ...f, socket: status, synced: status === 'connected' && f.synced })));
+    provider.on('sync', (synced: boolean) => {
+      this.facts.update((f) => ({ ...f, synced }));
+      if (synced) this.everSynced.set(true);
+    });
+    provider.on('closed', ({ code }) => this.facts.update((f) => ({ ...f, closedWith: code })));
+    const colour = colourFor(user.id);
+    this.me.set({ ...user, colour });
+    provider.awareness.setLocalState({ user: { ...user, colour }, field: null, pointer: null } satisfies PresenceState);
+    provider.awareness.on('change', () => this.others.set(peersFrom(provider.awareness.getStates(), this.doc.clientID)));
+  }
+
+  /** Editors write; viewers only follow (the server drops their writes anyway). */
+  setWritable(writable: boolean): void {
+    this.writable.set(writable);
+  }
+
+  /** Sets one field by path, e.g. `['rosette', 'layers', 0, 'lobes']`. */
+  setField(path: readonly (string | number)[], value: unknown): void {
+    if (this.writable()) setDesignField(this.doc, path, value, this.origin);
+  }
+
+  /** Removes an optional field, e.g. `['plan', 'surfaceSpeed']`. */
+  clearField(path: readonly (string | number)[]): void {
+    if (this.writable()) clearField(this.doc, path, this.origin);
+  }
+
+  /** Appends to a list of the design: a rosette layer, a Fourier term. */
+  addItem(listPath: readonly (string | number)[], item: unknown): void {
+    if (this.writable()) addItem(this.doc, listPath, item, this.origin);
+  }
+
+  /** Removes one item of a list, keeping at least one. */
+  removeItem(listPath: readonly (string | number)[], index: number): void {
+    if (this.writable()) removeItem(this.doc, listPath, index, this.origin);
+  }
+
+  /** Writes a whole design over the current one, changing only the fields that differ (a units switch). */
+  replaceDesign(next: Design): void {
+    if (this.writable()) writeChangedLeaves(this.doc, this.raw(), next, this.origin);
+  }
+
+  undo(): void {
+    if (this.canUndo()) this.undoManager.undo();
+  }
+
+  redo(): void {
+    if (this.canRedo()) this.undoManager.redo();
+  }
+
+  /** Says which field this tab is editing (null: none); a new field starts a new undo step. */
+  focusField(field: string | null): void {
+    this.undoManager.stopCapturing();
+    this.provider?.awareness.setLocalStateField('field', field);
+  }
+
+  /** The pointer over a view, as fractions of its size; null when it leaves. Sent at most every 40 ms. */
+  movePointer(pointer: PresenceState['pointer']): void {
+    this.pendingPointer = pointer;
+    if (this.pointerTimer !== null) return;
+    this.sendPointer();
+    this.pointerTimer = setTimeout(() => {
+      this.pointerTimer = null;
+      if (this.pendingPointer !== undefined) this.sendPointer();
+    }, POINTER_INTERVAL_MS);
+  }
+
+  private sendPointer(): void {
+    this.provider?.awareness.setLocalStateField('pointer', this.pendingPointer ?? null);
+    this.pendingPointer = undefined;
+  }
+
+  private close(): void {
+    if (this.pointerTimer !== null) clearTimeout(this.pointerTimer);
+    this.undoManager.destroy();
+    this.provider?.destroy();
+    this.provider = null;
+    this.doc.destroy();
+  }
+}

@@ -1,0 +1,95 @@
+import { computed, DestroyRef, inject, Injectable, signal } from '@angular/core';
+import type { Design } from '@barwright/contracts';
+import type { ComputeReply, ComputeRequest } from './compute-messages';
+import { computeDesignViews, type DesignViews } from './design-views';
+
+/** How long a refinement may run before the views say they are still working (ms). */
+const PROGRESS_AFTER_MS = 150;
+
+/**
+ * Computes the live views of the editor's design in a Web Worker: a preview in a few milliseconds,
+ * then the full computation (tens of milliseconds for a 150 mm bar). Only the newest request counts.
+ */
+@Injectable()
+export class DesignCompute {
+  private readonly worker = createWorker();
+  private nextId = 0;
+  private readonly requested = signal(0);
+  private readonly shown = signal<{ id: number; views: DesignViews } | null>(null);
+  private readonly refined = signal<{ id: number; views: DesignViews } | null>(null);
+  private readonly slow = signal(false);
+  private readonly failure = signal<string | null>(null);
+  private readonly sentAt = new Map<number, number>();
+  private readonly latency = signal<number | null>(null);
+  private slowTimer: ReturnType<typeof setTimeout> | null = null;
+
+  /** The newest views computed (a preview until the full computation lands). */
+  readonly views = computed(() => this.shown()?.views ?? null);
+  /** The newest full computation: the cut plan and the warnings come from it. */
+  readonly full = computed(() => this.refined()?.views ?? null);
+  /** True while the full computation of the newest design has been running for a while. */
+  readonly working = this.slow.asReadonly();
+  readonly error = this.failure.asReadonly();
+  /** From handing the design to the worker to the first views back, ms (the redraw follows in the next frame). */
+  readonly lastLatencyMs = this.latency.asReadonly();
+
+  constructor() {
+    this.worker?.addEventListener('message', (event: MessageEvent<ComputeReply>) => this.receive(event.data));
+    inject(DestroyRef).onDestroy(() => {
+      this.worker?.terminate();
+      if (this.slowTimer) clearTimeout(this.slowTimer);
+    });
+  }
+
+  /** Asks for the views of `design`; earlier requests still waiting are dropped. */
+  request(design: Design): void {
+    const id = ++this.nextId;
+    this.requested.set(id);
+    this.sentAt.set(id, performance.now());
+    if (this.slowTimer) clearTimeout(this.slowTimer);
+    this.slowTimer = setTimeout(() => this.slow.set((this.refined()?.id ?? 0) < this.requested()), PROGRESS_AFTER_MS);
+    if (this.worker) {
+      this.worker.postMessage({ id, design } satisfies ComputeRequest);
+    } else {
+      // No worker (an old browser): compute here, after this frame, full stage only.
+      setTimeout(() => this.receive(computeHere(id, design)), 0);
+    }
+  }
+
+  private receive(reply: ComputeReply): void {
+    if ('error' in reply) {
+      if (reply.id === this.requested()) this.failure.set(reply.error);
+      return;
+    }
+    const sent = this.sentAt.get(reply.id);
+    if (sent !== undefined) {
+      this.latency.set(performance.now() - sent);
+      this.sentAt.delete(reply.id);
+    }
+    if (reply.id >= (this.shown()?.id ?? 0)) this.shown.set({ id: reply.id, views: reply.views });
+    if (reply.views.stage === 'full' && reply.id >= (this.refined()?.id ?? 0)) {
+      this.refined.set({ id: reply.id, views: reply.views });
+      if (reply.id === this.requested()) {
+        this.slow.set(false);
+        this.failure.set(null);
+      }
+    }
+  }
+}
+
+function createWorker(): Worker | null {
+  if (typeof Worker === 'undefined') return null;
+  try {
+    return new Worker(new URL('./design-compute.worker', import.meta.url), { type: 'module', name: 'design-compute' });
+  } catch {
+    return null;
+  }
+}
+
+function computeHere(id: number, design: Design): ComputeReply {
+  try {
+    return { id, views: computeDesignViews(design, 'full') };
+  } catch (error) {
+    return { id, error: error instanceof Error ? error.message : String(error) };
+  }
+}

@@ -1,0 +1,39 @@
+/// <reference lib="webworker" />
+import type { ComputeReply, ComputeRequest } from './compute-messages';
+import { computeDesignViews, transferables, type ComputeStage } from './design-views';
+
+/*
+ * The engine off the page's thread. For each request: a quick preview, then the full computation.
+ * Requests that arrive meanwhile replace the waiting one, so a slider dragged fast computes only
+ * the latest value; between the two stages the worker yields so a newer request can overtake.
+ */
+let latest: ComputeRequest | null = null;
+let running = false;
+
+addEventListener('message', (event: MessageEvent<ComputeRequest>) => {
+  latest = event.data;
+  if (!running) void work();
+});
+
+async function work(): Promise<void> {
+  running = true;
+  while (latest) {
+    const request = latest;
+    latest = null;
+    for (const stage of ['preview', 'full'] as ComputeStage[]) {
+      if (latest) break; // overtaken: start on the newer design
+      reply(request.id, stage, request);
+      await new Promise((resolve) => setTimeout(resolve, 0));
+    }
+  }
+  running = false;
+}
+
+function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
+  try {
+    const views = computeDesignViews(request.design, stage);
+    self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
+  } catch (error) {
+    self.postMessage({ id, error: error instanceof Error ? error.message : String(error) } satisfies ComputeReply);
+  }
+}

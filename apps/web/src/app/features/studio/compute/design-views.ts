@@ -1,0 +1,99 @@
+import type { Design } from '@barwright/contracts';
+import { computeLineStudy, computeProfile, planCut, toMm, type CutPlan, type EngineWarning, type Profile } from '@barwright/engine';
+
+/** How fine to compute: a quick preview (about 200 samples a period) or the engine's own default step. */
+export type ComputeStage = 'preview' | 'full';
+
+/** Samples per period of the preview: a few milliseconds for a typical bar, visually the same curve. */
+export const PREVIEW_SAMPLES_PER_PERIOD = 200;
+
+/** The bar profile as typed arrays (mm), cheap to hand from a worker to the page. */
+export interface ProfileData {
+  period: number;
+  step: number;
+  x: Float64Array;
+  cutter: Float64Array;
+  bar: Float64Array;
+  follower: Float64Array;
+  minRadiusOfCurvature: number;
+  warnings: EngineWarning[];
+  /** Cutter and follower radii and the bar's length the profile was computed for, mm. */
+  cutterRadius: number;
+  followerRadius: number;
+  barLength: number;
+}
+
+/** The line study (mm): each line as interleaved x, y pairs. */
+export interface StudyData {
+  spacing: number;
+  width: number;
+  length: number;
+  /** The V-groove's depth (mm) and included angle (degrees). */
+  depth: number;
+  vAngle: number;
+  lines: Float64Array[];
+}
+
+/** Everything the live views draw for one state of the design. */
+export interface DesignViews {
+  stage: ComputeStage;
+  profile: ProfileData;
+  study: StudyData;
+  /** Only from the full computation (the preview's step is too coarse for depths and warnings). */
+  plan: CutPlan | null;
+  /** Time the engine took, ms. */
+  ms: number;
+}
+
+/** Runs the engine on a valid design. Pure apart from reading the clock. */
+export function computeDesignViews(design: Design, stage: ComputeStage): DesignViews {
+  const started = performance.now();
+  const step = stage === 'preview' ? previewStep(design) : undefined;
+  const profile = computeProfile(design, step === undefined ? {} : { step });
+  const study = computeLineStudy(design, profile);
+  const plan = stage === 'full' ? planCut(design, profile) : null;
+  const mm = toMm(design);
+  const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
+  const groove = { depth: mm.study.depth, vAngle: mm.study.vAngle };
+  return { stage, profile: { ...profileData(profile), ...sizes }, study: { ...studyData(study), ...groove }, plan, ms: performance.now() - started };
+}
+
+/** The preview's step (mm): the period on the bar over PREVIEW_SAMPLES_PER_PERIOD, in the file's units converted to mm. */
+export function previewStep(design: Design): number {
+  const perMm = design.units === 'in' ? 25.4 : 1;
+  const lobes = Math.max(1, ...design.rosette.layers.map((l) => l.lobes));
+  return (design.motion.travelPerRev * perMm) / lobes / PREVIEW_SAMPLES_PER_PERIOD;
+}
+
+function profileData(p: Profile): Omit<ProfileData, 'cutterRadius' | 'followerRadius' | 'barLength'> {
+  const n = p.barEdge.length;
+  const x = new Float64Array(n);
+  const cutter = new Float64Array(n);
+  const bar = new Float64Array(n);
+  const follower = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    x[i] = p.barEdge[i][0];
+    bar[i] = p.barEdge[i][1];
+    cutter[i] = p.cutterPath[i][1];
+    follower[i] = p.followerPath[i][1];
+  }
+  return { period: p.period, step: p.step, x, cutter, bar, follower, minRadiusOfCurvature: p.minRadiusOfCurvature, warnings: p.warnings };
+}
+
+function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'depth' | 'vAngle'> {
+  const lines = s.lines.map((line) => {
+    const xy = new Float64Array(line.points.length * 2);
+    line.points.forEach(([x, y], i) => {
+      xy[2 * i] = x;
+      xy[2 * i + 1] = y;
+    });
+    return xy;
+  });
+  return { spacing: s.spacing, width: s.width, length: s.length, lines };
+}
+
+/** The buffers of a result, handed over to the page without copying. */
+export function transferables(views: DesignViews): ArrayBuffer[] {
+  const p = views.profile;
+  return [p.x, p.cutter, p.bar, p.follower, ...views.study.lines].map((a) => a.buffer as ArrayBuffer);
+}

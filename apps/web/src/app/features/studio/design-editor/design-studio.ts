@@ -1,0 +1,141 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, OnInit, signal, untracked } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatDialog } from '@angular/material/dialog';
+import { MatExpansionModule } from '@angular/material/expansion';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatTooltipModule } from '@angular/material/tooltip';
+import { Router, RouterLink } from '@angular/router';
+import { createDesignBody, DESIGN_TITLE_MAX } from '@barwright/contracts';
+import { map } from 'rxjs';
+import { AuthStore } from '../../../core/auth/auth-store';
+import { Notifier } from '../../../core/error-handling/notifier';
+import { ApiError } from '../../../core/http/api-error';
+import { askForName } from '../../../shared/name-dialog/name-dialog';
+import { CollabSession } from '../collab/collab-session';
+import { ConnectionChip } from '../collab/connection-chip';
+import { NotesEditor } from '../collab/notes-editor';
+import { DesignCompute } from '../compute/design-compute';
+import { countUnder, problemLines } from '../fields/field-errors';
+import { HistoryPanel } from '../history/history-panel';
+import { CutPlanPanel } from '../panels/cut-plan-panel';
+import { CutterBarPanel } from '../panels/cutter-bar-panel';
+import { DesignUnits } from '../panels/design-units';
+import { FollowerStudyPanel } from '../panels/follower-study-panel';
+import { RosettePanel } from '../panels/rosette-panel';
+import { RubberMotionPanel } from '../panels/rubber-motion-panel';
+import { PresenceBar } from '../presence/presence-bar';
+import { StudioStore } from '../studio-store';
+import { BarProfileView } from '../views/bar-profile-view/bar-profile-view';
+import { CutPlanView } from '../views/cut-plan-view/cut-plan-view';
+import { ExportButtons } from '../views/export-buttons/export-buttons';
+import { LineStudyView } from '../views/line-study-view/line-study-view';
+
+/** Below this width the parameters and the views share the screen by a switch. */
+const NARROW_QUERY = '(max-width: 959.98px)';
+
+/** The parameter panels, grouped as the trade thinks, with the design paths each holds. */
+export const PANELS = [
+  { id: 'rosette', title: 'Rosette and its layers', prefixes: ['rosette'] },
+  { id: 'rubber', title: 'Rubber and motion', prefixes: ['rubber', 'motion'] },
+  { id: 'cutter', title: 'Cutter and bar', prefixes: ['cutter', 'bar.length', 'bar.thickness'] },
+  { id: 'study', title: 'Follower and line study', prefixes: ['follower', 'study'] },
+  { id: 'plan', title: 'Cut plan', prefixes: ['plan', 'bar.material'] },
+] as const;
+
+/**
+ * The studio for one bar design. It provides the design's live session, its compute worker and its
+ * store, so all three are made when a design is opened and go when it is left.
+ */
+@Component({
+  selector: 'bw-design-studio',
+  imports: [
+    RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
+    ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
+    FollowerStudyPanel, CutPlanPanel, BarProfileView, LineStudyView, CutPlanView, ExportButtons,
+  ],
+  providers: [CollabSession, DesignCompute, StudioStore],
+  templateUrl: './design-studio.html',
+  styleUrl: './design-studio.scss',
+  host: { '(document:keydown)': 'shortcut($event)' },
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class DesignStudio implements OnInit {
+  protected readonly session = inject(CollabSession);
+  protected readonly compute = inject(DesignCompute);
+  protected readonly store = inject(StudioStore);
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+  private readonly notifier = inject(Notifier);
+  private readonly dialog = inject(MatDialog);
+
+  readonly designId = input.required<string>();
+  protected readonly panels = PANELS;
+  protected readonly narrow = toSignal(inject(BreakpointObserver).observe(NARROW_QUERY).pipe(map((s) => s.matches)), { initialValue: false });
+  /** On a narrow screen: which half is shown. The views come first. */
+  protected readonly pane = signal<'views' | 'parameters'>('views');
+  protected readonly problems = computed(() => problemLines(this.session.fieldErrors()));
+  protected readonly returnUrl = computed(() => `/studio/${this.designId()}`);
+
+  constructor() {
+    effect(() => this.session.setWritable(this.store.canEdit()));
+    effect(() => {
+      const design = this.session.lastValid();
+      if (design) untracked(() => this.compute.request(design));
+    });
+  }
+
+  ngOnInit(): void {
+    const me = this.auth.me();
+    if (me) this.session.open(this.designId(), { id: me.id, name: me.displayName });
+    void this.loadMeta();
+  }
+
+  protected problemsIn(prefixes: readonly string[]): number {
+    return countUnder(this.session.fieldErrors(), prefixes);
+  }
+
+  protected async rename(): Promise<void> {
+    const meta = this.store.meta();
+    if (!meta) return;
+    await askForName(this.dialog, {
+      title: 'Rename design',
+      label: 'Title',
+      initial: meta.title,
+      maxLength: DESIGN_TITLE_MAX,
+      schema: createDesignBody.shape.title,
+      confirmLabel: 'Rename',
+      testId: 'studio-rename',
+      save: (title) => this.store.rename(title),
+    });
+  }
+
+  /** Ctrl+Z undoes your own last edit, Ctrl+Shift+Z (or Ctrl+Y) redoes it; nobody else's edits are touched. */
+  protected shortcut(event: KeyboardEvent): void {
+    if (!(event.ctrlKey || event.metaKey) || event.altKey) return;
+    const key = event.key.toLowerCase();
+    if (key === 'z' && !event.shiftKey) {
+      event.preventDefault();
+      this.session.undo();
+    } else if ((key === 'z' && event.shiftKey) || key === 'y') {
+      event.preventDefault();
+      this.session.redo();
+    }
+  }
+
+  private async loadMeta(): Promise<void> {
+    try {
+      await this.store.load(this.designId());
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 404) {
+        void this.notifier.tell('That design does not exist, or you are not on its board.');
+        await this.router.navigate(['/boards']);
+        return;
+      }
+      throw error;
+    }
+  }
+}
