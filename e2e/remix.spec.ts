@@ -45,11 +45,13 @@ test('a member publishes a bar, another finds it in Explore, remixes it with a n
   await ibrahim.page.getByTestId('explore-row-link').click();
   await expect(ibrahim.page.getByTestId('entry-title')).toHaveText(ORIGINAL);
 
-  // He rates it (and changes his mind), then remixes it onto his board.
-  await ibrahim.page.getByTestId('entry-rate-4').check({ force: true });
+  // He rates it with the keyboard alone (and changes his mind), then remixes it onto his board.
+  await ibrahim.page.getByTestId('entry-rate-4').focus();
+  await ibrahim.page.keyboard.press('Space');
   await expect(ibrahim.page.getByTestId('entry-rating-summary')).toHaveText('4.0 of 5 (1 rating)');
-  await ibrahim.page.getByTestId('entry-rate-5').check({ force: true });
+  await ibrahim.page.keyboard.press('ArrowRight');
   await expect(ibrahim.page.getByTestId('entry-rating-summary')).toHaveText('5.0 of 5 (1 rating)');
+  await expect(ibrahim.page.getByTestId('entry-my-stars')).toHaveText('You gave it 5 stars.');
   await ibrahim.page.getByTestId('entry-remix').click();
   await ibrahim.page.getByTestId(`remix-board-${ibrahimBoard}`).click();
   await shoot(ibrahim.page, 'remix-dialog');
@@ -100,11 +102,27 @@ test('a member publishes a bar, another finds it in Explore, remixes it with a n
   await ibrahim.context.close();
 });
 
+test('a visitor reads the design page: drawings, cut plan with its cautions, downloads; acting needs a sign-in', async ({ page }) => {
+  await page.goto('/explore');
+  await page.getByTestId('explore-search').fill(ORIGINAL);
+  await expect(page.getByTestId('explore-count')).toContainText(`match “${ORIGINAL}”`);
+  await page.getByTestId('entry-card-link').filter({ hasText: ORIGINAL }).first().click();
+  await expect(page.getByTestId('entry-title')).toHaveText(ORIGINAL);
+  await expect(page.getByTestId('entry-study-flat')).toBeVisible();
+  await expect(page.getByTestId('entry-profile-svg')).toBeVisible();
+  await expect(page.getByTestId('entry-plan-figures')).toContainText('Passes');
+  await expect(page.getByTestId('entry-plan-cautions')).toContainText(/loose clothing/);
+  await expect(page.getByTestId('entry-remix-sign-in')).toBeVisible();
+  const download = await page.request.get((await page.getByTestId('entry-download-gcode').getAttribute('href'))!);
+  expect(download.headers()['content-disposition']).toMatch(/attachment/);
+  await shoot(page, 'entry-visitor');
+});
+
 test('on the design page a member comments and replies, and logs a photo of a trial cut with a progress bar; bad files are refused', async ({ browser }) => {
   const saskia = await memberPage(browser, 'saskia@example.test');
   const page: Page = saskia.page;
   await page.goto(`/explore?q=${encodeURIComponent(ORIGINAL)}`);
-  await page.getByTestId('entry-card-link').filter({ hasText: ORIGINAL }).click();
+  await page.getByTestId('entry-card-link').filter({ hasText: ORIGINAL }).first().click();
   await expect(page.getByTestId('entry-title')).toHaveText(ORIGINAL);
 
   // A comment stays text: markup is shown, not run; a web address becomes a safe link.

@@ -11,6 +11,7 @@ export class EntryStore {
   private readonly remixList = signal<EntryCard[] | null>(null);
   private readonly diff = signal<EntryChanges | null>(null);
   private readonly rating = signal(false);
+  private wanted: { stars: number | null } | null = null;
 
   readonly entry = this.current.asReadonly();
   readonly lineage = this.tree.asReadonly();
@@ -28,12 +29,30 @@ export class EntryStore {
     this.diff.set(changes);
   }
 
-  async rate(stars: number): Promise<void> {
-    await this.rated(() => this.api.rate(this.requireId(), stars));
+  /**
+   * Sets the viewer's stars (null removes them). Quick changes (arrow keys across the stars) are not
+   * sent one by one: while one request is on its way only the newest choice waits, and goes next.
+   */
+  async rate(stars: number | null): Promise<void> {
+    this.wanted = { stars };
+    if (this.rating()) return;
+    this.rating.set(true);
+    try {
+      while (this.wanted) {
+        const { stars: next } = this.wanted;
+        this.wanted = null;
+        const id = this.requireId();
+        const answer = next === null ? await this.api.unrate(id) : await this.api.rate(id, next);
+        this.current.update((e) => (e ? { ...e, rating: answer.rating, viewer: { ...e.viewer, myStars: answer.myStars } } : e));
+      }
+    } finally {
+      this.wanted = null;
+      this.rating.set(false);
+    }
   }
 
   async unrate(): Promise<void> {
-    await this.rated(() => this.api.unrate(this.requireId()));
+    await this.rate(null);
   }
 
   photoCount(n: number): void {
@@ -42,16 +61,6 @@ export class EntryStore {
 
   async remove(): Promise<void> {
     await this.api.deleteEntry(this.requireId());
-  }
-
-  private async rated(work: () => ReturnType<EntriesApi['rate']>): Promise<void> {
-    this.rating.set(true);
-    try {
-      const answer = await work();
-      this.current.update((e) => (e ? { ...e, rating: answer.rating, viewer: { ...e.viewer, myStars: answer.myStars } } : e));
-    } finally {
-      this.rating.set(false);
-    }
   }
 
   private requireId(): string {

@@ -12,7 +12,7 @@ import { NotificationCenter } from '../../core/notifications/notification-center
   template: `
     <a mat-button routerLink="/notifications" routerLinkActive="active" class="bell" [class.compact]="compact()" [attr.aria-label]="label()"
        data-testid="notification-bell">
-      <mat-icon aria-hidden="true" [matBadge]="badge()" [matBadgeHidden]="center.unread() === 0" matBadgeSize="small" matBadgeColor="accent"
+      <mat-icon aria-hidden="true" [matBadge]="badge()" [matBadgeHidden]="center.unread() === 0" matBadgeSize="medium" matBadgeColor="accent"
                 matBadgeOverlap="true" [matBadgeDescription]="''">notifications</mat-icon>
       @if (!compact()) { <span class="text">Notifications</span> }
       <span class="bw-visually-hidden" data-testid="notification-bell-count">{{ center.unread() }}</span>

@@ -65,7 +65,7 @@ const DOWNLOADS: readonly DownloadChoice[] = [
       }
       a {
         flex: none;
-        min-width: 6.5rem;
+        width: 7.5rem;
         justify-content: flex-start;
       }
     }

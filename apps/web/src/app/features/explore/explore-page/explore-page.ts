@@ -60,7 +60,9 @@ export class ExplorePage {
   protected readonly shownSort = computed<ExploreSort>(() => this.state().sort ?? this.store.page()?.sort ?? (this.state().q ? 'relevance' : 'newest'));
   protected readonly summary = computed(() => {
     const total = this.store.total();
-    return this.store.page() ? `${countText(total, 'published bar')}${this.state().q ? ` match “${this.state().q}”` : ''}` : '';
+    if (!this.store.page()) return '';
+    const q = this.state().q;
+    return `${countText(total, 'published bar')}${q ? ` ${total === 1 ? 'matches' : 'match'} “${q}”` : ''}`;
   });
   protected readonly authorName = computed(() => {
     const id = this.state().author;
@@ -79,6 +81,8 @@ export class ExplorePage {
     this.search.valueChanges
       .pipe(debounceTime(350), map((q) => q.trim()), distinctUntilChanged(), takeUntilDestroyed(inject(DestroyRef)))
       .subscribe((q) => {
+        // A result chosen while the pause ran wins: the late search must not pull the member back to Explore.
+        if (this.router.currentNavigation()) return;
         if (this.search.valid && q !== this.state().q) this.go({ q }, true);
       });
   }
