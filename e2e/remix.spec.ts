@@ -152,9 +152,11 @@ test('on the design page a member comments and replies, and logs a photo of a tr
   await saskia.context.close();
 });
 
-test('a member imports a measured rosette: the plot, the bad rows named, the points to take away', async ({ browser }) => {
+test('a member imports a measured rosette: the plot, the bad rows named, the points to take away, a design made of them', async ({ browser }) => {
   const tobias = await memberPage(browser, 'tobias@example.test');
   const page = tobias.page;
+  const board = `Rosette rack trials ${stamp}`;
+  await createBoard(page, board);
   await page.goto('/rosettes/measured');
   await page.getByTestId('measured-example').click();
   await expect(page.getByTestId('measured-ok')).toBeVisible();
@@ -167,5 +169,21 @@ test('a member imports a measured rosette: the plot, the bad rows named, the poi
   const download = page.waitForEvent('download');
   await page.getByTestId('measured-download').click();
   expect((await download).suggestedFilename()).toBe('measured-rosette.json');
+
+  // With the bad rows fixed, the readings become the rosette of a new design on his board, opened in the studio.
+  await table.fill((await table.inputValue()).replace('340,fifty\n350,-2\n', '340,50.1\n'));
+  await expect(page.getByTestId('measured-ok')).toBeVisible();
+  await page.getByTestId('measured-units').getByText('mm').click();
+  await page.getByTestId('measured-board').click();
+  await page.getByRole('option', { name: board }).click();
+  await page.getByTestId('measured-title').fill('Rosette 7, measured');
+  await page.getByTestId('measured-create').click();
+  await page.waitForURL(/\/studio\/[0-9a-f-]{36}$/);
+  const designId = new URL(page.url()).pathname.split('/').pop()!;
+  const design = (await (await page.request.get(`/api/designs/${designId}`)).json()) as { units: string; rosette: { baseRadius: number; layers: { lobes: number; wave: { shape: string; points: unknown[] } }[] } };
+  expect(design.units).toBe('mm');
+  expect(design.rosette.baseRadius).toBe(50);
+  expect(design.rosette.layers[0]).toMatchObject({ lobes: 1, wave: { shape: 'measured' } });
+  expect(design.rosette.layers[0].wave.points).toHaveLength(13);
   await tobias.context.close();
 });
