@@ -99,9 +99,17 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
   await expect(maren.getByTestId(LINES)).toHaveValue('40');
   await expect(maren.getByTestId(LOBES)).toHaveValue('30');
 
-  // Shared notes.
+  // Shared notes; Maren's caret stays on her word while Ibrahim types before it.
   await ibrahim.getByTestId('notes').fill('Trial in acrylic first.');
   await expect(maren.getByTestId('notes')).toHaveValue('Trial in acrylic first.');
+  await maren.getByTestId('notes').evaluate((box: HTMLTextAreaElement) => {
+    box.focus();
+    box.setSelectionRange(9, 9); // just before "acrylic"
+  });
+  await ibrahim.getByTestId('notes').evaluate((box: HTMLTextAreaElement) => box.setSelectionRange(0, 0));
+  await ibrahim.getByTestId('notes').pressSequentially('Cut: ');
+  await expect(maren.getByTestId('notes')).toHaveValue('Cut: Trial in acrylic first.');
+  expect(await maren.getByTestId('notes').evaluate((box: HTMLTextAreaElement) => box.selectionStart)).toBe(14);
 
   // An invalid value is a field message, and the views keep the last valid design.
   await maren.getByTestId(LOBES).fill('0');
@@ -120,6 +128,9 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
   await maren.getByTestId('pane-views').click();
   await maren.setViewportSize({ width: 1280, height: 900 });
   await shootFromTop(saskia, 'studio-viewer');
+  await saskia.getByTestId('ground-toggle').click();
+  await shootFromTop(saskia, 'studio-dark');
+  await saskia.getByTestId('ground-toggle').click();
 
   // A named version; change something; compare; restore.
   await maren.getByTestId('panel-history').click();
@@ -165,4 +176,24 @@ test('edits made offline merge when the connection returns', async ({ browser })
   await expect(maren.getByTestId('connection-status')).toHaveAttribute('data-status', 'live', { timeout: 15_000 });
   await expect(other.getByTestId(LINES)).toHaveValue('61');
   await expect(maren.getByTestId('field-study.lineSpacing')).toHaveValue('0.5');
+});
+
+test('switching the design to inches converts every length exactly, for everyone', async ({ browser }) => {
+  const maren = await (await browser.newContext()).newPage();
+  await signIn(maren, 'maren@example.test');
+  await createBoard(maren, `Units ${Date.now()}`);
+  const designId = await createDesign(maren, 'Inch bar', 'example');
+  await openStudio(maren, designId);
+  await maren.getByTestId('panel-cutter').getByRole('button').first().click();
+  await expect(maren.getByTestId('field-cutter.diameter')).toHaveValue('4.7625');
+  await maren.getByTestId('design-units-in').click();
+  await expect(maren.getByTestId('field-cutter.diameter')).toHaveValue('0.1875'); // a 3/16 in end mill (inch = 25.4 mm)
+  await expect(maren.getByTestId(LOBES)).toHaveValue('24');
+  await expect(maren.getByTestId('plan-figures')).toContainText('0.003 in');
+  await maren.getByTestId('undo').click();
+  await expect(maren.getByTestId('field-cutter.diameter')).toHaveValue('4.7625');
+
+  // Downloads come from the server's export of the live document.
+  const [download] = await Promise.all([maren.waitForEvent('download'), maren.getByTestId('export-svg').click()]);
+  expect(download.suggestedFilename()).toBe('inch-bar.svg');
 });

@@ -17,6 +17,7 @@ describe('planFigures', () => {
     const mm = planFigures(plan, 'mm');
     expect(mm.find((f) => f.label === 'Passes')?.value).toMatch(/^\d+ at 0\.0762 mm$/);
     expect(mm.find((f) => f.label === 'Spindle speed')?.value).toMatch(/rpm$/);
+    expect(mm.find((f) => f.label === 'Feed for the chip load')?.value).toMatch(/^\d+(\.\d)? mm\/min$/);
     const inch = planFigures(plan, 'in');
     expect(inch.find((f) => f.label === 'Passes')?.value).toMatch(/ at 0\.003 in$/);
     expect(inch.find((f) => f.label === 'Feed for the chip load')?.value).toMatch(/ in\/min$/);

@@ -26,8 +26,14 @@ export function planFigures(plan: CutPlan, units: Units): PlanFigure[] {
     { label: 'Time per pass', value: formatMinutes(plan.minutesPerPass) },
     { label: 'Total cutting time', value: formatMinutes(plan.totalMinutes) },
     { label: 'Spindle speed', value: `${Math.round(plan.rpm).toLocaleString('en')} rpm` },
-    { label: 'Feed for the chip load', value: `${len(plan.feedPerMinute)}/min` },
+    { label: 'Feed for the chip load', value: feed(plan.feedPerMinute, units) },
     { label: 'Chip load per tooth', value: len(plan.chipLoad) },
     { label: 'Surface speed', value: `${displayNumber('surfaceSpeed', plan.surfaceSpeed, units)} m/min` },
   ];
+}
+
+/** A feed per minute to a tenth of a millimetre or a hundredth of an inch: finer than a slide is set. */
+function feed(mmPerMinute: number, units: Units): string {
+  const value = units === 'in' ? Number((mmPerMinute / 25.4).toFixed(2)) : Number(mmPerMinute.toFixed(1));
+  return `${value} ${units}/min`;
 }
