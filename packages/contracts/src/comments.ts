@@ -44,6 +44,9 @@ export interface CommentNode {
   editableUntil: string | null;
   /** Replies, oldest first (always empty on replies). */
   replies: CommentNode[];
+  /** Moderation: set only for the viewers who may see a hidden comment (its author, moderators); to others it reads as deleted. */
+  hidden?: boolean;
+  hiddenReason?: string | null;
 }
 
 export interface CommentThread {

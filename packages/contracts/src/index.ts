@@ -14,3 +14,7 @@ export * from './shop-log';
 export * from './measured-rosette';
 export * from './notifications';
 export * from './socket-events';
+// Moderation: reports and the desk, the showcase, the audit log.
+export * from './moderation';
+export * from './showcase';
+export * from './audit';

@@ -60,4 +60,7 @@ export interface Photo {
   createdAt: string;
   url: string;
   thumbUrl: string;
+  /** Moderation: set only for the viewers who may see a hidden photo (its uploader, moderators); others never receive it. */
+  hidden?: boolean;
+  hiddenReason?: string | null;
 }
