@@ -24,6 +24,10 @@ import { DesignDocStore } from './realtime/design-doc-store';
 import { createCommunity } from './community/community';
 import type { CommunityLimits } from './community/community-limits';
 import { NotificationEvents } from './notifications/notification-events';
+// Moderation: the showcase, reports and the desk, the audit log.
+import { createModeration } from './moderation/moderation';
+import type { ModerationEvents } from './moderation/moderation-events';
+import type { ModerationLimits } from './moderation/moderation-limits';
 
 /** Idle and absolute session lifetimes. */
 export const SESSION_IDLE_MS = 7 * 24 * 3600_000;
@@ -53,6 +57,9 @@ export interface AppDeps {
   notificationEvents?: NotificationEvents;
   uploadsDir?: string;
   communityLimits?: Partial<CommunityLimits>;
+  /** Moderation: shared with the moderation socket gateway (queue counts, roles removed); lower limits for tests. */
+  moderationEvents?: ModerationEvents;
+  moderationLimits?: Partial<ModerationLimits>;
 }
 
 /** What main.ts needs besides the handler: the same session parser for the socket upgrade. */
@@ -60,6 +67,7 @@ export interface AppLocals {
   sessionParser: express.RequestHandler;
   accessEvents: BoardAccessEvents;
   notificationEvents: NotificationEvents;
+  moderationEvents: ModerationEvents;
 }
 
 /** Builds the Express app. It never listens: main.ts does, and tests call it through supertest. */
@@ -88,7 +96,11 @@ export function createApp(deps: AppDeps): express.Express {
     db: deps.db, store, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.sessionSecret,
     events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, log,
   });
-  Object.assign(app.locals, { sessionParser, accessEvents, notificationEvents: community.events } satisfies AppLocals);
+  const moderation = createModeration({
+    db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}), notificationEvents: community.events,
+    events: deps.moderationEvents, limits: deps.moderationLimits,
+  });
+  Object.assign(app.locals, { sessionParser, accessEvents, notificationEvents: community.events, moderationEvents: moderation.events } satisfies AppLocals);
   app.use(securityHeaders(secureCookies));
 
   const api = express.Router();
@@ -113,12 +125,13 @@ export function createApp(deps: AppDeps): express.Express {
     res.json({ localMail: Boolean(deps.localSmtp), demo: Boolean(deps.demo) } satisfies ClientConfig);
   });
   api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies }));
-  api.use('/admin', adminRouter({ db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}) }));
+  api.use('/admin', adminRouter(moderation.accounts)); // role changes and suspensions: one code path with the desk's, audited
   const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log, notifyInvited: community.notifier.invited.bind(community.notifier) };
   api.use('/boards', boardsRouter(boardDeps));
   api.use('/invitations', invitationsRouter(boardDeps));
   api.use('/designs', designsRouter({ db: deps.db, store, closeDesignSockets: deps.closeDesignSockets ?? (() => {}) }));
   api.use(community.router);
+  api.use(moderation.router);
   if (deps.localSmtp) api.use('/dev', mailboxRouter(deps.localSmtp));
   api.use(apiNotFound);
 

@@ -14,6 +14,7 @@ import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../../seeds/demo-scenario';
 import { NotificationEvents } from './notifications/notification-events';
 import { NotifyGateway } from './notifications/notify-gateway';
 import { DIGEST_CHECK_MS, sendDueDigests } from './notifications/digests';
+import { ModerationGateway } from './moderation/moderation-gateway';
 
 const log = (line: string) => console.log(`[barwright] ${line}`);
 
@@ -57,6 +58,8 @@ async function main() {
   gateway.attach(server);
   notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents });
   notify.attach(server);
+  // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
+  const moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
   const digests = setInterval(() => void sendDueDigests({ db: database.db, mailer, publicUrl: config.publicUrl, secret: sessionSecret }).catch(console.error), DIGEST_CHECK_MS);
   digests.unref();
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve));
@@ -77,6 +80,7 @@ async function main() {
     log(`${signal}: shutting down`);
     await gateway?.close();
     clearInterval(digests);
+    moderation.close();
     notify?.close();
     server.closeAllConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));

@@ -1,12 +1,12 @@
 import { Router, type RequestHandler } from 'express';
-import { asc, eq } from 'drizzle-orm';
+import { asc } from 'drizzle-orm';
 import { adminUpdateUserBody, type Role } from '@barwright/contracts';
 import { users } from '../../../../db/schema';
-import type { Db } from '../database/database';
-import type { DatabaseSessionStore } from '../auth/session-store';
-import { HttpError, forbidden, notFound, unauthenticated } from '../http/http-error';
+import { forbidden, unauthenticated } from '../http/http-error';
 import { parseBody } from '../http/validate';
-import { findUserById, toAdminUser } from '../auth/users';
+import { toAdminUser } from '../auth/users';
+// Role changes and suspensions go through one code path, which also writes the audit log.
+import { changeAccount, type AccountChangeDeps } from './account-changes';
 
 /** Lets the request through only for the given roles: 401 when signed out, 403 otherwise. */
 export function requireRole(...roles: Role[]): RequestHandler {
@@ -17,7 +17,7 @@ export function requireRole(...roles: Role[]): RequestHandler {
   };
 }
 
-export function adminRouter(deps: { db: Db; sessionStore: DatabaseSessionStore; closeUserSockets: (userId: string) => void }): Router {
+export function adminRouter(deps: AccountChangeDeps): Router {
   const router = Router();
   router.use(requireRole('admin'));
   router.get('/users', async (_req, res) => {
@@ -26,21 +26,7 @@ export function adminRouter(deps: { db: Db; sessionStore: DatabaseSessionStore; 
   });
   router.patch('/users/:id', async (req, res) => {
     const body = parseBody(adminUpdateUserBody, req.body);
-    const target = await findUserById(deps.db, req.params.id as string);
-    if (!target) throw notFound('user');
-    // An admin cannot lock themselves out: another admin must do it.
-    if (target.id === req.user!.id && ((body.role && body.role !== 'admin') || body.suspended)) {
-      throw new HttpError(409, 'conflict', 'You cannot demote or suspend your own account; ask another admin.');
-    }
-    const changes: Partial<typeof users.$inferInsert> = {};
-    if (body.role) changes.role = body.role;
-    if (body.suspended !== undefined) changes.suspendedAt = body.suspended ? (target.suspendedAt ?? new Date()) : null;
-    const [row] = await deps.db.update(users).set(changes).where(eq(users.id, target.id)).returning();
-    if (body.suspended) {
-      await deps.sessionStore.destroyUserSessions(target.id);
-      deps.closeUserSockets(target.id);
-    }
-    res.json(toAdminUser(row));
+    res.json(toAdminUser(await changeAccount(deps, req.user!, req.params.id as string, body)));
   });
   return router;
 }

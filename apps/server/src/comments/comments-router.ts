@@ -12,14 +12,14 @@ export function commentsRouter(deps: { db: Db; notifier: Notifier; limits: Comme
   const router = Router();
   router.get('/entries/:id/comments', async (req, res) => {
     const entry = await requireVisibleEntry(db, req.params.id, viewerOf(req));
-    res.json(await commentThread(db, entry.id, limits));
+    res.json(await commentThread(db, entry.id, limits, viewerOf(req)));
   });
   router.post('/entries/:id/comments', async (req, res) => {
     const user = requireUser(req);
     const entry = await requireOpenEntry(db, req.params.id, user, 'commented on');
     const body = parseBody(newCommentBody, req.body);
     const node = await addComment(db, entry.id, user, body.body, body.parentId, limits);
-    await deps.notifier.notify({ userId: entry.authorId, kind: 'comment', actor: user, entry });
+    await deps.notifier.notify({ userId: entry.authorId, kind: 'comment', actor: user, entry, comment: { id: node.id } });
     res.status(201).json(node);
   });
   router.patch('/comments/:id', async (req, res) => {

@@ -5,6 +5,7 @@ import type { Mailer } from '../mail/mailer';
 import { digestMail } from './notification-mails';
 import { describeNotification } from './notification-text';
 import { unsubscribeUrl } from './unsubscribe-token';
+import { shownNotifications } from '../moderation/hidden-visibility';
 
 /** At most one digest a day per member. */
 export const DIGEST_INTERVAL_MS = 24 * 3600_000;
@@ -42,8 +43,9 @@ export async function sendDueDigests(deps: DigestDeps, now = new Date()): Promis
     const pending = await db
       .select()
       .from(notifications)
-      .where(and(eq(notifications.userId, member.userId), eq(notifications.digestPending, true)))
+      .where(and(eq(notifications.userId, member.userId), eq(notifications.digestPending, true), shownNotifications))
       .orderBy(asc(notifications.createdAt));
+    if (!pending.length) continue; // all that waits is about items hidden meanwhile
     const lines = pending.slice(-DIGEST_MAX_LINES).map((n) => describeNotification(n).text);
     const unsubscribe = unsubscribeUrl(deps.publicUrl, deps.secret, member.userId);
     await deps.mailer.send(member.email, digestMail(member.name, lines, { open: `${deps.publicUrl}/notifications`, unsubscribe }));

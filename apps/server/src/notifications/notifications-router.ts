@@ -11,6 +11,7 @@ import { emailModeOf, setEmailMode } from './notification-settings';
 import { toNotification } from './notification-text';
 import type { Notifier } from './notifier';
 import { verifyUnsubscribeToken } from './unsubscribe-token';
+import { shownNotifications } from '../moderation/hidden-visibility';
 
 export interface NotificationsRouterDeps {
   db: Db;
@@ -36,7 +37,7 @@ export function notificationsRouter(deps: NotificationsRouterDeps): Router {
     const rows = await db
       .select()
       .from(notifications)
-      .where(and(eq(notifications.userId, user.id), query.before ? lt(notifications.createdAt, new Date(query.before)) : undefined))
+      .where(and(eq(notifications.userId, user.id), query.before ? lt(notifications.createdAt, new Date(query.before)) : undefined, shownNotifications))
       .orderBy(desc(notifications.createdAt))
       .limit(query.limit);
     res.json({ items: rows.map(toNotification), unread: await deps.notifier.unreadCount(user.id) } satisfies NotificationList);

@@ -9,6 +9,7 @@ import type { NotificationEvents } from './notification-events';
 import { emailModeOf } from './notification-settings';
 import { describeNotification, toNotification } from './notification-text';
 import { unsubscribeUrl } from './unsubscribe-token';
+import { shownNotifications } from '../moderation/hidden-visibility';
 
 export interface NotifierDeps {
   db: Db;
@@ -26,12 +27,14 @@ export interface NotifyInput {
   actor: { id: string; displayName: string };
   entry?: { id: string; title: string };
   board?: { id: string; name: string };
+  /** The comment told of, so the notification leaves the list while moderation hides it. */
+  comment?: { id: string };
   data?: { stars?: number; role?: string };
 }
 
-/** Notifications the member has not read yet. */
+/** Notifications the member has not read yet (of those shown: none about hidden items). */
 export async function unreadCount(db: Db, userId: string): Promise<number> {
-  const [{ n }] = await db.select({ n: count() }).from(notifications).where(and(eq(notifications.userId, userId), isNull(notifications.readAt)));
+  const [{ n }] = await db.select({ n: count() }).from(notifications).where(and(eq(notifications.userId, userId), isNull(notifications.readAt), shownNotifications));
   return n;
 }
 
@@ -78,6 +81,7 @@ export class Notifier {
         actorId: input.actor.id,
         entryId: input.entry?.id ?? null,
         boardId: input.board?.id ?? null,
+        commentId: input.comment?.id ?? null,
         data: { actorName: input.actor.displayName, entryTitle: input.entry?.title, boardName: input.board?.name, ...input.data },
         digestPending: mode === 'digest',
       })

@@ -14,8 +14,8 @@ export interface NotifyGatewayDeps {
   log?: (error: unknown) => void;
 }
 
-/** The signed-in user of a handshake request, read with the app's own session parser. */
-function sessionUser(parser: RequestHandler, req: IncomingMessage): Promise<string | undefined> {
+/** The signed-in user of a handshake request, read with the app's own session parser (the moderation socket uses it too). */
+export function sessionUser(parser: RequestHandler, req: IncomingMessage): Promise<string | undefined> {
   return new Promise((resolve) => {
     const res = { getHeader: () => undefined, setHeader: () => res, end: () => res } as unknown as Response;
     parser(req as never, res, () => resolve((req as unknown as { session?: { passport?: { user?: string } } }).session?.passport?.user));

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { openApiDocument, ROUTES } from './openapi-document';
 import { COMMUNITY_ROUTES } from './community-routes';
+import { MODERATION_ROUTES } from './moderation-routes';
 
 /** Every `router.<method>('…')` in the server's routers, with the mount point each router has in app.ts. */
 function routesInCode(): string[] {
@@ -38,7 +39,7 @@ describe('the OpenAPI document', () => {
   });
 
   it('documents every route the routers declare', () => {
-    const documented = new Set([...ROUTES, ...COMMUNITY_ROUTES].map((r) => `${r.method} ${r.path}`));
+    const documented = new Set([...ROUTES, ...COMMUNITY_ROUTES, ...MODERATION_ROUTES].map((r) => `${r.method} ${r.path}`));
     for (const route of routesInCode()) expect(documented, route).toContain(route);
   });
 });

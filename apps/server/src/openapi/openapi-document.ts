@@ -2,6 +2,7 @@ import { OpenAPIRegistry, OpenApiGeneratorV31, type RouteConfig } from '@asteaso
 import * as z from 'zod';
 import * as c from '@barwright/contracts';
 import { COMMUNITY_ROUTES } from './community-routes';
+import { MODERATION_ROUTES } from './moderation-routes';
 
 /**
  * The OpenAPI 3.1 document of every route, generated from the contracts' zod schemas: request
@@ -76,7 +77,7 @@ const pathParams = (path: string) => {
 export function openApiDocument(extra: Route[] = []) {
   const registry = new OpenAPIRegistry();
   registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'barwright.sid' });
-  for (const r of [...ROUTES, ...COMMUNITY_ROUTES, ...extra]) {
+  for (const r of [...ROUTES, ...COMMUNITY_ROUTES, ...MODERATION_ROUTES, ...extra]) {
     const status = r.status ?? 200;
     const params = pathParams(r.path);
     registry.registerPath({

@@ -16,7 +16,8 @@ export async function refreshRemixCount(db: Db, entryId: string | null): Promise
 }
 
 export async function refreshCommentCount(db: Db, entryId: string): Promise<number> {
-  const [{ n }] = await db.select({ n: count() }).from(comments).where(and(eq(comments.entryId, entryId), isNull(comments.deletedAt)));
+  // Comments hidden by moderation do not count (moderation/item-hiding.ts recounts on hide and restore).
+  const [{ n }] = await db.select({ n: count() }).from(comments).where(and(eq(comments.entryId, entryId), isNull(comments.deletedAt), isNull(comments.hiddenAt)));
   await db.update(entries).set({ commentCount: n }).where(eq(entries.id, entryId));
   return n;
 }

@@ -1,4 +1,4 @@
-import { and, count, desc, eq, inArray } from 'drizzle-orm';
+import { and, count, desc, eq, inArray, isNull } from 'drizzle-orm';
 import type { EntryDetail, PersonRef } from '@barwright/contracts';
 import { entries, entryRatings, entryRevisions, photos, users, type EntryRow, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
@@ -34,7 +34,7 @@ export async function entryDetail(db: Db, entry: EntryRow, viewer?: UserRow): Pr
     .orderBy(desc(entryRevisions.number));
   const [latest] = await db.select().from(entryRevisions).where(and(eq(entryRevisions.entryId, entry.id), eq(entryRevisions.number, entry.latestRevision)));
   const names = await people(db, [entry.authorId, ...revisions.map((r) => r.authorId)]);
-  const [{ n: photoCount }] = await db.select({ n: count() }).from(photos).where(eq(photos.entryId, entry.id));
+  const [{ n: photoCount }] = await db.select({ n: count() }).from(photos).where(and(eq(photos.entryId, entry.id), isNull(photos.hiddenAt))); // hidden ones do not count
   const [mine] = viewer
     ? await db.select({ stars: entryRatings.stars }).from(entryRatings).where(and(eq(entryRatings.entryId, entry.id), eq(entryRatings.userId, viewer.id)))
     : [];

@@ -1,5 +1,5 @@
 import { Router, type Request, type RequestHandler } from 'express';
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { PHOTO_FIELD, photoFields } from '@barwright/contracts';
 import { photos, type PhotoRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
@@ -11,6 +11,7 @@ import { isUuid, requireOpenEntry, requireVisibleEntry, viewerOf } from '../publ
 import type { PhotoFiles } from './photo-files';
 import { receiveFile } from './photo-upload';
 import { checkDailyAllowance, listPhotos, storePhoto, type PhotoLimits } from './photos-service';
+import { photosShownTo, seesHiddenItem } from '../moderation/hidden-visibility';
 
 export interface PhotosRouterDeps {
   db: Db;
@@ -25,6 +26,8 @@ type Target = { entryId: string } | { designId: string };
 async function requirePhotoAccess(db: Db, req: Request): Promise<PhotoRow> {
   const [photo] = isUuid(req.params.id as string) ? await db.select().from(photos).where(eq(photos.id, req.params.id as string)) : [];
   if (!photo) throw notFound('photo');
+  // Hidden by moderation: its uploader and the moderators only.
+  if (photo.hiddenAt && !seesHiddenItem(photo.uploaderId, viewerOf(req))) throw notFound('photo');
   try {
     if (photo.entryId) await requireVisibleEntry(db, photo.entryId, viewerOf(req));
     else await requireDesignRole(db, photo.designId!, requireUser(req).id, 'viewer');
@@ -58,7 +61,7 @@ export function photosRouter(deps: PhotosRouterDeps): Router {
   router.post('/designs/:id/photos', guard(async (req) => ({ designId: (await requireDesignRole(db, req.params.id as string, requireUser(req).id, 'editor')).design.id })), receive, store);
   router.get('/entries/:id/photos', async (req, res) => {
     const entry = await requireVisibleEntry(db, req.params.id, viewerOf(req));
-    res.json(await listPhotos(db, eq(photos.entryId, entry.id)));
+    res.json(await listPhotos(db, and(eq(photos.entryId, entry.id), photosShownTo(viewerOf(req)))!));
   });
   router.get('/designs/:id/photos', async (req, res) => {
     const { design } = await requireDesignRole(db, req.params.id, requireUser(req).id, 'viewer');

@@ -5,6 +5,7 @@ import type { Db } from '../database/database';
 import { HttpError } from '../http/http-error';
 import type { PhotoFiles } from './photo-files';
 import { processPhoto } from './photo-image';
+import { hiddenFields } from '../moderation/hidden-visibility';
 
 export interface PhotoLimits {
   maxBytes: number;
@@ -28,6 +29,8 @@ export const toPhoto = (p: PhotoRow, uploaderName: string): Photo => ({
   createdAt: p.createdAt.toISOString(),
   url: `/api/photos/${p.id}`,
   thumbUrl: `/api/photos/${p.id}/thumb`,
+  // Only viewers allowed to see a hidden photo ever receive one (see photosShownTo).
+  ...hiddenFields(p),
 });
 
 /** 429 once the member has uploaded the day's allowance (a rolling 24 hours). */

@@ -1,0 +1,65 @@
+import { and, asc, count, desc, eq, gte, inArray, isNotNull, lt, type SQL } from 'drizzle-orm';
+import type { AuditEntry, AuditPage, AuditQuery, PersonRef } from '@barwright/contracts';
+import { auditLog } from '../../../../db/schema';
+import type { Db } from '../database/database';
+import { toAuditEntry } from './audit-log';
+
+const DAY_MS = 86_400_000;
+
+/** A bare date means the start of that UTC day; `to` as a bare date takes in the whole day. */
+function bounds(q: Pick<AuditQuery, 'from' | 'to'>): { from?: Date; before?: Date } {
+  const isDay = (v: string) => v.length === 10;
+  return {
+    from: q.from ? new Date(isDay(q.from) ? `${q.from}T00:00:00Z` : q.from) : undefined,
+    before: q.to ? new Date(isDay(q.to) ? Date.parse(`${q.to}T00:00:00Z`) + DAY_MS : Date.parse(q.to) + 1) : undefined,
+  };
+}
+
+export function auditConditions(q: AuditQuery): SQL | undefined {
+  const { from, before } = bounds(q);
+  const where: (SQL | undefined)[] = [
+    q.action ? eq(auditLog.action, q.action) : undefined,
+    q.actor ? eq(auditLog.actorId, q.actor) : undefined,
+    q.kind ? eq(auditLog.targetKind, q.kind) : undefined,
+    q.item ? eq(auditLog.targetId, q.item) : undefined,
+    from ? gte(auditLog.at, from) : undefined,
+    before ? lt(auditLog.at, before) : undefined,
+  ];
+  return and(...where);
+}
+
+/** One page of the log, newest first, with the total over all pages. */
+export async function auditPage(db: Db, q: AuditQuery): Promise<AuditPage> {
+  const where = auditConditions(q);
+  const rows = await db
+    .select()
+    .from(auditLog)
+    .where(where)
+    .orderBy(desc(auditLog.at), desc(auditLog.id))
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
+  const [{ total }] = await db.select({ total: count() }).from(auditLog).where(where);
+  return { items: rows.map(toAuditEntry), total, page: q.page, pageSize: q.pageSize };
+}
+
+/** The lines about some items, newest first (the desk's history of each case). */
+export async function auditOfTargets(db: Db, targetIds: string[]): Promise<Map<string, AuditEntry[]>> {
+  const byTarget = new Map<string, AuditEntry[]>();
+  if (!targetIds.length) return byTarget;
+  const rows = await db.select().from(auditLog).where(inArray(auditLog.targetId, targetIds)).orderBy(desc(auditLog.at), desc(auditLog.id));
+  for (const row of rows) byTarget.set(row.targetId!, [...(byTarget.get(row.targetId!) ?? []), toAuditEntry(row)]);
+  return byTarget;
+}
+
+/** Everyone who appears in the log as the one acting, by name (for the actor filter). */
+export async function auditActors(db: Db): Promise<PersonRef[]> {
+  const rows = await db
+    .selectDistinct({ id: auditLog.actorId, displayName: auditLog.actorName })
+    .from(auditLog)
+    .where(isNotNull(auditLog.actorId))
+    .orderBy(asc(auditLog.actorName));
+  // A renamed actor appears under each name used; keep the first per id.
+  const seen = new Map<string, PersonRef>();
+  for (const r of rows) if (!seen.has(r.id!)) seen.set(r.id!, { id: r.id!, displayName: r.displayName });
+  return [...seen.values()];
+}
