@@ -18,6 +18,8 @@ export class NotificationCenter {
   private readonly announcer = inject(LiveAnnouncer);
   private readonly count = signal(0);
   private readonly arrivals = new Subject<Notification>();
+  /** Only a change of account reconnects (saving one's profile gives a new `me` with the same id). */
+  private readonly userId = computed(() => this.auth.me()?.id ?? null);
 
   readonly unread = this.count.asReadonly();
   readonly live = computed(() => this.socket.state() === 'live');
@@ -27,7 +29,7 @@ export class NotificationCenter {
   constructor() {
     // One connection per signed-in account: a new sign-in (or another account) reconnects, signing out closes it.
     effect(() => {
-      const userId = this.auth.me()?.id ?? null;
+      const userId = this.userId();
       untracked(() => (userId ? this.start() : this.stop()));
     });
   }
