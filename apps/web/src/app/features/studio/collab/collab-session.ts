@@ -7,7 +7,7 @@ import * as Y from 'yjs';
 import { errorsByField } from '../fields/field-errors';
 import { connectionStatus, type SocketFacts } from './connection-status';
 import { addItem, clearField, removeItem, writeChangedLeaves } from './design-writes';
-import { colourFor, peersFrom, type Peer, type PresenceState } from './presence';
+import { colourAvoiding, colourFor, coloursTaken, peersFrom, type Peer, type PresenceState } from './presence';
 
 /** Pointer updates sent at most this often (ms); awareness relays every one to everybody. */
 const POINTER_INTERVAL_MS = 40;
@@ -90,7 +90,11 @@ export class CollabSession {
     const colour = colourFor(user.id);
     this.me.set({ ...user, colour });
     provider.awareness.setLocalState({ user: { ...user, colour }, field: null, pointer: null } satisfies PresenceState);
-    provider.awareness.on('change', () => this.others.set(peersFrom(provider.awareness.getStates(), this.doc.clientID)));
+    provider.awareness.on('change', () => {
+      const peers = peersFrom(provider.awareness.getStates(), this.doc.clientID);
+      this.others.set(peers);
+      this.keepColourDistinct(peers);
+    });
   }
 
   /** Editors write; viewers only follow (the server drops their writes anyway). */
@@ -146,6 +150,16 @@ export class CollabSession {
       this.pointerTimer = null;
       if (this.pendingPointer !== undefined) this.sendPointer();
     }, POINTER_INTERVAL_MS);
+  }
+
+  /** Two people never wear one colour: whoever came later (higher client id) moves to a free one. */
+  private keepColourDistinct(peers: readonly Peer[]): void {
+    const me = this.me();
+    if (!me || !this.provider) return;
+    const colour = colourAvoiding(me.id, coloursTaken(peers, { clientId: this.doc.clientID, userId: me.id }));
+    if (colour === me.colour) return;
+    this.me.set({ ...me, colour });
+    this.provider.awareness.setLocalStateField('user', { ...me, colour });
   }
 
   private sendPointer(): void {

@@ -1,7 +1,7 @@
 import { CLOSE_CODES } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { connectionStatus } from './connection-status';
-import { colourFor, initials, peersFrom, peoplePresent, PRESENCE_COLOURS } from './presence';
+import { colourAvoiding, colourFor, coloursTaken, initials, peersFrom, peoplePresent, PRESENCE_COLOURS } from './presence';
 
 const state = (id: string, name: string, field: string | null = null) => ({ user: { id, name, colour: colourFor(id) }, field, pointer: null });
 
@@ -9,6 +9,16 @@ describe('presence', () => {
   it('gives each account a stable colour from the palette', () => {
     expect(colourFor('a-user')).toBe(colourFor('a-user'));
     expect(PRESENCE_COLOURS).toContain(colourFor('someone-else'));
+  });
+
+  it('moves off a colour someone here first is already wearing', () => {
+    const own = colourFor('late-comer');
+    expect(colourAvoiding('late-comer', new Set())).toBe(own);
+    const moved = colourAvoiding('late-comer', new Set([own]));
+    expect(moved).not.toBe(own);
+    expect(colourAvoiding('late-comer', new Set(PRESENCE_COLOURS))).toBe(own);
+    const peers = peersFrom(new Map<number, unknown>([[1, state('a', 'A')], [5, state('b', 'B')], [2, state('me', 'Me')]]), 3);
+    expect(coloursTaken(peers, { clientId: 3, userId: 'me' })).toEqual(new Set([colourFor('a')]));
   });
 
   it('makes initials for avatars', () => {

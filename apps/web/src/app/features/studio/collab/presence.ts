@@ -20,12 +20,35 @@ export const PRESENCE_COLOURS = ['#1f78b4', '#c2185b', '#2e7d32', '#6a3d9a', '#d
 
 /** A stable colour for an account, so a person keeps theirs from visit to visit. */
 export function colourFor(userId: string): string {
+  return PRESENCE_COLOURS[hashOf(userId) % PRESENCE_COLOURS.length];
+}
+
+/**
+ * The account's own colour unless someone else here already wears it; then the next free one of
+ * the palette (the account's own again if every colour is taken). `taken` holds the colours of the
+ * people who keep theirs (those who were here first: a lower Yjs client id).
+ */
+export function colourAvoiding(userId: string, taken: ReadonlySet<string>): string {
+  const start = hashOf(userId) % PRESENCE_COLOURS.length;
+  for (let i = 0; i < PRESENCE_COLOURS.length; i++) {
+    const colour = PRESENCE_COLOURS[(start + i) % PRESENCE_COLOURS.length];
+    if (!taken.has(colour)) return colour;
+  }
+  return PRESENCE_COLOURS[start];
+}
+
+function hashOf(text: string): number {
   let hash = 2166136261; // FNV-1a, 32 bit
-  for (let i = 0; i < userId.length; i++) {
-    hash ^= userId.charCodeAt(i);
+  for (let i = 0; i < text.length; i++) {
+    hash ^= text.charCodeAt(i);
     hash = Math.imul(hash, 16777619);
   }
-  return PRESENCE_COLOURS[(hash >>> 0) % PRESENCE_COLOURS.length];
+  return hash >>> 0;
+}
+
+/** Colours the people who keep theirs are wearing: other accounts with a lower client id than ours. */
+export function coloursTaken(peers: readonly Peer[], self: { clientId: number; userId: string }): Set<string> {
+  return new Set(peers.filter((p) => p.user.id !== self.userId && p.clientId < self.clientId).map((p) => p.user.colour));
 }
 
 /** Up to two initials for an avatar: "Maren Ashdown" → "MA", "ibrahim" → "I". */

@@ -29,11 +29,10 @@ export class LineStudyView {
   protected readonly period = computed(() => this.compute.views()?.profile.period ?? null);
   protected readonly summary = computed(() => {
     const study = this.study();
-    const design = this.session.lastValid();
-    if (!study || !design) return '';
-    const units = design.units;
+    if (!study) return '';
+    const units = this.session.lastValid()?.units ?? 'mm';
     const len = (mm: number) => `${displayNumber('length', units === 'in' ? mm / 25.4 : mm, units)} ${units}`;
-    return `${study.lines.length} lines ${len(study.spacing)} apart, grooves ${len(study.width)} wide (a ${design.study.vAngle}° V-cutter ${len(units === 'in' ? design.study.depth * 25.4 : design.study.depth)} deep)`;
+    return `${study.lines.length} lines ${len(study.spacing)} apart, grooves ${len(study.width)} wide (a ${study.vAngle}° V-cutter ${len(study.depth)} deep)`;
   });
 
   protected setWindow(value: string): void {
