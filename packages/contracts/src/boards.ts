@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { emailSchema } from './auth';
+import { designSchema } from './design';
 
 export const BOARD_ROLES = ['owner', 'editor', 'viewer'] as const;
 export type BoardRole = (typeof BOARD_ROLES)[number];
@@ -22,9 +23,11 @@ export const acceptInvitationBody = z.strictObject({ token: z.string({ error: 'i
 
 export const DESIGN_PRESETS = ['blank', 'example', 'barleycorn', 'basket-weave', 'moire'] as const;
 export type DesignPreset = (typeof DESIGN_PRESETS)[number];
+/** A new design starts from a preset, or from a whole design file (an import); `file` wins when both are given. */
 export const createDesignBody = z.strictObject({
   title: name(DESIGN_TITLE_MAX),
   preset: z.enum(DESIGN_PRESETS, { error: `must be one of ${DESIGN_PRESETS.join(', ')}` }).default('example'),
+  file: designSchema.optional(),
 });
 export const updateDesignBody = z.strictObject({ title: name(DESIGN_TITLE_MAX) });
 export const createVersionBody = z.strictObject({ name: name(VERSION_NAME_MAX) });

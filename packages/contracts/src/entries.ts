@@ -5,6 +5,7 @@ import { MATERIALS, WAVE_SHAPES, type Design, type MaterialId, type WaveShape } 
  * Published entries: a bar design made public as a series of immutable revisions.
  * Routes (all under /api):
  *   POST /designs/:id/publish            PublishBody → 201 PublishResult   (editor or owner on the design's board)
+ *   GET  /designs/:id/entry              → DesignEntryLink, or 404 when the design was never published (board members)
  *   GET  /entries                        ExploreQuery (query string) → ExplorePage   (anyone, signed in or not)
  *   GET  /entries/:id                    → EntryDetail
  *   GET  /entries/:id/revisions/:n       → EntryRevision
@@ -53,6 +54,16 @@ export interface PublishResult {
   /** True when this publish created the entry; false when it added a revision to it. */
   created: boolean;
 }
+
+/** `GET /api/designs/:id/entry`: the live entry a board design was published as, with its words. */
+export const designEntryLinkSchema = z.object({
+  entryId: z.string(),
+  title: z.string(),
+  description: z.string(),
+  tags: z.array(z.string()),
+  latestRevision: z.number().int(),
+});
+export type DesignEntryLink = z.infer<typeof designEntryLinkSchema>;
 
 export interface PersonRef {
   id: string;

@@ -100,6 +100,15 @@ describe.each(drivers)('boards API on %s', (driver) => {
     expect((await owner.get(`/api/designs/${id}`)).status).toBe(200);
   });
 
+  it('creates a design from a whole file, validated field by field', async () => {
+    const file = { ...EXAMPLE_DESIGN, rosette: { baseRadius: 40, layers: [{ lobes: 20, amplitude: 1, phase: 0, wave: { shape: 'sine' } }] } };
+    const { id } = (await owner.post(`/api/boards/${boardId}/designs`, { title: 'Imported', file })).body;
+    expect((await owner.get(`/api/designs/${id}`)).body.rosette.baseRadius).toBe(40);
+    const bad = await owner.post(`/api/boards/${boardId}/designs`, { title: 'Bad', file: { ...file, rubber: { shape: 'round', radius: -1 } } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['file.rubber.radius']).toMatch(/negative/);
+  });
+
   it('exports a design in every format and refuses an unknown one', async () => {
     const { id } = (await owner.post(`/api/boards/${boardId}/designs`, { title: 'Sine 24 keeper' })).body;
     for (const format of ['svg', 'dxf', 'gcode', 'csv', 'pdf']) {

@@ -97,7 +97,7 @@ export function boardsRouter(deps: BoardsRouterDeps): Router {
     const user = requireUser(req);
     await requireBoardRole(db, req.params.id, user.id, 'editor');
     const body = parseBody(createDesignBody, req.body);
-    const design = await createDesign(db, { boardId: req.params.id, title: body.title, preset: body.preset, createdBy: user.id });
+    const design = await createDesign(db, { boardId: req.params.id, title: body.title, preset: body.preset, file: body.file, createdBy: user.id });
     res.status(201).json({ id: design.id });
   });
   return router;

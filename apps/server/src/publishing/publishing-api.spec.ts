@@ -21,6 +21,13 @@ describe.each(drivers)('publishing API on %s', (driver) => {
     other = await member(database, server, 'tobias');
   });
 
+  it('tells a board member which entry a design was published as', async () => {
+    const { entryId, designId } = await publishedBar(author, 'Linked', { tags: ['sine'], description: 'Words.' });
+    const link = await author.client.get(`/api/designs/${designId}/entry`);
+    expect(link.body).toMatchObject({ entryId, title: 'Linked', description: 'Words.', tags: ['sine'], latestRevision: 1 });
+    expect((await other.client.get(`/api/designs/${designId}/entry`)).status).toBe(404);
+  });
+
   it('publishes an immutable revision with the facts of the design and a thumbnail', async () => {
     const { entryId, designId } = await publishedBar(author, 'Sine 24 keeper', { tags: ['Barleycorn', 'a2 steel'], description: 'Cut on the club engine.' });
     const entry = (await new Client(server.app).get(`/api/entries/${entryId}`)).body;

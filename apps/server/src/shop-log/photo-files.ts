@@ -10,7 +10,8 @@ import { randomUUID } from 'node:crypto';
 export class PhotoFiles {
   constructor(private readonly uploadsDir: string) {}
 
-  private get dir() {
+  /** The folder the files live in (the root `sendFile` resolves names against). */
+  get dir() {
     return path.join(this.uploadsDir, 'photos');
   }
 

@@ -72,7 +72,10 @@ export function photosRouter(deps: PhotosRouterDeps): Router {
     const photo = await requirePhotoAccess(db, req);
     if (!deps.files) throw notFound('photo');
     res.set({ 'X-Content-Type-Options': 'nosniff', 'Content-Security-Policy': "default-src 'none'", 'Cache-Control': 'private, max-age=3600' });
-    res.type(photo.mime).sendFile(deps.files.pathOf(photo[which]), { dotfiles: 'deny' });
+    // Names are ours (uuid-based); with `root`, the dot-file rule applies to the name only, not to a
+    // data directory that happens to sit under a dot folder.
+    deps.files.pathOf(photo[which]); // refuses any name we did not make
+    res.type(photo.mime).sendFile(photo[which], { root: deps.files.dir, dotfiles: 'deny' });
   };
   router.get('/photos/:id', serve('fileName'));
   router.get('/photos/:id/thumb', serve('thumbName'));

@@ -24,7 +24,9 @@ describe.each(drivers)('shop log on %s', (driver) => {
   let designId: string;
   const entryPhotos = () => `/api/entries/${entryId}/photos`;
 
-  const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-uploads-'));
+  // Under a dot folder on purpose: serving must not trip over a data directory like `.tmp/…`.
+  fs.mkdirSync(path.join(os.tmpdir(), '.bw-dot'), { recursive: true });
+  const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), '.bw-dot', 'uploads-'));
   const ctx = useTestServer(driver, { uploadsDir, communityLimits: { photosPerDay: 4 } });
   afterAll(() => fs.rmSync(uploadsDir, { recursive: true, force: true }));
   beforeEach(async () => {
