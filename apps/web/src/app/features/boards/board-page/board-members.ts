@@ -1,6 +1,6 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, inject, signal, viewChild } from '@angular/core';
+import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -41,6 +41,8 @@ export class BoardMembers {
     email: ['', [Validators.required, contractValidator(emailSchema)]],
     role: ['editor' as InviteRole],
   });
+  /** Resetting through the directive also clears "submitted", so the emptied field shows no error. */
+  private readonly formDirective = viewChild(FormGroupDirective);
   protected readonly busy = signal(false);
   protected readonly problem = signal<string | null>(null);
   protected readonly fieldMessage = fieldMessage;
@@ -61,7 +63,7 @@ export class BoardMembers {
     try {
       const { email, role } = this.form.getRawValue();
       await this.store.invite(email.trim(), role);
-      this.form.reset({ email: '', role });
+      this.formDirective()?.resetForm({ email: '', role });
       void this.notifier.tell(`Invitation sent to ${email.trim()}. The link works for 7 days.`, undefined, 4000);
     } catch (error) {
       this.problem.set(formProblem(error, this.form));
