@@ -6,6 +6,7 @@ import { loadConfig } from './config';
 import { openConfiguredDatabase } from './runtime';
 import { hashPassword, passwordWeakness } from './auth/passwords';
 import { findUserByEmail, insertUser } from './auth/users';
+import { recordAudit } from './audit/audit-log';
 
 const USAGE = `Usage: npm run admin -- create --email E --password P [--name N] [--data-dir D]
 
@@ -41,9 +42,14 @@ async function main() {
         .update(users)
         .set({ role: 'admin', suspendedAt: null, passwordHash: await hashPassword(password.data), emailVerifiedAt: existing.emailVerifiedAt ?? new Date() })
         .where(eq(users.id, existing.id));
+      // A role action like any other: the audit log names the command line as its actor.
+      const target = { kind: 'user' as const, id: existing.id, label: existing.displayName };
+      if (existing.role !== 'admin') await recordAudit(database.db, { actor: null, action: 'user.role', target, subject: existing, details: { from: existing.role, to: 'admin' } });
+      if (existing.suspendedAt) await recordAudit(database.db, { actor: null, action: 'user.unsuspend', target, subject: existing });
       console.log(`${email.data} is now an admin.`);
     } else {
-      await insertUser(database.db, { email: email.data, password: password.data, displayName: values.name ?? email.data.split('@')[0], role: 'admin', verified: true });
+      const created = await insertUser(database.db, { email: email.data, password: password.data, displayName: values.name ?? email.data.split('@')[0], role: 'admin', verified: true });
+      if (created) await recordAudit(database.db, { actor: null, action: 'user.role', target: { kind: 'user', id: created.id, label: created.displayName }, subject: created, details: { from: null, to: 'admin' } });
       console.log(`Admin ${email.data} created.`);
     }
   } finally {
