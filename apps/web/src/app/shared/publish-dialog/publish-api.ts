@@ -1,14 +1,28 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import type { PublishBody, PublishResult } from '@barwright/contracts';
+import type { DesignEntryLink, PublishBody, PublishResult } from '@barwright/contracts';
 import { firstValueFrom } from 'rxjs';
+import { ApiError } from '../../core/http/api-error';
 
-/** `POST /api/designs/:id/publish`: the design's current file becomes a new immutable revision of its entry. */
+const design = (id: string) => `/api/designs/${encodeURIComponent(id)}`;
+
+/** Publishing a board design: the entry it was published as, and a new immutable revision of it. */
 @Injectable({ providedIn: 'root' })
 export class PublishApi {
   private readonly http = inject(HttpClient);
 
+  /** `GET /api/designs/:id/entry`: the design's live entry, or null when it was never published (the server's 404). */
+  async entryOf(designId: string): Promise<DesignEntryLink | null> {
+    try {
+      return await firstValueFrom(this.http.get<DesignEntryLink>(`${design(designId)}/entry`));
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 404) return null;
+      throw error;
+    }
+  }
+
+  /** `POST /api/designs/:id/publish`: the design's current file becomes a new revision of its entry (made on first publish). */
   publish(designId: string, body: PublishBody): Promise<PublishResult> {
-    return firstValueFrom(this.http.post<PublishResult>(`/api/designs/${encodeURIComponent(designId)}/publish`, body));
+    return firstValueFrom(this.http.post<PublishResult>(`${design(designId)}/publish`, body));
   }
 }

@@ -37,11 +37,11 @@ export class BoardDesigns {
     if (id) await this.router.navigate(['/studio', id]);
   }
 
-  /** Community: publishes the design and opens its entry page. */
+  /** Community: publishes the design (a new entry, or the next revision of its entry) and opens the entry page. */
   protected async publish(design: DesignSummary): Promise<void> {
     const result = await openPublishDialog(this.dialog, { designId: design.id, title: design.title });
     if (!result) return;
-    void this.notifier.tell(result.created ? `“${design.title}” is published.` : `Revision ${result.revision} of “${design.title}” is published.`, undefined, 4000);
+    void this.notifier.tell(result.created ? `“${result.title}” is published.` : `Revision ${result.revision} of “${result.title}” is published.`, undefined, 4000);
     await this.router.navigate(['/entries', result.entryId]);
   }
 
