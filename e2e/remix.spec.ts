@@ -21,7 +21,11 @@ test('a member publishes a bar, another finds it in Explore, remixes it with a n
     marenBoard,
     'Sine for the guild',
     { title: ORIGINAL, description: 'Twenty-four lobes, cut on the club lathe.\nA clean barleycorn in A2.', tags: ['Barleycorn', 'a2'] },
-    (page) => shoot(page, 'publish-dialog'),
+    async (page) => {
+      // Never published: the dialog says what publishing does and starts from the design's title.
+      await expect(page.getByTestId('publish-first-note')).toBeVisible();
+      await shoot(page, 'publish-dialog');
+    },
   );
   await expect(maren.page.getByTestId('entry-plan-cautions')).toContainText(/eye protection/i);
   await expect(maren.page.getByTestId('entry-rate-own')).toBeVisible();
@@ -98,6 +102,19 @@ test('a member publishes a bar, another finds it in Explore, remixes it with a n
   await mail.click();
   await expect(maren.page.getByTestId('mailbox-subject')).toContainText(ORIGINAL);
 
+  // Publishing the design again adds a revision to its entry, starting from the entry's words.
+  await maren.page.goto(`/boards/${marenBoard}`);
+  await maren.page.getByTestId('design-row').filter({ hasText: 'Sine for the guild' }).getByTestId('design-publish').click();
+  await expect(maren.page.getByTestId('publish-revision-note')).toContainText(`Publishing adds revision 2 to ${ORIGINAL}`);
+  await expect(maren.page.getByTestId('publish-title')).toHaveValue(ORIGINAL);
+  await expect(maren.page.getByTestId('publish-description')).toHaveValue('Twenty-four lobes, cut on the club lathe.\nA clean barleycorn in A2.');
+  await expect(maren.page.getByTestId('publish-tag-barleycorn')).toBeVisible();
+  await expect(maren.page.getByTestId('publish-tag-a2')).toBeVisible();
+  await shoot(maren.page, 'publish-dialog-republish');
+  await maren.page.getByTestId('publish-submit').click();
+  await maren.page.waitForURL(new RegExp(`/entries/${original}$`));
+  await expect(maren.page.getByTestId('entry-revision')).toHaveCount(2);
+
   await maren.context.close();
   await ibrahim.context.close();
 });
@@ -173,10 +190,15 @@ test('a member imports a measured rosette: the plot, the bad rows named, the poi
   // With the bad rows fixed, the readings become the rosette of a new design on his board, opened in the studio.
   await table.fill((await table.inputValue()).replace('340,fifty\n350,-2\n', '340,50.1\n'));
   await expect(page.getByTestId('measured-ok')).toBeVisible();
-  await page.getByTestId('measured-units').getByText('mm').click();
   await page.getByTestId('measured-board').click();
   await page.getByRole('option', { name: board }).click();
   await page.getByTestId('measured-title').fill('Rosette 7, measured');
+  // Radii of about 50 read as inches make a rosette too large: the server refuses the file and the page names the readings' base radius.
+  await page.getByTestId('measured-units').getByText('in', { exact: true }).click();
+  await page.getByTestId('measured-create').click();
+  await expect(page.getByTestId('measured-create-problem')).toContainText('The base radius (halfway between the smallest and largest reading) must be between');
+  await expect(page.getByTestId('measured-create-problem')).toContainText('Are the radii really in inches?');
+  await page.getByTestId('measured-units').getByText('mm', { exact: true }).click();
   await page.getByTestId('measured-create').click();
   await page.waitForURL(/\/studio\/[0-9a-f-]{36}$/);
   const designId = new URL(page.url()).pathname.split('/').pop()!;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { designSchema, EXAMPLE_DESIGN } from '@barwright/contracts';
-import { measuredWaveJson, rosetteFromReadings } from './readings-rosette';
+import { designFromReadings, measuredWaveJson, rosetteFromReadings } from './readings-rosette';
 
 const readings: [number, number][] = Array.from({ length: 12 }, (_, i) => [i * 30, 50 + (i % 2 ? 0.6 : -0.6)]);
 
@@ -13,6 +13,16 @@ describe('rosetteFromReadings', () => {
 
   it('makes a design file the contract accepts', () => {
     expect(designSchema.safeParse({ ...EXAMPLE_DESIGN, rosette: rosetteFromReadings(readings) }).success).toBe(true);
+  });
+});
+
+describe('designFromReadings', () => {
+  it('is a whole valid file in the readings’ units, its rosette the readings', () => {
+    const inches: [number, number][] = readings.map(([a, r]) => [a, r / 25.4]);
+    const design = designFromReadings(inches, 'in');
+    expect(design.units).toBe('in');
+    expect(design.rosette.layers[0].wave).toEqual({ shape: 'measured', points: inches });
+    expect(designSchema.safeParse(design).success).toBe(true);
   });
 });
 

@@ -1,4 +1,5 @@
-import type { Design } from '@barwright/contracts';
+import { DESIGN_PRESET_FILES, type Design, type Units } from '@barwright/contracts';
+import { convertDesignUnits } from '../studio/units/field-units';
 
 /**
  * A one-layer rosette that passes through the readings: base radius halfway between the smallest
@@ -15,6 +16,15 @@ export function rosetteFromReadings(points: readonly (readonly [number, number])
     baseRadius: tidy((min + max) / 2),
     layers: [{ lobes: 1, amplitude: tidy(max - min), phase: 0, wave: { shape: 'measured', points: points.map(([a, r]) => [a, r] as [number, number]) } }],
   };
+}
+
+/**
+ * The whole design file a new design starts from (pure): the blank preset in the readings' units,
+ * its rosette replaced by the readings. The server validates it as any other design file.
+ */
+export function designFromReadings(points: readonly (readonly [number, number])[], units: Units): Design {
+  const start = convertDesignUnits(structuredClone(DESIGN_PRESET_FILES.blank), units);
+  return { ...start, rosette: rosetteFromReadings(points) };
 }
 
 /** The readings as a file the studio's measured wave takes: `{ "shape": "measured", "points": [[deg, r], …] }`. */

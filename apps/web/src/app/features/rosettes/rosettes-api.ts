@@ -1,6 +1,6 @@
 import { HttpClient, HttpHeaders } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import type { BoardSummary, MeasuredPreview } from '@barwright/contracts';
+import type { BoardSummary, Design, MeasuredPreview } from '@barwright/contracts';
 import { firstValueFrom } from 'rxjs';
 
 /** The measured-rosette preview (the server parses the table) and what creating a design from it needs. */
@@ -19,12 +19,8 @@ export class RosettesApi {
     return firstValueFrom(this.http.get<{ mine: BoardSummary[]; shared: BoardSummary[] }>('/api/boards'));
   }
 
-  createDesign(boardId: string, title: string): Promise<{ id: string }> {
-    return firstValueFrom(this.http.post<{ id: string }>(`/api/boards/${encodeURIComponent(boardId)}/designs`, { title, preset: 'blank' }));
-  }
-
-  /** The design file as the server holds it now (to confirm a write arrived). */
-  design(designId: string): Promise<unknown> {
-    return firstValueFrom(this.http.get<unknown>(`/api/designs/${encodeURIComponent(designId)}`));
+  /** `POST /api/boards/:id/designs` with a whole design file; a refused field comes back as `file.<path>`. */
+  createDesign(boardId: string, title: string, file: Design): Promise<{ id: string }> {
+    return firstValueFrom(this.http.post<{ id: string }>(`/api/boards/${encodeURIComponent(boardId)}/designs`, { title, file }));
   }
 }

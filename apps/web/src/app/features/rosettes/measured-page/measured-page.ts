@@ -10,7 +10,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { Router } from '@angular/router';
-import { createDesignBody, DESIGN_PRESET_FILES, MEASURED_TABLE_MAX_BYTES, type BoardSummary, type Units } from '@barwright/contracts';
+import { createDesignBody, MEASURED_TABLE_MAX_BYTES, type BoardSummary, type Units } from '@barwright/contracts';
 import { debounceTime } from 'rxjs';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { Notifier } from '../../../core/error-handling/notifier';
@@ -18,11 +18,10 @@ import { ApiError } from '../../../core/http/api-error';
 import { editableBoards } from '../../../shared/board-choice/editable-boards';
 import { contractValidator } from '../../../shared/forms/contract-validator';
 import { fieldMessage } from '../../../shared/forms/field-message';
-import { convertDesignUnits } from '../../studio/units/field-units';
-import { DesignFileWriter } from '../design-file-writer';
 import { MeasuredStore } from '../measured-store';
 import { polarPlot } from '../polar-plot';
-import { measuredWaveJson, rosetteFromReadings } from '../readings-rosette';
+import { readingsProblem } from '../readings-problem';
+import { designFromReadings, measuredWaveJson } from '../readings-rosette';
 import { RosettesApi } from '../rosettes-api';
 
 const EXAMPLE = `angle,radius\n0,50.60\n30,49.40\n60,50.60\n90,49.40\n120,50.60\n150,49.40\n180,50.60\n210,49.40\n240,50.60\n270,49.40\n300,50.60\n330,49.40\n`;
@@ -39,7 +38,6 @@ const EXAMPLE = `angle,radius\n0,50.60\n30,49.40\n60,50.60\n90,49.40\n120,50.60\
 export class MeasuredPage {
   protected readonly store = inject(MeasuredStore);
   private readonly api = inject(RosettesApi);
-  private readonly writer = inject(DesignFileWriter);
   private readonly router = inject(Router);
   private readonly notifier = inject(Notifier);
   private readonly document = inject(DOCUMENT);
@@ -114,17 +112,31 @@ export class MeasuredPage {
     }
     this.creating.set(true);
     try {
-      const { id } = await this.api.createDesign(this.boardChoice.value!, this.title.value.trim());
-      const start = convertDesignUnits(structuredClone(DESIGN_PRESET_FILES.blank), this.units());
-      await this.writer.write(id, { ...start, rosette: rosetteFromReadings(this.store.points()) });
+      const file = designFromReadings(this.store.points(), this.units());
+      const { id } = await this.api.createDesign(this.boardChoice.value!, this.title.value.trim(), file);
       void this.notifier.tell('The design is made from your readings. Set the rubber, cutter and bar for your machine.', undefined, 5000);
       await this.router.navigate(['/studio', id]);
     } catch (error) {
-      const refused = error instanceof ApiError ? !error.retryable && error.status !== 401 : error instanceof Error;
-      if (!refused) throw error;
-      this.createProblem.set((error as Error).message);
+      if (!(error instanceof ApiError) || error.retryable || error.status === 401) throw error;
+      this.createProblem.set(this.refusal(error));
     } finally {
       this.creating.set(false);
     }
+  }
+
+  /** What to say about a refused design: a refused title goes on its field, the file's fields are named after the readings. */
+  private refusal(error: ApiError): string | null {
+    const fields = Object.entries(error.fields);
+    if (fields.length === 0) return error.message;
+    const said: string[] = [];
+    for (const [path, message] of fields) {
+      if (path === 'title') {
+        this.title.setErrors({ server: message });
+        this.title.markAsTouched();
+      } else {
+        said.push(readingsProblem(path, message, this.units()));
+      }
+    }
+    return said.length > 0 ? said.map((line) => (/[.?!]$/.test(line) ? line : `${line}.`)).join(' ') : null;
   }
 }
