@@ -27,7 +27,7 @@ export default defineConfig({
   webServer: {
     // A fresh data directory each run, as a new user would have.
     command: `node e2e/helpers/serve-fresh.mjs`,
-    env: { PORT: String(PORT), DATA_DIR: '.tmp/e2e-data', DEMO_DATA: 'true', NODE_ENV: 'test' },
+    env: { PORT: String(PORT), DATA_DIR: process.env.E2E_DATA_DIR ?? '.tmp/e2e-data', DEMO_DATA: 'true', NODE_ENV: 'test' },
     url: `http://localhost:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

@@ -12,4 +12,6 @@ export interface ApiErrorBody {
 export const CLOSE_CODES = {
   unauthorized: 4401,
   forbidden: 4403,
+  /** Your role on the board changed: the client reconnects and reads its new role. */
+  roleChanged: 4409,
 } as const;

@@ -111,8 +111,11 @@ describe('collaboration gateway', () => {
     const a = open(ownerCookie);
     const e = open(cookie);
     await Promise.all([a.synced(), e.synced()]);
+    const changed = e.closed();
     expect((await owner.patch(`/api/boards/${boardId}/members/${user.id}`, { role: 'viewer' })).status).toBe(200);
-    await new Promise((r) => setTimeout(r, 100));
+    expect((await changed).code).toBe(CLOSE_CODES.roleChanged);
+    e.provider.connect();
+    await e.synced();
     setDesignField(e.doc, ['rosette', 'layers', 0, 'lobes'], 50);
     await new Promise((r) => setTimeout(r, 300));
     expect(lobes(a.doc)).toBe(24);

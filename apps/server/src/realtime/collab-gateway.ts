@@ -135,7 +135,10 @@ export class CollabGateway {
       if (conn.boardId !== boardId || (userId && conn.userId !== userId)) continue;
       const role = await boardRoleOf(this.deps.db, boardId, conn.userId);
       if (!role) conn.ws.close(CLOSE_CODES.forbidden, 'no longer a member of this board');
-      else conn.role = role;
+      else if (role !== conn.role) {
+        conn.role = role; // writes are judged by the new role at once, even before the client reconnects
+        conn.ws.close(CLOSE_CODES.roleChanged, 'your role on this board changed');
+      }
     }
   }
 

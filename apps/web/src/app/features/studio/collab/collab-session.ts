@@ -35,6 +35,9 @@ export class CollabSession {
   private readonly stacks = signal({ undo: 0, redo: 0 });
   private readonly writable = signal(false);
   private readonly me = signal<PresenceState['user'] | null>(null);
+  private readonly roleChangeCount = signal(0);
+  /** Counts the times the server said this member's role changed; the page reloads the role on each. */
+  readonly roleChanges = this.roleChangeCount.asReadonly();
   private pointerTimer: ReturnType<typeof setTimeout> | null = null;
   private pendingPointer: PresenceState['pointer'] | undefined;
 
@@ -86,7 +89,13 @@ export class CollabSession {
       this.facts.update((f) => ({ ...f, synced }));
       if (synced) this.everSynced.set(true);
     });
-    provider.on('closed', ({ code }) => this.facts.update((f) => ({ ...f, closedWith: code })));
+    provider.on('closed', ({ code }) => {
+      // 44xx closes are final for y-websocket; a role change is the one we come straight back from.
+      if (code === CLOSE_CODES.roleChanged) {
+        this.roleChangeCount.update((n) => n + 1);
+        provider.connect();
+      } else this.facts.update((f) => ({ ...f, closedWith: code }));
+    });
     const colour = colourFor(user.id);
     this.me.set({ ...user, colour });
     provider.awareness.setLocalState({ user: { ...user, colour }, field: null, pointer: null } satisfies PresenceState);

@@ -82,6 +82,10 @@ export class DesignStudio implements OnInit {
 
   constructor() {
     effect(() => this.session.setWritable(this.store.canEdit()));
+    // The provider reconnects by itself; the role it now has comes from the server.
+    effect(() => {
+      if (this.session.roleChanges() > 0) untracked(() => void this.loadMeta());
+    });
     effect(() => {
       const design = this.session.lastValid();
       if (design) untracked(() => this.compute.request(design));
