@@ -15,6 +15,7 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { Notifier } from '../../../core/error-handling/notifier';
 import { ApiError } from '../../../core/http/api-error';
 import { askForName } from '../../../shared/name-dialog/name-dialog';
+import { openPublishDialog } from '../../../shared/publish-dialog/publish-dialog';
 import { CollabSession } from '../collab/collab-session';
 import { ConnectionChip } from '../collab/connection-chip';
 import { NotesEditor } from '../collab/notes-editor';
@@ -115,6 +116,14 @@ export class DesignStudio implements OnInit {
       testId: 'studio-rename',
       save: (title) => this.store.rename(title),
     });
+  }
+
+  /** Publishes the design as it stands (a new entry, or a new revision of its entry), then opens the entry. */
+  protected async publish(): Promise<void> {
+    const meta = this.store.meta();
+    if (!meta) return;
+    const result = await openPublishDialog(this.dialog, { designId: meta.id, title: meta.title });
+    if (result) await this.router.navigate(['/entries', result.entryId]);
   }
 
   /** Ctrl+Z undoes your own last edit, Ctrl+Shift+Z (or Ctrl+Y) redoes it; nobody else's edits are touched. */
