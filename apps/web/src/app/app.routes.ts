@@ -12,6 +12,8 @@ export const routes: Routes = [
   { path: 'entries', loadChildren: () => import('./features/entries/entries.routes').then((m) => m.ENTRIES_ROUTES) },
   { path: 'notifications', loadChildren: () => import('./features/notifications/notifications.routes').then((m) => m.NOTIFICATIONS_ROUTES) },
   { path: 'rosettes', loadChildren: () => import('./features/rosettes/rosettes.routes').then((m) => m.ROSETTES_ROUTES) },
+  // Moderation: the desk (reports, hidden items, showcase curation, audit log), for moderators and admins.
+  { path: 'moderation', loadChildren: () => import('./features/moderation/moderation.routes').then((m) => m.MODERATION_ROUTES) },
   { path: 'mailbox', canMatch: [localMailGuard], loadChildren: () => import('./features/mailbox/mailbox.routes').then((m) => m.MAILBOX_ROUTES) },
   { path: '**', title: 'Page not found', loadComponent: () => import('./features/not-found/not-found-page').then((m) => m.NotFoundPage) },
 ];

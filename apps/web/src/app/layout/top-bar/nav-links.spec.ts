@@ -4,11 +4,15 @@ import { navLinksFor } from './nav-links';
 describe('navLinksFor', () => {
   it('shows People only to admins and Mailbox only in local mail mode', () => {
     expect(navLinksFor({ isAdmin: false, localMail: false }).map((l) => l.label)).toEqual(['Home', 'Explore']);
-    expect(navLinksFor({ isAdmin: true, localMail: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'People', 'Mailbox']);
+    expect(navLinksFor({ isAdmin: true, localMail: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Moderation', 'People', 'Mailbox']);
   });
 
   it('shows Explore to everyone, visitors too', () => {
     expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: false }).map((l) => l.path)).toContain('/explore');
+  });
+
+  it('shows Moderation to moderators and admins', () => {
+    expect(navLinksFor({ isAdmin: false, isModerator: true, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Boards', 'Moderation']);
   });
 
   it('shows Boards to signed-in members only', () => {

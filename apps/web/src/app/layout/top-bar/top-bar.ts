@@ -33,5 +33,7 @@ export class TopBar {
     { initialValue: false },
   );
 
-  protected readonly links = computed(() => navLinksFor({ isAdmin: this.auth.isAdmin(), localMail: this.config.config().localMail, signedIn: this.auth.signedIn() }));
+  protected readonly links = computed(() =>
+    navLinksFor({ isAdmin: this.auth.isAdmin(), isModerator: this.auth.role() === 'moderator', localMail: this.config.config().localMail, signedIn: this.auth.signedIn() }),
+  );
 }

@@ -6,11 +6,12 @@ import { renderCommentHtml, type CommentNode } from '@barwright/contracts';
 import { canDelete, canEdit, editWindowText } from './comment-rules';
 import { CommentForm } from './comment-form';
 import { CommentsStore } from './comments-store';
+import { ReportButton } from '../../moderation/report-dialog/report-button';
 
 /** One comment: its author and time, its text (escaped, links made safe by the contracts' renderer), and its actions. */
 @Component({
   selector: 'bw-comment-item',
-  imports: [DatePipe, MatButtonModule, MatIconModule, CommentForm],
+  imports: [DatePipe, MatButtonModule, MatIconModule, CommentForm, ReportButton],
   templateUrl: './comment-item.html',
   styleUrl: './comment-item.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

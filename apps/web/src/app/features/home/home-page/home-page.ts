@@ -5,6 +5,10 @@ import { RouterLink } from '@angular/router';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { ConfigStore } from '../../../core/config/config-store';
 import { barleycorn, lineStudyPaths, SketchSpec, sketchHeight } from './line-study-sketch';
+// The page opens on the showcase, then the new and top-rated rows.
+import { EntryRow } from '../../showcase/entry-row/entry-row';
+import { ShowcaseSection } from '../../showcase/showcase-section/showcase-section';
+import { ShowcaseStore } from '../../showcase/showcase-store';
 
 const SKETCH: SketchSpec = { width: 480, lines: 13, spacing: 13, amplitude: 11, period: 44, phase: barleycorn };
 
@@ -20,7 +24,8 @@ interface NextStep {
 
 @Component({
   selector: 'bw-home-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, MatIconModule, EntryRow, ShowcaseSection],
+  providers: [ShowcaseStore],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,9 +33,16 @@ interface NextStep {
 export class HomePage {
   protected readonly auth = inject(AuthStore);
   private readonly config = inject(ConfigStore);
+  protected readonly bars = inject(ShowcaseStore);
+  protected readonly units = computed(() => this.auth.me()?.units ?? 'mm');
+  protected readonly canCurate = computed(() => this.auth.hasRole(['moderator', 'admin']));
 
   protected readonly sketchPaths = lineStudyPaths(SKETCH);
   protected readonly sketchViewBox = `0 0 ${SKETCH.width} ${sketchHeight(SKETCH)}`;
+
+  constructor() {
+    this.bars.load();
+  }
 
   protected readonly nextSteps = computed<NextStep[]>(() => {
     const me = this.auth.me();

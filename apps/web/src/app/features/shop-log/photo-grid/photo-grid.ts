@@ -10,11 +10,12 @@ import { Notifier } from '../../../core/error-handling/notifier';
 import { confirmWith } from '../../../shared/confirm-dialog/confirm-dialog';
 import { openPhotoUpload } from '../photo-upload-dialog/photo-upload-dialog';
 import { ShopLogApi, type PhotoTarget } from '../shop-log-api';
+import { ReportButton } from '../../moderation/report-dialog/report-button';
 
 /** The shop log: photos of real cuts (trial cuts and keepers) as a grid, with the upload for members. */
 @Component({
   selector: 'bw-photo-grid',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, ReportButton],
   templateUrl: './photo-grid.html',
   styleUrl: './photo-grid.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,0 +1,31 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
+import type { ShowcaseItem, Units } from '@barwright/contracts';
+import { cutterText, ratingText, WAVE_NAMES } from '../../../shared/entry-facts/entry-facts';
+
+/**
+ * The showcase as the home page opens on it: the bars the moderators chose, in their order, each
+ * with the curator's note and when it was featured. The first is drawn large.
+ */
+@Component({
+  selector: 'bw-showcase-section',
+  imports: [DatePipe, RouterLink, MatIconModule],
+  templateUrl: './showcase-section.html',
+  styleUrl: './showcase-section.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ShowcaseSection {
+  /** Null while loading. */
+  readonly items = input.required<readonly ShowcaseItem[] | null>();
+  readonly units = input<Units>('mm');
+  /** Moderators get a link to the curation. */
+  readonly canCurate = input(false);
+
+  protected readonly first = computed(() => this.items()?.[0] ?? null);
+  protected readonly rest = computed(() => this.items()?.slice(1) ?? []);
+  protected readonly waveNames = WAVE_NAMES;
+  protected readonly cutter = (mm: number) => cutterText(mm, this.units());
+  protected readonly rating = ratingText;
+}
