@@ -1,0 +1,161 @@
+import { expect, test, type Page } from '@playwright/test';
+import { entryIdByTitle } from './helpers/api';
+import { memberPage } from './helpers/community';
+import { shoot } from './helpers/screens';
+
+const MOIRE = 'Dial moiré, thirty-six lobes';
+const BASKET = 'Eighteen-lobe basket weave';
+const SPAM = `Cheap rosettes, all sizes, at example.test/shop ${Date.now().toString(36)}`;
+const HIDE_REASON = 'Advertising is not allowed in the guild’s comments.';
+
+/** Full-page shots start from the top. */
+async function shootFromTop(page: Page, name: string): Promise<void> {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await shoot(page, name);
+}
+
+/** The entry ids the showcase list shows, in order. */
+const curatedOrder = (page: Page) => page.getByTestId('curation-item').evaluateAll((items) => items.map((i) => i.getAttribute('data-entry-id')));
+
+/** Features a bar from the curation page: find it, write the note, add it. */
+async function feature(page: Page, title: string, note: string): Promise<void> {
+  await page.getByTestId('feature-search').fill(title);
+  await page.getByRole('option', { name: new RegExp(title) }).click();
+  await page.getByTestId('feature-note').fill(note);
+  await page.getByTestId('feature-submit').click();
+  await expect(page.getByTestId('curation-item').filter({ hasText: title })).toBeVisible();
+}
+
+test.describe.configure({ mode: 'serial' });
+
+test('a moderator curates the showcase and hides a reported comment; members see the order, the author the reason, the log both', async ({ browser }) => {
+  test.setTimeout(180_000);
+  const tobias = await memberPage(browser, 'tobias@example.test'); // the moderator
+  const saskia = await memberPage(browser, 'saskia@example.test'); // writes the comment
+  const ibrahim = await memberPage(browser, 'ibrahim@example.test'); // reports it
+  const moire = await entryIdByTitle(tobias.page, MOIRE);
+  const basket = await entryIdByTitle(tobias.page, BASKET);
+
+  // The moderator reaches the desk from the top bar, and features two bars with a note each.
+  await tobias.page.goto('/');
+  await tobias.page.getByTestId('nav-moderation').click();
+  await expect(tobias.page.getByTestId('desk-tab-reports')).toHaveAttribute('aria-selected', 'true');
+  await tobias.page.getByTestId('desk-tab-showcase').click();
+  await expect(tobias.page.getByTestId('curation-empty')).toBeVisible();
+  await feature(tobias.page, MOIRE, 'Saskia’s dial pattern: the drift of the moiré is even across the whole plate.');
+  await feature(tobias.page, BASKET, 'A basket weave that cuts clean in A2; the trial and the keeper match.');
+  expect(await curatedOrder(tobias.page)).toEqual([moire, basket]);
+
+  // Reorder by dragging the basket weave above the moiré…
+  const handle = tobias.page.getByTestId('curation-item').nth(1).getByTestId('curation-handle');
+  const first = await tobias.page.getByTestId('curation-item').nth(0).boundingBox();
+  const box = (await handle.boundingBox())!;
+  await tobias.page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await tobias.page.mouse.down();
+  for (let step = 1; step <= 12; step++) await tobias.page.mouse.move(box.x + box.width / 2, box.y + box.height / 2 - ((box.y - first!.y + 20) * step) / 12);
+  await tobias.page.mouse.up();
+  await expect.poll(() => curatedOrder(tobias.page)).toEqual([basket, moire]);
+  // …and by keyboard: down, then back up, with the move buttons.
+  await tobias.page.getByRole('button', { name: `Move ${BASKET} down` }).focus();
+  await tobias.page.keyboard.press('Enter');
+  await expect.poll(() => curatedOrder(tobias.page)).toEqual([moire, basket]);
+  await tobias.page.getByRole('button', { name: `Move ${BASKET} up` }).focus();
+  await tobias.page.keyboard.press('Enter');
+  await expect.poll(() => curatedOrder(tobias.page)).toEqual([basket, moire]);
+  await expect(tobias.page.getByTestId('curation-note').first()).toContainText('cuts clean in A2');
+  await shootFromTop(tobias.page, 'moderation-showcase');
+
+  // Members and visitors: the home page opens on the showcase, in the chosen order, then new and top-rated bars.
+  await ibrahim.page.goto('/');
+  const shown = ibrahim.page.getByTestId('showcase-item');
+  await expect(shown).toHaveCount(2);
+  await expect(shown.nth(0)).toHaveAttribute('data-entry-id', basket);
+  await expect(shown.nth(1)).toHaveAttribute('data-entry-id', moire);
+  await expect(shown.nth(0).getByTestId('showcase-note')).toHaveText('A basket weave that cuts clean in A2; the trial and the keeper match.');
+  await expect(ibrahim.page.getByTestId('home-newest').getByTestId('entry-card')).toHaveCount(4);
+  await expect(ibrahim.page.getByTestId('home-top').getByTestId('entry-card').first()).toBeVisible();
+  await shootFromTop(ibrahim.page, 'home-showcase-member');
+  const visitor = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const visitorPage = await visitor.newPage();
+  await visitorPage.goto('/');
+  await expect(visitorPage.getByTestId('showcase-item').first()).toHaveAttribute('data-entry-id', basket);
+  await expect(visitorPage.getByTestId('home-sign-up')).toBeVisible();
+  await shootFromTop(visitorPage, 'home-showcase-visitor');
+
+  // Saskia comments on the basket weave; Ibrahim reports the comment as spam.
+  await saskia.page.goto(`/entries/${basket}`);
+  await saskia.page.getByTestId('comment-new-body').fill(SPAM);
+  await saskia.page.getByTestId('comment-new-submit').click();
+  await expect(saskia.page.getByTestId('comment').filter({ hasText: SPAM })).toBeVisible();
+  await expect(saskia.page.getByTestId('comment').filter({ hasText: SPAM }).getByTestId('comment-report')).toHaveCount(0); // not one's own
+  await ibrahim.page.goto(`/entries/${basket}`);
+  const reported = ibrahim.page.getByTestId('comment').filter({ hasText: SPAM });
+  await reported.getByTestId('comment-report').click();
+  await ibrahim.page.getByTestId('report-send').click();
+  await expect(ibrahim.page.getByRole('alert').filter({ hasText: 'Choose a reason' })).toBeVisible();
+  await ibrahim.page.getByRole('radio', { name: /^Spam/ }).check();
+  await ibrahim.page.getByTestId('report-details').fill('An advert for a shop, nothing about the bar.');
+  await shoot(ibrahim.page, 'report-dialog');
+  await ibrahim.page.getByTestId('report-send').click();
+  await expect(ibrahim.page.getByText('The moderators will look at it.')).toBeVisible();
+  await expect(ibrahim.page.getByRole('dialog')).toHaveCount(0);
+  // A second report of the same comment is refused while the first is open.
+  await reported.getByTestId('comment-report').click();
+  await ibrahim.page.getByRole('radio', { name: /^Offensive/ }).check();
+  await ibrahim.page.getByTestId('report-send').click();
+  await expect(ibrahim.page.getByTestId('report-problem')).toContainText('You have reported this already');
+  await ibrahim.page.keyboard.press('Escape');
+  await expect(ibrahim.page.getByRole('dialog')).toHaveCount(0);
+
+  // The moderator finds it on the desk, in context, and hides it with a reason for its author.
+  await tobias.page.getByTestId('desk-tab-reports').click();
+  const item = tobias.page.getByTestId('case').filter({ hasText: SPAM });
+  await expect(item).toBeVisible();
+  await expect(item.getByTestId('case-report')).toContainText('Spam');
+  await expect(item.getByTestId('case-report')).toContainText('Ibrahim Coldwell · 1 report filed, 0 upheld');
+  await shootFromTop(tobias.page, 'moderation-reports');
+  await item.getByTestId('case-hide').click();
+  await tobias.page.getByTestId('decision-confirm').click();
+  await expect(tobias.page.getByText('The reason is required')).toBeVisible();
+  await tobias.page.getByTestId('decision-words').fill(HIDE_REASON);
+  await shoot(tobias.page, 'moderation-hide-dialog');
+  await tobias.page.getByTestId('decision-confirm').click();
+  await expect(item.getByTestId('case-hidden')).toBeVisible();
+  await tobias.page.getByTestId('desk-tab-hidden').click();
+  await expect(tobias.page.getByTestId('case').filter({ hasText: SPAM }).getByTestId('case-restore')).toBeVisible();
+  await shootFromTop(tobias.page, 'moderation-hidden');
+
+  // Gone for members and visitors; shown to its author with the reason.
+  await ibrahim.page.reload();
+  await expect(ibrahim.page.getByTestId('entry-title')).toHaveText(BASKET);
+  await expect(ibrahim.page.getByTestId('entry-comments')).not.toContainText(SPAM);
+  await visitorPage.goto(`/entries/${basket}`);
+  await expect(visitorPage.getByTestId('entry-title')).toHaveText(BASKET);
+  await expect(visitorPage.getByTestId('entry-comments')).not.toContainText(SPAM);
+  await saskia.page.reload();
+  const own = saskia.page.getByTestId('comment').filter({ hasText: SPAM });
+  await expect(own.getByTestId('comment-hidden')).toContainText(HIDE_REASON);
+  await own.scrollIntoViewIfNeeded();
+  await shoot(saskia.page, 'entry-hidden-comment-author');
+
+  // The audit log shows both: the featuring and the hiding, with who, what and why.
+  await tobias.page.getByTestId('desk-tab-audit').click();
+  const lines = tobias.page.getByTestId('audit-line');
+  await expect(lines.filter({ hasText: `Tobias Greenhalgh hid comment on “${BASKET}” (by Saskia Penrose)` })).toContainText(HIDE_REASON);
+  await expect(lines.filter({ hasText: `Tobias Greenhalgh featured ${BASKET}` })).toHaveCount(1);
+  await expect(lines.filter({ hasText: `Tobias Greenhalgh featured ${MOIRE}` })).toHaveCount(1);
+  await expect(lines.filter({ hasText: 'Tobias Greenhalgh reordered the showcase' })).toHaveCount(3);
+  await shootFromTop(tobias.page, 'moderation-audit');
+  await tobias.page.getByTestId('audit-filter-action').click();
+  await tobias.page.getByRole('option', { name: 'Hidden' }).click();
+  await expect(tobias.page).toHaveURL(/action=item.hide/);
+  await expect(lines).toHaveCount(1);
+  await expect(tobias.page.getByTestId('audit-total')).toHaveText('1 entry match');
+
+  // A member does not reach the desk.
+  await ibrahim.page.goto('/moderation/reports');
+  await expect(ibrahim.page).toHaveURL(/\/$/);
+  expect((await ibrahim.page.request.get('/api/moderation/queue')).status()).toBe(403);
+
+  for (const c of [tobias.context, saskia.context, ibrahim.context, visitor]) await c.close();
+});
