@@ -1,17 +1,36 @@
 import { expect, test, type Page } from '@playwright/test';
 import { entryIdByTitle } from './helpers/api';
 import { memberPage } from './helpers/community';
-import { shoot } from './helpers/screens';
+import { SCREEN_DIR, shoot } from './helpers/screens';
 
 const MOIRE = 'Dial moiré, thirty-six lobes';
 const BASKET = 'Eighteen-lobe basket weave';
 const SPAM = `Cheap rosettes, all sizes, at example.test/shop ${Date.now().toString(36)}`;
 const HIDE_REASON = 'Advertising is not allowed in the guild’s comments.';
 
-/** Full-page shots start from the top. */
+/** Full-page shots start from the top, with no passing snack bar over the page. */
 async function shootFromTop(page: Page, name: string): Promise<void> {
+  await calm(page);
   await page.evaluate(() => window.scrollTo(0, 0));
   await shoot(page, name);
+}
+
+/** A dialog is shot as the screen shows it (a full-page shot would stretch the backdrop), at both widths. */
+async function shootDialog(page: Page, name: string): Promise<void> {
+  await calm(page);
+  for (const width of [1280, 360]) {
+    await page.setViewportSize({ width, height: width === 360 ? 740 : 800 });
+    await page.waitForTimeout(150);
+    await page.screenshot({ path: `${SCREEN_DIR}/${name}-${width}.png` });
+  }
+  await page.setViewportSize({ width: 1280, height: 800 });
+}
+
+/** Closes any snack bar still showing. */
+async function calm(page: Page): Promise<void> {
+  const dismiss = page.locator('mat-snack-bar-container button');
+  if (await dismiss.count()) await dismiss.first().click();
+  await expect(page.locator('mat-snack-bar-container')).toHaveCount(0);
 }
 
 /** The entry ids the showcase list shows, in order. */
@@ -95,7 +114,7 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await expect(ibrahim.page.getByRole('alert').filter({ hasText: 'Choose a reason' })).toBeVisible();
   await ibrahim.page.getByRole('radio', { name: /^Spam/ }).check();
   await ibrahim.page.getByTestId('report-details').fill('An advert for a shop, nothing about the bar.');
-  await shoot(ibrahim.page, 'report-dialog');
+  await shootDialog(ibrahim.page, 'report-dialog');
   await ibrahim.page.getByTestId('report-send').click();
   await expect(ibrahim.page.getByText('The moderators will look at it.')).toBeVisible();
   await expect(ibrahim.page.getByRole('dialog')).toHaveCount(0);
@@ -118,7 +137,7 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await tobias.page.getByTestId('decision-confirm').click();
   await expect(tobias.page.getByText('The reason is required')).toBeVisible();
   await tobias.page.getByTestId('decision-words').fill(HIDE_REASON);
-  await shoot(tobias.page, 'moderation-hide-dialog');
+  await shootDialog(tobias.page, 'moderation-hide-dialog');
   await tobias.page.getByTestId('decision-confirm').click();
   await expect(item.getByTestId('case-hidden')).toBeVisible();
   await tobias.page.getByTestId('desk-tab-hidden').click();
@@ -135,8 +154,7 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await saskia.page.reload();
   const own = saskia.page.getByTestId('comment').filter({ hasText: SPAM });
   await expect(own.getByTestId('comment-hidden')).toContainText(HIDE_REASON);
-  await own.scrollIntoViewIfNeeded();
-  await shoot(saskia.page, 'entry-hidden-comment-author');
+  await shootFromTop(saskia.page, 'entry-hidden-comment-author');
 
   // The audit log shows both: the featuring and the hiding, with who, what and why.
   await tobias.page.getByTestId('desk-tab-audit').click();

@@ -14,6 +14,9 @@ import { navLinksFor } from './nav-links';
 
 /** Below this width the navigation folds into a "Menu" button. */
 const COMPACT_QUERY = '(max-width: 719.98px)';
+/** Below this width it folds too when it holds more than MEDIUM_LINKS_MAX links (moderators and admins have more destinations). */
+const MEDIUM_QUERY = '(max-width: 1023.98px)';
+const MEDIUM_LINKS_MAX = 4;
 
 @Component({
   selector: 'bw-top-bar',
@@ -26,12 +29,13 @@ export class TopBar {
   protected readonly auth = inject(AuthStore);
   private readonly config = inject(ConfigStore);
 
-  protected readonly compact = toSignal(
+  private readonly widths = toSignal(
     inject(BreakpointObserver)
-      .observe(COMPACT_QUERY)
-      .pipe(map((state) => state.matches)),
-    { initialValue: false },
+      .observe([COMPACT_QUERY, MEDIUM_QUERY])
+      .pipe(map((state) => ({ narrow: state.breakpoints[COMPACT_QUERY], medium: state.breakpoints[MEDIUM_QUERY] }))),
+    { initialValue: { narrow: false, medium: false } },
   );
+  protected readonly compact = computed(() => this.widths().narrow || (this.widths().medium && this.links().length > MEDIUM_LINKS_MAX));
 
   protected readonly links = computed(() =>
     navLinksFor({ isAdmin: this.auth.isAdmin(), isModerator: this.auth.role() === 'moderator', localMail: this.config.config().localMail, signedIn: this.auth.signedIn() }),

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { CaseReport, ModerationCase } from '@barwright/contracts';
-import { caseTimeline, itemName, reportsSummary } from './case-timeline';
+import { caseTimeline, itemName, itemPhrase, reportsSummary } from './case-timeline';
 
 const report = (over: Partial<CaseReport>): CaseReport => ({
   id: 'r', reason: 'spam', details: '', status: 'open', createdAt: '2026-03-01T10:00:00.000Z', resolvedAt: null,
@@ -30,5 +30,6 @@ describe('the history of a case', () => {
     const item = { entryTitle: 'Sine 24' } as ModerationCase['item'];
     expect(itemName({ item: { ...item, target: { kind: 'comment', id: 'c' } } })).toBe('Comment on “Sine 24”');
     expect(itemName({ item: { ...item, target: { kind: 'entry', id: 'e' } } })).toBe('Bar “Sine 24”');
+    expect(itemPhrase({ item: { ...item, target: { kind: 'photo', id: 'p' } } })).toBe('the photo on “Sine 24”');
   });
 });

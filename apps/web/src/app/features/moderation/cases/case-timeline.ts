@@ -49,3 +49,9 @@ export function itemName(c: Pick<ModerationCase, 'item'>): string {
       return `Photo on ${title}`;
   }
 }
+
+/** The same in the middle of a sentence: "the comment on “Sine 24”". */
+export function itemPhrase(c: Pick<ModerationCase, 'item'>): string {
+  const name = itemName(c);
+  return `the ${name.charAt(0).toLowerCase()}${name.slice(1)}`;
+}

@@ -11,7 +11,7 @@ import type { Decision } from '../moderation-api';
 
 export interface DecisionRequest {
   decision: Decision;
-  /** "Comment on “Sine 24”". */
+  /** "the comment on “Sine 24”". */
   itemName: string;
   authorName: string;
 }

@@ -17,7 +17,7 @@ interface DeskTab {
   template: `
     <section class="bw-page desk" aria-labelledby="desk-title">
       <h1 id="desk-title">Moderation desk</h1>
-      <nav mat-tab-nav-bar [tabPanel]="panel" aria-label="Moderation desk" class="tabs">
+      <nav mat-tab-nav-bar [tabPanel]="panel" mat-stretch-tabs="false" mat-align-tabs="start" aria-label="Moderation desk" class="tabs">
         @for (tab of tabs; track tab.path) {
           <a mat-tab-link [routerLink]="tab.path" routerLinkActive #rla="routerLinkActive" [active]="rla.isActive" [attr.data-testid]="tab.testId">
             <mat-icon aria-hidden="true">{{ tab.icon }}</mat-icon><span>{{ tab.label }}</span>

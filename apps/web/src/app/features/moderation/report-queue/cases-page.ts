@@ -7,7 +7,7 @@ import type { ModerationCase } from '@barwright/contracts';
 import { Notifier } from '../../../core/error-handling/notifier';
 import { CaseCard } from '../cases/case-card';
 import { CasesStore, type CaseList } from '../cases/cases-store';
-import { itemName } from '../cases/case-timeline';
+import { itemPhrase } from '../cases/case-timeline';
 import { askDecision } from '../cases/decision-dialog';
 import type { Decision } from '../moderation-api';
 
@@ -97,7 +97,7 @@ export class CasesPage {
   }
 
   protected async decide(c: ModerationCase, decision: Decision): Promise<void> {
-    const words = await askDecision(this.dialog, { decision, itemName: itemName(c), authorName: c.item.author.displayName });
+    const words = await askDecision(this.dialog, { decision, itemName: itemPhrase(c), authorName: c.item.author.displayName });
     if (words === null) return;
     await this.store.decide(c, decision, words);
     void this.notifier.tell(DONE[decision], undefined, 4000);

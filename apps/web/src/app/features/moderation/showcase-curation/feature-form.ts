@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, computed, DestroyRef, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, inject, input, signal, viewChild } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
-import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, FormGroupDirective, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatAutocompleteModule, MatAutocompleteSelectedEvent } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -81,6 +81,8 @@ export class FeatureForm {
     entryId: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
     note: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(SHOWCASE_NOTE_MAX)] }),
   });
+  /** Resetting through the directive also forgets that the form was submitted (else the emptied note shows as an error). */
+  private readonly formDirective = viewChild.required(FormGroupDirective);
   private readonly found = signal<EntryCard[]>([]);
   protected readonly choices = computed(() => this.found().filter((e) => !this.exclude().includes(e.id)));
   protected readonly busy = signal(false);
@@ -124,8 +126,8 @@ export class FeatureForm {
     this.busy.set(true);
     try {
       await this.save()(this.form.controls.entryId.value, this.form.controls.note.value);
-      this.form.reset();
-      this.search.setValue('');
+      this.formDirective().resetForm();
+      this.search.reset('');
     } catch (error) {
       this.problem.set(formProblem(error, this.form));
     } finally {

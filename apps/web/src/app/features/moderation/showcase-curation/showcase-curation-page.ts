@@ -9,6 +9,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatTooltipModule } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
 import { SHOWCASE_NOTE_MAX, type CuratedItem } from '@barwright/contracts';
 import { Notifier } from '../../../core/error-handling/notifier';
@@ -25,7 +26,7 @@ import { movedText } from './move-item';
  */
 @Component({
   selector: 'bw-showcase-curation-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, CdkDrag, CdkDragHandle, CdkDropList, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, FeatureForm],
+  imports: [DatePipe, ReactiveFormsModule, RouterLink, CdkDrag, CdkDragHandle, CdkDropList, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatTooltipModule, FeatureForm],
   providers: [CurationStore],
   templateUrl: './showcase-curation-page.html',
   styleUrl: './showcase-curation-page.scss',
