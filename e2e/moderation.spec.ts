@@ -126,6 +126,8 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await ibrahim.page.keyboard.press('Escape');
   await expect(ibrahim.page.getByRole('dialog')).toHaveCount(0);
 
+  // The moderator's top bar counts the open report live, without a reload.
+  await expect(tobias.page.getByTestId('nav-badge')).toHaveText('1');
   // The moderator finds it on the desk, in context, and hides it with a reason for its author.
   await tobias.page.getByTestId('desk-tab-reports').click();
   const item = tobias.page.getByTestId('case').filter({ hasText: SPAM });
@@ -140,6 +142,7 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await shootDialog(tobias.page, 'moderation-hide-dialog');
   await tobias.page.getByTestId('decision-confirm').click();
   await expect(item.getByTestId('case-hidden')).toBeVisible();
+  await expect(tobias.page.getByTestId('nav-badge')).toHaveCount(0);
   await tobias.page.getByTestId('desk-tab-hidden').click();
   await expect(tobias.page.getByTestId('case').filter({ hasText: SPAM }).getByTestId('case-restore')).toBeVisible();
   await shootFromTop(tobias.page, 'moderation-hidden');

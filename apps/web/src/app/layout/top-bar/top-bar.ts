@@ -11,6 +11,7 @@ import { ConfigStore } from '../../core/config/config-store';
 import { AccountMenu } from '../account-menu/account-menu';
 import { NotificationBell } from '../notification-bell/notification-bell';
 import { navLinksFor } from './nav-links';
+import { DeskCount } from '../../features/moderation/desk-count';
 
 /** Below this width the navigation folds into a "Menu" button. */
 const COMPACT_QUERY = '(max-width: 719.98px)';
@@ -28,6 +29,7 @@ const MEDIUM_LINKS_MAX = 4;
 export class TopBar {
   protected readonly auth = inject(AuthStore);
   private readonly config = inject(ConfigStore);
+  private readonly desk = inject(DeskCount);
 
   private readonly widths = toSignal(
     inject(BreakpointObserver)
@@ -38,6 +40,12 @@ export class TopBar {
   protected readonly compact = computed(() => this.widths().narrow || (this.widths().medium && this.links().length > MEDIUM_LINKS_MAX));
 
   protected readonly links = computed(() =>
-    navLinksFor({ isAdmin: this.auth.isAdmin(), isModerator: this.auth.role() === 'moderator', localMail: this.config.config().localMail, signedIn: this.auth.signedIn() }),
+    navLinksFor({
+      isAdmin: this.auth.isAdmin(),
+      isModerator: this.auth.role() === 'moderator',
+      openReports: this.desk.openReports(),
+      localMail: this.config.config().localMail,
+      signedIn: this.auth.signedIn(),
+    }),
   );
 }

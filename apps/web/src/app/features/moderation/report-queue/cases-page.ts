@@ -10,6 +10,7 @@ import { CasesStore, type CaseList } from '../cases/cases-store';
 import { itemPhrase } from '../cases/case-timeline';
 import { askDecision } from '../cases/decision-dialog';
 import type { Decision } from '../moderation-api';
+import { DeskCount } from '../desk-count';
 
 const DONE: Record<Decision, string> = {
   dismiss: 'Reports dismissed.',
@@ -34,6 +35,13 @@ const DONE: Record<Decision, string> = {
       </p>
       <button mat-button type="button" (click)="reload()" data-testid="cases-reload"><mat-icon aria-hidden="true">refresh</mat-icon>Reload</button>
     </div>
+    @if (stale()) {
+      <p class="stale bw-with-icon" role="status" data-testid="cases-stale">
+        <mat-icon aria-hidden="true">notifications_active</mat-icon>
+        <span>The queue has changed: {{ desk.openReports() }} open {{ desk.openReports() === 1 ? 'report' : 'reports' }} now.</span>
+        <button mat-button type="button" (click)="reload()">Show them</button>
+      </p>
+    }
     @if (store.cases(); as cases) {
       @if (cases.length === 0) {
         <p class="empty bw-panel" data-testid="cases-empty">{{ list() === 'queue' ? 'No open reports. All quiet.' : 'Nothing is hidden.' }}</p>
@@ -68,6 +76,14 @@ const DONE: Record<Decision, string> = {
     .empty {
       margin: 0;
     }
+    .stale {
+      align-items: center;
+      margin: 0 0 1rem;
+      padding: 0.25rem 0.25rem 0.25rem 1rem;
+      border-radius: var(--mat-sys-corner-small);
+      background: var(--mat-sys-secondary-container);
+      color: var(--mat-sys-on-secondary-container);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -75,8 +91,15 @@ export class CasesPage {
   protected readonly store = inject(CasesStore);
   private readonly dialog = inject(MatDialog);
   private readonly notifier = inject(Notifier);
+  protected readonly desk = inject(DeskCount);
   /** From the route's data. */
   readonly list = input<CaseList>('queue');
+
+  /** New reports came in (or others were decided) since this list was loaded. */
+  protected readonly stale = computed(() => {
+    const live = this.desk.openReports();
+    return this.list() === 'queue' && live !== null && this.store.cases() !== null && live !== this.store.openReports();
+  });
 
   protected readonly countText = computed(() => {
     const cases = this.store.cases() ?? [];
