@@ -60,6 +60,14 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await tobias.page.getByTestId('nav-moderation').click();
   await expect(tobias.page.getByTestId('desk-tab-reports')).toHaveAttribute('aria-selected', 'true');
   await tobias.page.getByTestId('desk-tab-showcase').click();
+  // The demo opens with the curator's earlier picks; take them out first (confirmed each time).
+  await expect(tobias.page.getByTestId('curation-item').first()).toBeVisible();
+  while ((await tobias.page.getByTestId('curation-item').count()) > 0) {
+    const before = await tobias.page.getByTestId('curation-item').count();
+    await tobias.page.getByTestId('curation-item').first().getByTestId('curation-remove').click();
+    await tobias.page.getByTestId('confirm-accept').click();
+    await expect(tobias.page.getByTestId('curation-item')).toHaveCount(before - 1);
+  }
   await expect(tobias.page.getByTestId('curation-empty')).toBeVisible();
   await feature(tobias.page, MOIRE, 'Saskia’s dial pattern: the drift of the moiré is even across the whole plate.');
   await feature(tobias.page, BASKET, 'A basket weave that cuts clean in A2; the trial and the keeper match.');

@@ -104,6 +104,12 @@ export const DEMO_RATINGS: { by: string; title: string; stars: number }[] = [
   { by: 'saskia@example.test', title: 'Eighteen-lobe basket weave', stars: 4 },
 ];
 
+/** The curator's picks for the showcase, in order (Tobias is the demo moderator). */
+export const DEMO_SHOWCASE: { title: string; note: string }[] = [
+  { title: 'Twenty-four sine, barleycorn', note: 'The Guild\'s reference barleycorn: proven in acrylic and in A2. Start here.' },
+  { title: 'Flat-topped twelve, straight lines', note: 'Plain waves with flats, drawn in inches; a good first keeper.' },
+];
+
 export const DEMO_COMMENTS: { by: string; title: string; body: string }[] = [
   { by: 'tobias@example.test', title: 'Twenty-four sine, barleycorn', body: 'Cut this one last Saturday on the club engine. Fifteen passes in A2 as planned, no chatter.' },
   { by: 'ibrahim@example.test', title: 'Twenty-four sine, barleycorn', body: 'Trying it in acrylic first with my 6 mm cutter; will post the trial.' },

@@ -11,7 +11,8 @@ import { setRating } from '../apps/server/src/ratings/ratings-service';
 import { addComment } from '../apps/server/src/comments/comments-service';
 import { remixEntry } from '../apps/server/src/remix/remix-service';
 import { findLiveEntry } from '../apps/server/src/publishing/entry-access';
-import { DEMO_BARS, DEMO_COMMENTS, DEMO_RATINGS, DEMO_REMIX } from './demo-bars';
+import { DEMO_BARS, DEMO_COMMENTS, DEMO_RATINGS, DEMO_REMIX, DEMO_SHOWCASE } from './demo-bars';
+import { featureEntry } from '../apps/server/src/showcase/showcase-service';
 
 /** Boards, designs, published bars, a remix, ratings and comments of the demo club. */
 export async function seedDemoCommunity(db: Db): Promise<void> {
@@ -54,4 +55,6 @@ export async function seedDemoCommunity(db: Db): Promise<void> {
 
   for (const r of DEMO_RATINGS) await setRating(db, entryByTitle.get(r.title)!, (await person(r.by)).id, r.stars);
   for (const c of DEMO_COMMENTS) await addComment(db, entryByTitle.get(c.title)!, await person(c.by), c.body, undefined, loose);
+  const curator = await person('tobias@example.test');
+  for (const s of DEMO_SHOWCASE) await featureEntry(db, curator, entryByTitle.get(s.title)!, s.note);
 }

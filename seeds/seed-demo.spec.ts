@@ -6,7 +6,7 @@ import { openTestDatabase, type TestDatabase } from '../apps/server/src/testing/
 import { Client, startTestServer, type TestServer } from '../apps/server/src/testing/test-app';
 import { seedDemoScenario } from './seed-demo';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-scenario';
-import { DEMO_BARS } from './demo-bars';
+import { DEMO_BARS, DEMO_SHOWCASE } from './demo-bars';
 
 describe('the demo scenario', () => {
   let database: TestDatabase;
@@ -28,6 +28,8 @@ describe('the demo scenario', () => {
     const explore = await request(server.app).get('/api/entries?sort=top');
     expect(explore.body.items[0].title).toBe('Twenty-four sine, barleycorn');
     expect(explore.body.items[0].remixCount).toBe(1);
+    const showcase = await request(server.app).get('/api/showcase');
+    expect(showcase.body.map((s: { entry: { title: string } }) => s.entry.title)).toEqual(DEMO_SHOWCASE.map((s) => s.title));
   });
 
   it('uses only invented people at the reserved example.test domain, and every demo account signs in', async () => {

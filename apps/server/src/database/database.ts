@@ -34,6 +34,8 @@ export async function openDatabase(target: DatabaseTarget): Promise<Database> {
     return { db: db as unknown as Db, kind: 'pglite', close: () => client.close() };
   }
   const pool = new pg.Pool({ connectionString: target.url, max: 10 });
+  // An idle client the server drops (restart, failover) is replaced on the next query; it must not crash us.
+  pool.on('error', (error) => console.error(`[barwright] database connection lost: ${error.message}`));
   const db = drizzlePg(pool, { schema });
   await migratePg(db, { migrationsFolder: MIGRATIONS_FOLDER });
   return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };

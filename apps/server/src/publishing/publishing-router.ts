@@ -30,7 +30,8 @@ function sendSvg(req: Request, res: Response, svg: string, maxAgeSeconds: number
     'Content-Type': 'image/svg+xml; charset=utf-8',
     'X-Content-Type-Options': 'nosniff',
     'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'",
-    'Cache-Control': `public, max-age=${maxAgeSeconds}`,
+    // private: a shared cache must not keep serving a bar after the moderators hide it.
+    'Cache-Control': `private, max-age=${maxAgeSeconds}`,
     Vary: 'Accept-Encoding',
   });
   if (/\bgzip\b/.test(req.get('accept-encoding') ?? '')) res.set('Content-Encoding', 'gzip').send(gzipSync(svg));
