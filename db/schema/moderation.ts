@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, bigserial } from 'drizzle-orm/pg-core';
 import { entries } from './community';
 import { users } from './users';
 
@@ -69,6 +69,8 @@ export const auditLog = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    /** The order lines were written in: lines of one transaction share `at`. */
+    seq: bigserial('seq', { mode: 'number' }).notNull(),
     /** Null for actions taken outside the app (the command line). */
     actorId: uuid('actor_id'),
     actorName: text('actor_name').notNull(),

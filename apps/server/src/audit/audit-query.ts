@@ -35,7 +35,7 @@ export async function auditPage(db: Db, q: AuditQuery): Promise<AuditPage> {
     .select()
     .from(auditLog)
     .where(where)
-    .orderBy(desc(auditLog.at), desc(auditLog.id))
+    .orderBy(desc(auditLog.at), desc(auditLog.seq))
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
   const [{ total }] = await db.select({ total: count() }).from(auditLog).where(where);
@@ -46,7 +46,7 @@ export async function auditPage(db: Db, q: AuditQuery): Promise<AuditPage> {
 export async function auditOfTargets(db: Db, targetIds: string[]): Promise<Map<string, AuditEntry[]>> {
   const byTarget = new Map<string, AuditEntry[]>();
   if (!targetIds.length) return byTarget;
-  const rows = await db.select().from(auditLog).where(inArray(auditLog.targetId, targetIds)).orderBy(desc(auditLog.at), desc(auditLog.id));
+  const rows = await db.select().from(auditLog).where(inArray(auditLog.targetId, targetIds)).orderBy(desc(auditLog.at), desc(auditLog.seq));
   for (const row of rows) byTarget.set(row.targetId!, [...(byTarget.get(row.targetId!) ?? []), toAuditEntry(row)]);
   return byTarget;
 }
