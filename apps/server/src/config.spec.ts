@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { loadConfig } from './config';
+import { configWarnings, loadConfig } from './config';
+
+const secret = 'x'.repeat(32);
+const production = { NODE_ENV: 'production', SESSION_SECRET: secret, SMTP_URL: 'smtp://mail.example:587' };
 
 describe('configuration', () => {
   it('has defaults that run the product locally', () => {
@@ -14,6 +17,21 @@ describe('configuration', () => {
     expect(() => loadConfig({ DATABASE_URL: 'not a url' })).toThrow(/DATABASE_URL/);
     expect(() => loadConfig({ SESSION_SECRET: 'short' })).toThrow(/SESSION_SECRET: must be at least 32/);
     expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/SESSION_SECRET: is required/);
+  });
+
+  it('refuses a production start without SMTP_URL: no fake mail server, no mailbox', () => {
+    expect(() => loadConfig({ NODE_ENV: 'production', SESSION_SECRET: secret })).toThrow(/SMTP_URL: is required when NODE_ENV=production/);
+    expect(loadConfig(production).smtpUrl).toBe('smtp://mail.example:587');
+  });
+
+  it('seeds the demo accounts in production only when DEMO_DATA=true is set, and then warns', () => {
+    expect(loadConfig(production).demoData).toBe(false);
+    expect(configWarnings(loadConfig(production))).toEqual([]);
+    const asked = loadConfig({ ...production, DEMO_DATA: 'true' });
+    expect(asked.demoData).toBe(true);
+    expect(configWarnings(asked).join('\n')).toMatch(/WARNING: DEMO_DATA=true in production/);
+    expect(loadConfig({ DEMO_DATA: 'false' }).demoData).toBe(false);
+    expect(configWarnings(loadConfig({}))).toEqual([]);
   });
 
   it('takes PUBLIC_URL without a trailing slash', () => {

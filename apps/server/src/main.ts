@@ -4,7 +4,7 @@ import { createApp, type AppLocals } from './app';
 import { BoardAccessEvents } from './boards/board-access';
 import { CLOSE_CODES } from '@barwright/contracts';
 import { CollabGateway } from './realtime/collab-gateway';
-import { loadConfig } from './config';
+import { configWarnings, loadConfig } from './config';
 import { DataDirBusyError } from './database/data-dir-lock';
 import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
 import { createMailer } from './mail/mailer';
@@ -22,6 +22,7 @@ const log = (line: string) => console.log(`[barwright] ${line}`);
 async function main() {
   const started = performance.now();
   const config = loadConfig();
+  for (const line of configWarnings(config)) console.warn(`[barwright] ${line}`);
   const { database, release, fresh } = await openConfiguredDatabase(config, log);
   let localSmtp: LocalSmtp | undefined;
   if (!config.smtpUrl) localSmtp = await startLocalSmtp();
