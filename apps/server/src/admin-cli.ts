@@ -5,6 +5,7 @@ import { users } from '../../../db/schema';
 import { loadConfig } from './config';
 import { openConfiguredDatabase } from './runtime';
 import { hashPassword, passwordWeakness } from './auth/passwords';
+import { revokeTokens } from './auth/account-tokens';
 import { findUserByEmail, insertUser } from './auth/users';
 import { recordAudit } from './audit/audit-log';
 
@@ -42,6 +43,8 @@ async function main() {
         .update(users)
         .set({ role: 'admin', suspendedAt: null, passwordHash: await hashPassword(password.data), emailVerifiedAt: existing.emailVerifiedAt ?? new Date() })
         .where(eq(users.id, existing.id));
+      // The password was just set here: a reset link mailed before must not set it again.
+      await revokeTokens(database.db, existing.id, 'reset');
       // A role action like any other: the audit log names the command line as its actor.
       const target = { kind: 'user' as const, id: existing.id, label: existing.displayName };
       if (existing.role !== 'admin') await recordAudit(database.db, { actor: null, action: 'user.role', target, subject: existing, details: { from: existing.role, to: 'admin' } });

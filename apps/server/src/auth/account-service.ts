@@ -64,6 +64,7 @@ export async function requestPasswordReset(deps: AccountDeps, email: string) {
 export async function confirmPasswordReset(deps: AccountDeps, token: string, password: string) {
   // Check the password before using up the token, so a weak choice can be corrected with the same link.
   refuseWeak(password, ['barwright']);
+  // Uses up this user's other reset links too: an older mail must not set the password again.
   const userId = await consumeToken(deps.db, token, 'reset');
   if (!userId) throw new HttpError(400, 'invalid_token', 'This reset link is used or expired. Ask for a new one.');
   const user = await findUserById(deps.db, userId);

@@ -82,9 +82,12 @@ export function authRouter(deps: AuthRouterDeps): Router {
     const [row] = await deps.db.update(users).set(body).where(eq(users.id, user.id)).returning();
     res.json(toMe(row));
   });
-  router.post('/password-reset/request', deps.limits.mailByAddress, async (req, res) => {
-    await accounts.requestPasswordReset(deps, parseBody(resetRequestBody, req.body).email);
+  router.post('/password-reset/request', deps.limits.mailByAddress, (req, res) => {
+    const { email } = parseBody(resetRequestBody, req.body);
+    // Answered before the look-up, the token and the mail, so a known address takes no longer than an
+    // unknown one; what fails afterwards goes to the log.
     res.status(202).json({ ok: true });
+    accounts.requestPasswordReset(deps, email).catch(deps.log);
   });
   router.post('/password-reset/confirm', async (req, res) => {
     const body = parseBody(resetConfirmBody, req.body);
