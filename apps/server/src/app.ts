@@ -12,6 +12,7 @@ import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { HttpError } from './http/http-error';
 import { createRateLimits, DEFAULT_RATE_LIMITS, type RateLimitSettings } from './http/rate-limits';
 import { securityHeaders } from './http/security-headers';
+import { refuseHostileShapes } from './http/request-shape';
 import type { LocalSmtp } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { webAppRouter } from './web/web-app';
@@ -105,6 +106,7 @@ export function createApp(deps: AppDeps): express.Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '256kb' }));
+  api.use(refuseHostileShapes);
   const openapi = openApiDocument();
   api.get('/openapi.json', (_req, res) => {
     res.json(openapi);

@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { dayOrInstant } from './instant';
 
 /**
  * The audit log: every moderation and role action — who, what, which item, why, when. Append-only.
@@ -40,7 +41,7 @@ export type AuditTargetKind = (typeof AUDIT_TARGET_KINDS)[number];
 export const AUDIT_PAGE_SIZE_MAX = 100;
 
 /** A day (YYYY-MM-DD, UTC) or an exact time (ISO 8601 with offset). */
-const instant = z.union([z.iso.date(), z.iso.datetime({ offset: true })], { error: 'must be a date (YYYY-MM-DD) or an ISO 8601 time' });
+const instant = dayOrInstant();
 const intParam = (min: number, max: number) =>
   z.coerce.number({ error: 'must be a number' }).int('must be a whole number').min(min, `must be at least ${min}`).max(max, `must be at most ${max}`);
 

@@ -3,6 +3,7 @@ export * from './api-error';
 export * from './auth';
 export * from './boards';
 export * from './design-presets';
+export * from './instant';
 // The community: publishing, explore, ratings, comments, remix, shop log, notifications.
 export * from './entries';
 export * from './ratings';

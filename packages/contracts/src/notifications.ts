@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { isoInstant } from './instant';
 
 /**
  * Notifications: in the app (the bell, live over socket.io: see socket-events.ts) and by e-mail.
@@ -37,7 +38,7 @@ export interface NotificationList {
 export const NOTIFICATIONS_PAGE_MAX = 100;
 export const notificationListQuery = z.strictObject({
   limit: z.coerce.number({ error: 'must be a number' }).int('must be a whole number').min(1, 'must be at least 1').max(NOTIFICATIONS_PAGE_MAX, `must be at most ${NOTIFICATIONS_PAGE_MAX}`).default(30),
-  before: z.iso.datetime({ error: 'must be an ISO 8601 time', offset: true }).optional(),
+  before: isoInstant().optional(),
 });
 
 export const markReadBody = z.union(

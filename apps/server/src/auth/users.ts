@@ -3,6 +3,7 @@ import type { AdminUser, Me } from '@barwright/contracts';
 import { users, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { hashPassword } from './passwords';
+import { isUuid } from '../http/uuid';
 
 export const toMe = (u: UserRow): Me => ({
   id: u.id,
@@ -30,7 +31,7 @@ export async function findUserByEmail(db: Db, email: string): Promise<UserRow | 
 }
 
 export async function findUserById(db: Db, id: string): Promise<UserRow | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(id)) return undefined;
+  if (!isUuid(id)) return undefined;
   const [row] = await db.select().from(users).where(eq(users.id, id));
   return row;
 }

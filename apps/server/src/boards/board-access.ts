@@ -4,6 +4,7 @@ import type { BoardRole } from '@barwright/contracts';
 import { boardMembers, designs } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { forbidden, notFound } from '../http/http-error';
+import { isUuid } from '../http/uuid';
 
 /** Told whenever someone's role on a board changes or ends, so open sockets follow at once. */
 export class BoardAccessEvents extends EventEmitter<{ changed: [{ boardId: string; userId?: string }] }> {}
@@ -17,8 +18,6 @@ export async function boardRoleOf(db: Db, boardId: string, userId: string): Prom
     .where(and(eq(boardMembers.boardId, boardId), eq(boardMembers.userId, userId)));
   return row?.role;
 }
-
-const isUuid = (id: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
 
 /**
  * The caller's role on a board, at least `least`. Someone who is not a member gets 404, as if the

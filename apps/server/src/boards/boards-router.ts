@@ -6,6 +6,7 @@ import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
 import { HttpError, notFound } from '../http/http-error';
 import { parseBody } from '../http/validate';
+import { isUuid, requireUuid } from '../http/uuid';
 import { invitationMail } from '../mail/board-mails';
 import type { Mailer } from '../mail/mailer';
 import { createDesign } from '../designs/designs-service';
@@ -65,10 +66,11 @@ export function boardsRouter(deps: BoardsRouterDeps): Router {
   });
   router.delete('/:id/invitations/:invitationId', async (req, res) => {
     await requireBoardRole(db, req.params.id, requireUser(req).id, 'owner');
+    const invitationId = requireUuid(req.params.invitationId, 'invitation');
     await db
       .update(boardInvitations)
       .set({ revokedAt: new Date() })
-      .where(and(eq(boardInvitations.id, req.params.invitationId), eq(boardInvitations.boardId, req.params.id)));
+      .where(and(eq(boardInvitations.id, invitationId), eq(boardInvitations.boardId, req.params.id)));
     res.status(204).end();
   });
 
@@ -104,7 +106,7 @@ export function boardsRouter(deps: BoardsRouterDeps): Router {
 }
 
 async function memberRole(db: Db, boardId: string, userId: string) {
-  const [row] = /^[0-9a-f-]{36}$/i.test(userId)
+  const [row] = isUuid(userId)
     ? await db.select().from(boardMembers).where(and(eq(boardMembers.boardId, boardId), eq(boardMembers.userId, userId)))
     : [];
   if (!row) throw notFound('member');

@@ -10,6 +10,7 @@ import { requireUser } from '../auth/auth-router';
 import { requireDesignRole } from '../boards/board-access';
 import { HttpError, notFound } from '../http/http-error';
 import { parseBody } from '../http/validate';
+import { isUuid } from '../http/uuid';
 import type { DesignDocStore } from '../realtime/design-doc-store';
 import { applyServerUpdate, currentDoc } from '../realtime/live-docs';
 import { createDesign, toDesignSummary, validatedDesign } from './designs-service';
@@ -119,7 +120,7 @@ export function designsRouter(deps: DesignsRouterDeps): Router {
 }
 
 async function findVersion(db: Db, designId: string, versionId: string) {
-  const [row] = /^[0-9a-f-]{36}$/i.test(versionId)
+  const [row] = isUuid(versionId)
     ? await db.select().from(designVersions).where(and(eq(designVersions.id, versionId), eq(designVersions.designId, designId)))
     : [];
   if (!row) throw notFound('version');

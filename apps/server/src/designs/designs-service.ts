@@ -5,12 +5,13 @@ import { writeDesign, readDesign, NOTES_TEXT } from '@barwright/contracts/design
 import { boards, designs, designUpdates, type DesignRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { HttpError } from '../http/http-error';
+import { isUuid } from '../http/uuid';
 
 export const DELETED_KEEP_DAYS = 30;
 const DAY_MS = 86_400_000;
 
 export async function findDesign(db: Db, id: string, includeDeleted = false): Promise<DesignRow | undefined> {
-  if (!/^[0-9a-f-]{36}$/i.test(id)) return undefined;
+  if (!isUuid(id)) return undefined;
   const [row] = await db
     .select()
     .from(designs)

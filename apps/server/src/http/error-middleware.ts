@@ -8,21 +8,52 @@ export const apiNotFound: RequestHandler = (req, res) => {
   res.status(404).json(body);
 };
 
+type ApiError = ApiErrorBody['error'];
+
+/** What body-parser's refusals (its `type`, from the http-errors it throws) mean to a client. */
+const BODY_PARSER_ERRORS: Record<string, (error: { limit?: number }) => ApiError> = {
+  'entity.parse.failed': () => ({ code: 'invalid_json', message: 'The request body is not valid JSON.' }),
+  'entity.too.large': (e) => ({ code: 'too_large', message: `The request body is larger than the limit (${e.limit} bytes).` }),
+  'encoding.unsupported': () => ({ code: 'unsupported_encoding', message: 'The Content-Encoding of the request body is not supported.' }),
+  'charset.unsupported': () => ({ code: 'unsupported_charset', message: 'The charset of the request body is not supported; send UTF-8.' }),
+  'request.aborted': () => ({ code: 'aborted', message: 'The request body ended early.' }),
+  'request.size.invalid': () => ({ code: 'invalid_body', message: 'The request body does not match its Content-Length.' }),
+  'parameters.too.many': () => ({ code: 'invalid_body', message: 'The request has too many parameters.' }),
+};
+
+/**
+ * A client's mistake reported by a library (body-parser, the router's path decoding, multer…):
+ * an error carrying a 4xx `status` or `statusCode`. Its message is shown only when the library
+ * marks it `expose` and it is not one we phrase ourselves; a stack is never shown.
+ */
+function clientError(error: unknown): { status: number; body: ApiError } | undefined {
+  if (!error || typeof error !== 'object') return undefined;
+  const e = error as { status?: unknown; statusCode?: unknown; type?: unknown; expose?: unknown; message?: unknown; limit?: number };
+  const status = Number(e.status ?? e.statusCode);
+  if (!Number.isInteger(status) || status < 400 || status > 499) return undefined;
+  const known = typeof e.type === 'string' ? BODY_PARSER_ERRORS[e.type] : undefined;
+  if (known) return { status, body: known(e) };
+  if (error instanceof URIError) return { status, body: { code: 'invalid_path', message: 'The path holds a malformed percent-escape (%).' } };
+  if (status === 400 && e.type === undefined && 'errno' in e) {
+    return { status, body: { code: 'invalid_body', message: 'The request body could not be read; does it match its Content-Encoding?' } };
+  }
+  const message = e.expose === true && typeof e.message === 'string' && e.message ? e.message : 'The request was refused.';
+  return { status, body: { code: status === 404 ? 'not_found' : 'bad_request', message } };
+}
+
 /** The one error handler, registered last: known errors keep their status, the rest become 500 without details. */
 export function errorMiddleware(log: (error: unknown) => void): ErrorRequestHandler {
   return (error, _req, res, next) => {
     if (res.headersSent) return next(error);
     let body: ApiErrorBody;
     let status: number;
+    const refused = error instanceof HttpError ? undefined : clientError(error);
     if (error instanceof HttpError) {
       status = error.status;
       body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
-    } else if (error?.type === 'entity.parse.failed') {
-      status = 400;
-      body = { error: { code: 'invalid_json', message: 'The request body is not valid JSON.' } };
-    } else if (error?.type === 'entity.too.large') {
-      status = 413;
-      body = { error: { code: 'too_large', message: `The request body is larger than the limit (${error.limit} bytes).` } };
+    } else if (refused) {
+      status = refused.status;
+      body = { error: refused.body };
     } else {
       log(error);
       status = 500;

@@ -3,6 +3,7 @@ import type { ReportTarget, ReportTargetKind } from '@barwright/contracts';
 import { comments, entries, photos } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { thumbnailUrl } from '../publishing/entry-views';
+import { isUuid } from '../http/uuid';
 
 /** What the desk needs to know of a reported item, whatever its kind. */
 export interface TargetFacts {
@@ -105,11 +106,9 @@ async function photoTargets(db: Db, ids: string[]): Promise<TargetFacts[]> {
   }));
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /** The items named, by `targetKey`; an item that no longer exists (a deleted photo) is missing from the map. */
 export async function loadTargets(db: Db, targets: Pick<ReportTarget, 'kind' | 'id'>[]): Promise<Map<string, TargetFacts>> {
-  const idsOf = (kind: ReportTargetKind) => [...new Set(targets.filter((t) => t.kind === kind && UUID.test(t.id)).map((t) => t.id))];
+  const idsOf = (kind: ReportTargetKind) => [...new Set(targets.filter((t) => t.kind === kind && isUuid(t.id)).map((t) => t.id))];
   const found = [...(await entryTargets(db, idsOf('entry'))), ...(await commentTargets(db, idsOf('comment'))), ...(await photoTargets(db, idsOf('photo')))];
   return new Map(found.map((t) => [targetKey(t), t]));
 }

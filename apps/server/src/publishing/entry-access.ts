@@ -3,8 +3,10 @@ import { and, eq, isNull } from 'drizzle-orm';
 import { entries, entryRevisions, type EntryRevisionRow, type EntryRow, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { HttpError, notFound } from '../http/http-error';
+import { isUuid } from '../http/uuid';
 
-export const isUuid = (id: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
+/** Re-exported for the community's services, which check their ids here. */
+export { isUuid };
 
 /** The signed-in user, if any (entries are readable signed out). */
 export const viewerOf = (req: Request): UserRow | undefined => req.user ?? undefined;

@@ -14,7 +14,8 @@ export function receiveFile(field: string, maxBytes: number): RequestHandler {
   return (req, res, next) => {
     upload(req, res, (error: unknown) => {
       if (!error) return next();
-      if (!(error instanceof multer.MulterError)) return next(error);
+      // Anything else comes from reading the form (busboy: a malformed part header, a form cut short).
+      if (!(error instanceof multer.MulterError)) return next(new HttpError(400, 'invalid_upload', 'The upload could not be read as a multipart form.'));
       if (error.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'too_large', `The file is larger than the limit of ${Math.round(maxBytes / 1024 / 1024)} MB.`));
       if (error.code === 'LIMIT_UNEXPECTED_FILE') return next(new HttpError(400, 'invalid_input', `Send one file, in the form field "${field}".`, { [field]: 'send one file in this field' }));
       next(new HttpError(400, 'invalid_input', `The upload was refused: ${error.message}.`));
