@@ -14,4 +14,12 @@ export const CLOSE_CODES = {
   forbidden: 4403,
   /** Your role on the board changed: the client reconnects and reads its new role. */
   roleChanged: 4409,
+  /** An update that does not decode or apply, or that leaves the design unreadable: refused, nothing stored; final. */
+  invalidUpdate: 4400,
+  /** This session already has the most sockets allowed (realtime-limits.ts); final for this tab. */
+  tooManySockets: 4429,
+  /** More updates than the rate allows: the client may reconnect (outside 4400–4499, which y-websocket treats as final). */
+  rateLimited: 4290,
+  /** Set by the ws library itself: a frame larger than the server's maxPayload (RFC 6455 §7.4.1). */
+  messageTooBig: 1009,
 } as const;

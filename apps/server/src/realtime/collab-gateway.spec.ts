@@ -32,7 +32,8 @@ describe('collaboration gateway', () => {
       closeUserSockets: (userId) => gateway.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended'),
     });
     httpServer = http.createServer(server.app);
-    gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, log: () => {} });
+    // The convergence test opens 20 sockets with one session, more than a session may by default.
+    gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, log: () => {}, limits: { socketsPerSession: 32 } });
     gateway.attach(httpServer);
     await new Promise<void>((r) => httpServer.listen(0, '127.0.0.1', r));
     baseUrl = `http://127.0.0.1:${(httpServer.address() as AddressInfo).port}`;

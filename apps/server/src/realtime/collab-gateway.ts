@@ -4,14 +4,22 @@ import type { RequestHandler, Response } from 'express';
 import { WebSocketServer, type WebSocket, type RawData } from 'ws';
 import * as Y from 'yjs';
 import * as decoding from 'lib0/decoding';
+import * as encoding from 'lib0/encoding';
 import { CLOSE_CODES, type BoardRole } from '@barwright/contracts';
-import { setPersistence, setupWSConnection } from '@y/websocket-server/utils';
+import { docs, setPersistence, setupWSConnection, type WSSharedDoc } from '@y/websocket-server/utils';
 import type { Db } from '../database/database';
+import { findUserById } from '../auth/users';
 import { boardRoleOf, type BoardAccessEvents } from '../boards/board-access';
 import { findDesign } from '../designs/designs-service';
+import { originAllowed } from './allowed-origins';
 import { DesignDocStore } from './design-doc-store';
+import { CLIENT_IDS_PER_SOCKET, stampPresence } from './presence-stamp';
+import { DEFAULT_REALTIME_LIMITS, TokenBucket, type RealtimeLimits } from './realtime-limits';
+import { UpdateCheck } from './update-check';
 
 const MESSAGE_SYNC = 0;
+const MESSAGE_AWARENESS = 1;
+const SYNC_STEP_1 = 0;
 const SYNC_STEP_2 = 1;
 const SYNC_UPDATE = 2;
 
@@ -20,52 +28,93 @@ export const COLLAB_PATH = '/collab/';
 interface Connection {
   ws: WebSocket;
   userId: string;
+  /** The HTTP session the socket was opened with: signing out closes it. */
+  sessionId: string;
+  displayName: string;
   boardId: string;
   designId: string;
   role: BoardRole;
+  updates: TokenBucket;
+  awareness: TokenBucket;
+  /** The Yjs client ids whose presence this socket speaks for. */
+  clientIds: Set<number>;
 }
 
 export interface CollabGatewayDeps {
   db: Db;
   sessionParser: RequestHandler;
   accessEvents: BoardAccessEvents;
+  /** Origins a browser may connect from (allowedOrigins()); others get 403. Omitted: no Origin check (benchmarks). */
+  origins?: ReadonlySet<string>;
+  limits?: Partial<RealtimeLimits>;
   log?: (error: unknown) => void;
   /** Stored rows per design above which the background compaction merges them. */
   compactAbove?: number;
 }
 
-/** The Yjs update a y-websocket message carries, if it carries one (sync step 2 or update). */
-export function updateInMessage(message: Uint8Array): Uint8Array | undefined {
+/** What a y-websocket message carries: a sync step 1, an update (sync step 2 or update), presence, or something else. */
+export function readMessage(message: Uint8Array):
+  | { kind: 'step1' }
+  | { kind: 'update'; update: Uint8Array }
+  | { kind: 'awareness'; update: Uint8Array }
+  | { kind: 'other' } {
   const decoder = decoding.createDecoder(message);
-  if (decoding.readVarUint(decoder) !== MESSAGE_SYNC) return undefined;
-  const kind = decoding.readVarUint(decoder);
-  return kind === SYNC_STEP_2 || kind === SYNC_UPDATE ? decoding.readVarUint8Array(decoder) : undefined;
+  const type = decoding.readVarUint(decoder);
+  if (type === MESSAGE_AWARENESS) return { kind: 'awareness', update: decoding.readVarUint8Array(decoder) };
+  if (type !== MESSAGE_SYNC) return { kind: 'other' };
+  const step = decoding.readVarUint(decoder);
+  if (step === SYNC_STEP_1) return { kind: 'step1' };
+  if (step === SYNC_STEP_2 || step === SYNC_UPDATE) return { kind: 'update', update: decoding.readVarUint8Array(decoder) };
+  return { kind: 'other' };
 }
+
+const awarenessMessage = (update: Uint8Array) => {
+  const encoder = encoding.createEncoder();
+  encoding.writeVarUint(encoder, MESSAGE_AWARENESS);
+  encoding.writeVarUint8Array(encoder, update);
+  return encoding.toUint8Array(encoder);
+};
 
 /**
  * The realtime gateway: one Yjs document per bar design at `/collab/<designId>`, y-websocket protocol.
- * The session and the board role are checked at the HTTP upgrade (4401 / 4403). Each incoming
- * update is stored before the shared document applies and relays it; viewers' updates are dropped.
+ * The Origin, the session and the board role are checked at the HTTP upgrade (403 / 4401 / 4403).
+ * Each incoming update is tried on a shadow of the document, then stored, and only then handed to
+ * the shared document that applies and relays it; viewers' updates are dropped; presence is stamped
+ * with the socket's account. Limits (frame size, rates, sockets, slow consumers): realtime-limits.ts.
  */
 export class CollabGateway {
   readonly store: DesignDocStore;
-  private readonly wss = new WebSocketServer({ noServer: true });
+  private readonly limits: RealtimeLimits;
+  private readonly wss: WebSocketServer;
   private readonly connections = new Set<Connection>();
+  private readonly checks = new WeakMap<Y.Doc, UpdateCheck>();
   private readonly timer: NodeJS.Timeout;
 
   constructor(private readonly deps: CollabGatewayDeps) {
-    this.store = new DesignDocStore(deps.db);
+    this.limits = { ...DEFAULT_REALTIME_LIMITS, ...deps.limits };
+    this.wss = new WebSocketServer({ noServer: true, maxPayload: this.limits.maxFrameBytes });
+    this.store = new DesignDocStore(deps.db, (message) => this.log(new Error(message)));
     const store = this.store;
     setPersistence({
       provider: store,
-      bindState: async (designId: string, doc: Y.Doc) => {
-        Y.applyUpdate(doc, await store.loadUpdate(designId), 'storage');
+      // The library calls this without awaiting or catching: every error is handled here.
+      bindState: (designId: string, doc: WSSharedDoc) => {
+        const loaded = (async () => {
+          Y.applyUpdate(doc, await store.loadUpdate(designId), 'storage');
+          this.checks.set(doc, new UpdateCheck(doc));
+        })();
+        doc.whenInitialized = loaded;
+        loaded.catch((error) => {
+          this.log(error);
+          for (const ws of doc.conns.keys()) (ws as WebSocket).close(1011, 'the design could not be loaded');
+        });
       },
-      writeState: async (designId: string) => {
+      writeState: async (designId: string, doc: WSSharedDoc) => {
+        this.checks.get(doc)?.dispose();
         await store.compact(designId).catch(this.log);
       },
     });
-    deps.accessEvents.on('changed', ({ boardId, userId }) => void this.recheck(boardId, userId));
+    deps.accessEvents.on('changed', ({ boardId, userId }) => void this.recheck(boardId, userId).catch(this.log));
     this.timer = setInterval(() => void this.compactBusyDocs(), 60_000);
     this.timer.unref();
   }
@@ -75,6 +124,10 @@ export class CollabGateway {
   attach(server: Server): void {
     server.on('upgrade', (req, socket, head) => {
       if (!req.url?.startsWith(COLLAB_PATH)) return;
+      if (this.deps.origins && !originAllowed(req, this.deps.origins)) {
+        socket.end('HTTP/1.1 403 Forbidden\r\nConnection: close\r\nContent-Length: 0\r\n\r\n');
+        return;
+      }
       void this.upgrade(req, socket, head).catch((error) => {
         this.log(error);
         socket.destroy();
@@ -84,22 +137,33 @@ export class CollabGateway {
 
   private async upgrade(req: IncomingMessage, socket: Duplex, head: Buffer) {
     const designId = decodeURIComponent(req.url!.slice(COLLAB_PATH.length).split('?')[0]);
-    const userId = await this.sessionUser(req);
+    const session = await this.sessionOf(req);
     const refuse = (code: number, reason: string) =>
       this.wss.handleUpgrade(req, socket, head, (ws) => ws.close(code, reason));
-    if (!userId) return refuse(CLOSE_CODES.unauthorized, 'sign in first');
+    const user = session && (await findUserById(this.deps.db, session.userId));
+    if (!session || !user || user.suspendedAt) return refuse(CLOSE_CODES.unauthorized, 'sign in first');
     const design = await findDesign(this.deps.db, designId);
-    const role = design ? await boardRoleOf(this.deps.db, design.boardId, userId) : undefined;
+    const role = design ? await boardRoleOf(this.deps.db, design.boardId, user.id) : undefined;
     if (!design || !role) return refuse(CLOSE_CODES.forbidden, 'not a member of this board');
-    this.wss.handleUpgrade(req, socket, head, (ws) => this.connect(ws, req, { ws, userId, boardId: design.boardId, designId, role }));
+    const open = [...this.connections];
+    if (open.filter((c) => c.sessionId === session.sessionId).length >= this.limits.socketsPerSession || open.filter((c) => c.userId === user.id).length >= this.limits.socketsPerUser) {
+      return refuse(CLOSE_CODES.tooManySockets, 'too many open designs: close some tabs first');
+    }
+    this.wss.handleUpgrade(req, socket, head, (ws) =>
+      this.connect(ws, req, {
+        ws, userId: user.id, sessionId: session.sessionId, displayName: user.displayName, boardId: design.boardId, designId, role,
+        updates: new TokenBucket(this.limits.updates), awareness: new TokenBucket(this.limits.awareness), clientIds: new Set(),
+      }),
+    );
   }
 
-  private sessionUser(req: IncomingMessage): Promise<string | undefined> {
+  private sessionOf(req: IncomingMessage): Promise<{ userId: string; sessionId: string } | undefined> {
     return new Promise((resolve) => {
       const res = { getHeader: () => undefined, setHeader: () => res, end: () => res } as unknown as Response;
       this.deps.sessionParser(req as never, res, () => {
-        const session = (req as unknown as { session?: { passport?: { user?: string } } }).session;
-        resolve(session?.passport?.user);
+        const r = req as unknown as { session?: { passport?: { user?: string } }; sessionID?: string };
+        const userId = r.session?.passport?.user;
+        resolve(userId && r.sessionID ? { userId, sessionId: r.sessionID } : undefined);
       });
     });
   }
@@ -107,27 +171,76 @@ export class CollabGateway {
   private connect(ws: WebSocket, req: IncomingMessage, conn: Connection) {
     this.connections.add(conn);
     ws.on('close', () => this.connections.delete(conn));
+    this.dropWhenSlow(ws);
     // y-websocket registers its own 'message' listener; ours runs first, stores the update, then hands it on in order.
     const original = ws.on.bind(ws);
-    let relay: ((data: RawData) => void) | undefined;
+    let relay: ((data: RawData | Uint8Array) => void) | undefined;
     (ws as unknown as { on: typeof ws.on }).on = ((event: string, listener: (...args: unknown[]) => void) =>
       event === 'message' ? ((relay = listener as never), ws) : original(event as never, listener as never)) as typeof ws.on;
     setupWSConnection(ws, req, { docName: conn.designId });
     ws.on = original as typeof ws.on;
+    const doc = docs.get(conn.designId)!;
     let queue = Promise.resolve();
     original('message', (data: RawData) => {
-      queue = queue.then(() => this.receive(conn, data, relay)).catch(this.log);
+      queue = queue.then(() => this.receive(conn, doc, data, relay)).catch(this.log);
     });
   }
 
-  private async receive(conn: Connection, data: RawData, relay?: (data: RawData) => void) {
+  /** A socket whose unsent bytes pass the bound is dropped (it reconnects and syncs afresh) instead of growing the heap. */
+  private dropWhenSlow(ws: WebSocket) {
+    const send = ws.send.bind(ws) as (...args: unknown[]) => void;
+    (ws as unknown as { send: (...args: unknown[]) => void }).send = (...args: unknown[]) => {
+      if (ws.readyState === ws.OPEN && ws.bufferedAmount > this.limits.slowConsumerBytes) {
+        this.log(new Error(`collab: dropped a slow consumer with ${ws.bufferedAmount} bytes queued`));
+        ws.terminate();
+      }
+      send(...args);
+    };
+  }
+
+  private async receive(conn: Connection, doc: WSSharedDoc, data: RawData, relay?: (data: RawData | Uint8Array) => void) {
+    if (conn.ws.readyState !== conn.ws.OPEN) return;
     const bytes = new Uint8Array(data as ArrayBuffer);
-    const update = updateInMessage(bytes);
-    if (update) {
-      if (conn.role === 'viewer') return; // read-only: never applied, never stored
-      if (update.length > 2) await this.store.append(conn.designId, update);
+    let message: ReturnType<typeof readMessage>;
+    try {
+      message = readMessage(bytes);
+    } catch {
+      return conn.ws.close(CLOSE_CODES.invalidUpdate, 'a message that does not decode');
     }
+    if (message.kind === 'awareness') return this.receivePresence(conn, doc, message.update, relay);
+    if (message.kind === 'other') return;
+    if (message.kind === 'update') {
+      if (!conn.updates.take()) return conn.ws.close(CLOSE_CODES.rateLimited, 'too many updates: slow down');
+      if (conn.role === 'viewer') return; // read-only: never applied, never stored
+      await doc.whenInitialized; // the check and the relay see the stored state first
+      if (message.update.length > 2) {
+        const check = this.checks.get(doc);
+        const refusal = check ? check.refusal(message.update) : 'the design is not loaded';
+        if (refusal) {
+          this.log(new Error(`collab: refused an update to design ${conn.designId} from user ${conn.userId}: ${refusal}`));
+          return conn.ws.close(CLOSE_CODES.invalidUpdate, 'an update that does not apply');
+        }
+        await this.store.append(conn.designId, message.update).catch((error) => {
+          check?.reset(); // the shadow holds an update the document will not get
+          throw error;
+        });
+      }
+    } else await doc.whenInitialized; // sync step 1: answered from the loaded document
     relay?.(data);
+  }
+
+  /** Presence: rate-limited and size-limited (excess dropped), stamped with the account, own client ids only. */
+  private receivePresence(conn: Connection, doc: WSSharedDoc, update: Uint8Array, relay?: (data: Uint8Array) => void) {
+    if (update.length > this.limits.maxAwarenessBytes || !conn.awareness.take()) return;
+    const owners = [...this.connections].filter((c) => c !== conn && c.designId === conn.designId);
+    const owns = (clientId: number) => {
+      if (conn.clientIds.has(clientId)) return true;
+      if (conn.clientIds.size >= CLIENT_IDS_PER_SOCKET || owners.some((c) => c.clientIds.has(clientId)) || clientId === doc.clientID) return false;
+      conn.clientIds.add(clientId);
+      return true;
+    };
+    const stamped = stampPresence(update, conn, owns);
+    if (stamped) relay?.(awarenessMessage(stamped));
   }
 
   private async recheck(boardId: string, userId?: string) {
@@ -142,8 +255,8 @@ export class CollabGateway {
     }
   }
 
-  /** Closes every socket of a design (deleted) or of a user (suspended). */
-  closeWhere(match: (c: { designId: string; userId: string; boardId: string }) => boolean, code: number, reason: string) {
+  /** Closes every socket of a design (deleted), of a user (suspended, password reset) or of a session (signed out). */
+  closeWhere(match: (c: { designId: string; userId: string; boardId: string; sessionId: string }) => boolean, code: number, reason: string) {
     for (const conn of this.connections) if (match(conn)) conn.ws.close(code, reason);
   }
 

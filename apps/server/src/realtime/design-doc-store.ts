@@ -1,5 +1,5 @@
 import * as Y from 'yjs';
-import { asc, count, eq, and, lte, sql } from 'drizzle-orm';
+import { asc, count, eq, and, inArray, sql } from 'drizzle-orm';
 import { designUpdates } from '../../../../db/schema';
 import type { Db } from '../database/database';
 
@@ -9,20 +9,24 @@ import type { Db } from '../database/database';
  * and are idempotent, so an update stored twice or applied twice does no harm.
  */
 export class DesignDocStore {
-  constructor(private readonly db: Db) {}
+  constructor(
+    private readonly db: Db,
+    private readonly report: (message: string) => void = (message) => console.error(`[barwright] ${message}`),
+  ) {}
 
   async append(designId: string, update: Uint8Array): Promise<void> {
     await this.db.insert(designUpdates).values({ designId, update });
   }
 
-  /** All stored updates merged into one (an empty update when none). */
+  /** All stored updates merged into one (an empty update when none); rows that do not decode are skipped and reported. */
   async loadUpdate(designId: string): Promise<Uint8Array> {
     const rows = await this.db
-      .select({ update: designUpdates.update })
+      .select({ seq: designUpdates.seq, update: designUpdates.update })
       .from(designUpdates)
       .where(eq(designUpdates.designId, designId))
       .orderBy(asc(designUpdates.seq));
-    return rows.length === 1 ? rows[0].update : Y.mergeUpdates(rows.map((r) => r.update));
+    const good = this.decodable(designId, rows);
+    return good.length === 1 ? good[0].update : Y.mergeUpdates(good.map((r) => r.update));
   }
 
   /** A fresh Y.Doc holding the stored state (for reads outside a live session). */
@@ -30,6 +34,26 @@ export class DesignDocStore {
     const doc = new Y.Doc();
     Y.applyUpdate(doc, await this.loadUpdate(designId));
     return doc;
+  }
+
+  /**
+   * The rows that apply on their own. A row that throws (stored before updates were checked, or
+   * damaged on disk) would fail the whole design, so it is left out and reported; it stays in the table.
+   */
+  private decodable<R extends { seq: number; update: Uint8Array }>(designId: string, rows: R[]): R[] {
+    if (rows.length === 1 && this.applies(rows[0].update)) return rows;
+    const good = rows.filter((r) => this.applies(r.update));
+    for (const r of rows) if (!good.includes(r)) this.report(`design ${designId}: stored update ${r.seq} (${r.update.length} bytes) does not decode; skipped`);
+    return good;
+  }
+
+  private applies(update: Uint8Array): boolean {
+    try {
+      Y.applyUpdate(new Y.Doc(), update);
+      return true;
+    } catch {
+      return false;
+    }
   }
 
   async rowCount(designId: string): Promise<number> {
@@ -49,12 +73,12 @@ export class DesignDocStore {
         .where(eq(designUpdates.designId, designId))
         .orderBy(asc(designUpdates.seq));
       if (rows.length < 2) return { before: rows.length, after: rows.length };
-      const last = rows[rows.length - 1].seq;
-      const merged = Y.mergeUpdates(rows.map((r) => r.update));
-      const total = rows.reduce((s, r) => s + r.merged, 0);
-      await tx.delete(designUpdates).where(and(eq(designUpdates.designId, designId), lte(designUpdates.seq, last)));
+      const good = this.decodable(designId, rows); // a row that does not decode stays as it is, for inspection
+      const merged = Y.mergeUpdates(good.map((r) => r.update));
+      const total = good.reduce((s, r) => s + r.merged, 0);
+      await tx.delete(designUpdates).where(and(eq(designUpdates.designId, designId), inArray(designUpdates.seq, good.map((r) => r.seq))));
       await tx.insert(designUpdates).values({ designId, update: merged, merged: total });
-      return { before: rows.length, after: 1 };
+      return { before: rows.length, after: 1 + rows.length - good.length };
     });
   }
 
