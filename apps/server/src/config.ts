@@ -12,6 +12,11 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Barwright <no-reply@barwright.example>'),
   SESSION_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
   PUBLIC_URL: z.url().optional(),
+  // Comma-separated origins besides PUBLIC_URL's that may open the realtime sockets (e.g. https://club.example).
+  EXTRA_ORIGINS: z.string().default('').transform((v, ctx) => v.split(',').map((o) => o.trim()).filter(Boolean).map((o) => {
+    if (!URL.canParse(o)) ctx.addIssue({ code: 'custom', message: `${o} is not an origin (scheme://host[:port])` });
+    return o;
+  })),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   // Unset means on in development and test, off in production: the demo accounts share a published password.
   DEMO_DATA: bool.optional(),
@@ -27,6 +32,8 @@ export interface Config {
   mailFrom: string;
   sessionSecret?: string;
   publicUrl: string;
+  /** Origins besides PUBLIC_URL's allowed on the realtime sockets. */
+  extraOrigins: string[];
   nodeEnv: 'development' | 'production' | 'test';
   /** Seed the demo scenario (accounts with a published password). */
   demoData: boolean;
@@ -58,6 +65,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     mailFrom: e.MAIL_FROM,
     sessionSecret: e.SESSION_SECRET,
     publicUrl: (e.PUBLIC_URL ?? `http://localhost:${e.PORT}`).replace(/\/$/, ''),
+    extraOrigins: e.EXTRA_ORIGINS,
     nodeEnv: e.NODE_ENV,
     demoData: e.DEMO_DATA ?? e.NODE_ENV !== 'production',
     webDist: path.resolve(e.WEB_DIST ?? 'dist/web/browser'),
