@@ -52,8 +52,10 @@ export interface AppDeps {
   accessEvents?: BoardAccessEvents;
   /** Closes the open sockets of a design (it was deleted); the realtime gateway provides it. */
   closeDesignSockets?: (designId: string) => void;
-  /** Closes every open socket of a user (suspended); the realtime gateways provide it. */
+  /** Closes every open socket of a user (suspended, password reset); the realtime gateways provide it. */
   closeUserSockets?: (userId: string) => void;
+  /** Closes the open sockets opened with one session (signed out); the realtime gateways provide it. */
+  closeSessionSockets?: (sessionId: string) => void;
   /** The community: shared with the notification socket gateway; where photos are stored (DATA_DIR/uploads); lower limits for tests. */
   notificationEvents?: NotificationEvents;
   uploadsDir?: string;
@@ -126,7 +128,7 @@ export function createApp(deps: AppDeps): express.Express {
   api.get('/config', (_req, res) => {
     res.json({ localMail: Boolean(deps.localSmtp), demo: Boolean(deps.demo) } satisfies ClientConfig);
   });
-  api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies }));
+  api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, sessionStore, publicUrl: deps.publicUrl, log, passport, limits, secureCookies, closeUserSockets: deps.closeUserSockets, closeSessionSockets: deps.closeSessionSockets }));
   api.use('/admin', adminRouter(moderation.accounts)); // role changes and suspensions: one code path with the desk's, audited
   const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log, notifyInvited: community.notifier.invited.bind(community.notifier) };
   api.use('/boards', boardsRouter(boardDeps));

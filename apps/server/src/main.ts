@@ -4,6 +4,7 @@ import { createApp, type AppLocals } from './app';
 import { BoardAccessEvents } from './boards/board-access';
 import { CLOSE_CODES } from '@barwright/contracts';
 import { CollabGateway } from './realtime/collab-gateway';
+import { allowedOrigins } from './realtime/allowed-origins';
 import { configWarnings, loadConfig } from './config';
 import { DataDirBusyError } from './database/data-dir-lock';
 import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
@@ -34,14 +35,23 @@ async function main() {
   const accessEvents = new BoardAccessEvents();
   let gateway: CollabGateway | undefined;
   let notify: NotifyGateway | undefined;
+  let moderation: ModerationGateway | undefined;
+  // Browsers may open the realtime sockets from these origins only (a page on another port of this host may not).
+  const origins = allowedOrigins(config.publicUrl, config.extraOrigins);
   const notificationEvents = new NotificationEvents();
   const sessionSecret = sessionSecretFor(config);
   const app = createApp({
     accessEvents,
     closeDesignSockets: (designId) => gateway?.closeWhere((c) => c.designId === designId, CLOSE_CODES.forbidden, 'design deleted'),
     closeUserSockets: (userId) => {
-      gateway?.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended');
+      gateway?.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'signed out: account suspended or password reset');
       notify?.disconnectUser(userId);
+      moderation?.disconnectUser(userId);
+    },
+    closeSessionSockets: (sessionId) => {
+      gateway?.closeWhere((c) => c.sessionId === sessionId, CLOSE_CODES.unauthorized, 'signed out');
+      notify?.disconnectSession(sessionId);
+      moderation?.disconnectSession(sessionId);
     },
     db: database.db,
     databaseKind: database.kind,
@@ -55,12 +65,12 @@ async function main() {
     uploadsDir: path.join(config.dataDir, 'uploads'),
   });
   const server = http.createServer(app);
-  gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents });
+  gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins });
   gateway.attach(server);
-  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents });
+  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins });
   notify.attach(server);
   // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
-  const moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
+  moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
   const digests = setInterval(() => void sendDueDigests({ db: database.db, mailer, publicUrl: config.publicUrl, secret: sessionSecret }).catch(console.error), DIGEST_CHECK_MS);
   digests.unref();
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve));
@@ -81,7 +91,7 @@ async function main() {
     log(`${signal}: shutting down`);
     await gateway?.close();
     clearInterval(digests);
-    moderation.close();
+    moderation?.close();
     notify?.close();
     server.closeAllConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));

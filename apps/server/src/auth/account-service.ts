@@ -15,6 +15,8 @@ export interface AccountDeps {
   sessionStore: DatabaseSessionStore;
   publicUrl: string;
   log: (error: unknown) => void;
+  /** Closes every realtime socket of a user (on a password reset). */
+  closeUserSockets?: (userId: string) => void;
 }
 
 function refuseWeak(password: string, inputs: string[]): void {
@@ -74,4 +76,5 @@ export async function confirmPasswordReset(deps: AccountDeps, token: string, pas
     .set({ passwordHash: await hashPassword(password), emailVerifiedAt: user?.emailVerifiedAt ?? new Date() })
     .where(eq(users.id, userId));
   await deps.sessionStore.destroyUserSessions(userId);
+  deps.closeUserSockets?.(userId);
 }

@@ -14,6 +14,8 @@ export interface AuthRouterDeps extends accounts.AccountDeps {
   passport: PassportInstance;
   limits: ReturnType<typeof createRateLimits>;
   secureCookies: boolean;
+  /** Closes the realtime sockets opened with a session (on sign-out). */
+  closeSessionSockets?: (sessionId: string) => void;
 }
 
 /** The signed-in user, or 401. */
@@ -46,7 +48,8 @@ function signIn(deps: AuthRouterDeps): RequestHandler {
   };
 }
 
-function signOut(req: Request, res: Response, next: (e?: unknown) => void) {
+const signOut = (deps: AuthRouterDeps) => (req: Request, res: Response, next: (e?: unknown) => void) => {
+  deps.closeSessionSockets?.(req.sessionID); // the sockets opened with this session end with it
   req.logOut((error) => {
     if (error) return next(error);
     req.session.destroy((destroyError) => {
@@ -55,7 +58,7 @@ function signOut(req: Request, res: Response, next: (e?: unknown) => void) {
       res.status(204).end();
     });
   });
-}
+};
 
 export function authRouter(deps: AuthRouterDeps): Router {
   const router = Router();
@@ -72,7 +75,7 @@ export function authRouter(deps: AuthRouterDeps): Router {
     res.status(202).json({ ok: true });
   });
   router.post('/sign-in', deps.limits.signInByAddress, deps.limits.signInByAccount, signIn(deps));
-  router.post('/sign-out', signOut);
+  router.post('/sign-out', signOut(deps));
   router.get('/me', (req, res) => {
     res.json(toMe(requireUser(req)));
   });

@@ -3,7 +3,8 @@ import type { Namespace, Server } from 'socket.io';
 import { MODERATION_NAMESPACE, MODERATION_REFUSALS, userRoom, type ModerationClientEvents, type ModerationServerEvents } from '@barwright/contracts';
 import type { Db } from '../database/database';
 import { findUserById } from '../auth/users';
-import { sessionUser } from '../notifications/notify-gateway';
+import { overSocketCap, sessionIdOf, sessionUser, TOO_MANY_SOCKETS } from '../notifications/notify-gateway';
+import { DEFAULT_REALTIME_LIMITS, type RealtimeLimits } from '../realtime/realtime-limits';
 import type { ModerationEvents } from './moderation-events';
 import { isModerator } from './moderation-rules';
 import { openReportCount } from './reports-service';
@@ -14,6 +15,7 @@ export interface ModerationGatewayDeps {
   db: Db;
   sessionParser: RequestHandler;
   events: ModerationEvents;
+  limits?: Partial<RealtimeLimits>;
   log?: (error: unknown) => void;
 }
 
@@ -35,7 +37,12 @@ export class ModerationGateway {
       void this.admit(socket.request as never)
         .then((refusal) => {
           if (typeof refusal === 'string') return next(new Error(refusal));
+          const sessionId = sessionIdOf(socket.request);
+          if (overSocketCap(this.namespace.sockets.values(), { userId: refusal.userId, sessionId }, { ...DEFAULT_REALTIME_LIMITS, ...deps.limits })) {
+            return next(new Error(TOO_MANY_SOCKETS));
+          }
           socket.data.userId = refusal.userId;
+          socket.data.sessionId = sessionId;
           next();
         })
         .catch((error) => {
@@ -44,6 +51,7 @@ export class ModerationGateway {
         });
     });
     this.namespace.on('connection', (socket) => {
+      socket.onAny(() => socket.disconnect(true)); // clients send nothing on the desk's socket either
       void socket.join(userRoom(socket.data.userId as string));
       void openReportCount(deps.db).then((n) => socket.emit('moderation:queue', n), this.log);
     });
@@ -62,6 +70,11 @@ export class ModerationGateway {
 
   disconnectUser(userId: string): void {
     this.namespace.in(userRoom(userId)).disconnectSockets(true);
+  }
+
+  /** Ends the desk sockets opened with one session (signed out). */
+  disconnectSession(sessionId: string): void {
+    for (const socket of this.namespace.sockets.values()) if (socket.data.sessionId === sessionId) socket.disconnect(true);
   }
 
   close(): void {

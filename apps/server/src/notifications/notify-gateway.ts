@@ -6,11 +6,16 @@ import type { Db } from '../database/database';
 import { findUserById } from '../auth/users';
 import type { NotificationEvents } from './notification-events';
 import { unreadCount } from './notifier';
+import { originAllowed } from '../realtime/allowed-origins';
+import { DEFAULT_REALTIME_LIMITS, type RealtimeLimits } from '../realtime/realtime-limits';
 
 export interface NotifyGatewayDeps {
   db: Db;
   sessionParser: RequestHandler;
   events: NotificationEvents;
+  /** Origins a browser may connect from (allowedOrigins()); others are refused. Omitted: no Origin check. */
+  origins?: ReadonlySet<string>;
+  limits?: Partial<RealtimeLimits>;
   log?: (error: unknown) => void;
 }
 
@@ -22,6 +27,30 @@ export function sessionUser(parser: RequestHandler, req: IncomingMessage): Promi
   });
 }
 
+/** The session id of a handshake request (after sessionUser has run the parser on it). */
+export const sessionIdOf = (req: IncomingMessage): string | undefined => (req as unknown as { sessionID?: string }).sessionID;
+
+/**
+ * Why a namespace refuses one more socket of this session or user, or undefined. Sockets carry
+ * `data.userId` and `data.sessionId`.
+ */
+export function overSocketCap(
+  sockets: Iterable<{ data: { userId?: string; sessionId?: string } }>,
+  who: { userId: string; sessionId?: string },
+  limits: Pick<RealtimeLimits, 'notifySocketsPerSession' | 'notifySocketsPerUser'>,
+): boolean {
+  let bySession = 0;
+  let byUser = 0;
+  for (const s of sockets) {
+    if (s.data.userId === who.userId) byUser++;
+    if (who.sessionId && s.data.sessionId === who.sessionId) bySession++;
+  }
+  return bySession >= limits.notifySocketsPerSession || byUser >= limits.notifySocketsPerUser;
+}
+
+/** The refusal a client reads when its session has too many sockets open. */
+export const TOO_MANY_SOCKETS = 'too many sockets';
+
 /**
  * Live notifications over socket.io at /socket.io. The session is checked at the handshake (no
  * signed-in, unsuspended session: refused); each socket joins its user's room only, and the
@@ -29,15 +58,27 @@ export function sessionUser(parser: RequestHandler, req: IncomingMessage): Promi
  */
 export class NotifyGateway {
   readonly io: Server<NotifyClientEvents, NotifyServerEvents>;
+  readonly limits: RealtimeLimits;
 
   constructor(private readonly deps: NotifyGatewayDeps) {
     // destroyUpgrade off: other WebSocket upgrades on this server (the Yjs gateway at /collab/) are not ours to end.
-    this.io = new Server({ path: NOTIFY_SOCKET_PATH, serveClient: false, destroyUpgrade: false });
+    this.limits = { ...DEFAULT_REALTIME_LIMITS, ...deps.limits };
+    const origins = deps.origins;
+    this.io = new Server({
+      path: NOTIFY_SOCKET_PATH,
+      serveClient: false,
+      destroyUpgrade: false,
+      maxHttpBufferSize: this.limits.notifyMaxMessageBytes,
+      allowRequest: (req, callback) => callback(null, !origins || originAllowed(req, origins)),
+    });
     this.io.use((socket, next) => {
       void this.authenticate(socket.request)
         .then((userId) => {
           if (!userId) return next(new Error(NOTIFY_REFUSALS.unauthorized));
+          const sessionId = sessionIdOf(socket.request);
+          if (overSocketCap(this.io.sockets.sockets.values(), { userId, sessionId }, this.limits)) return next(new Error(TOO_MANY_SOCKETS));
           socket.data.userId = userId;
+          socket.data.sessionId = sessionId;
           next();
         })
         .catch((error) => {
@@ -47,6 +88,8 @@ export class NotifyGateway {
     });
     this.io.on('connection', (socket) => {
       const userId = socket.data.userId as string;
+      // Clients send nothing here (reading is done through REST): one that does is dropped.
+      socket.onAny(() => socket.disconnect(true));
       void socket.join(userRoom(userId));
       void unreadCount(deps.db, userId).then((n) => socket.emit('notification:unread', n), this.log);
     });
@@ -66,9 +109,14 @@ export class NotifyGateway {
     this.io.attach(server);
   }
 
-  /** Ends the sockets of a user (suspended, signed out everywhere). */
+  /** Ends the sockets of a user (suspended, password reset). */
   disconnectUser(userId: string): void {
     this.io.in(userRoom(userId)).disconnectSockets(true);
+  }
+
+  /** Ends the sockets opened with one session (signed out). */
+  disconnectSession(sessionId: string): void {
+    for (const socket of this.io.sockets.sockets.values()) if (socket.data.sessionId === sessionId) socket.disconnect(true);
   }
 
   /** Ends every socket; the HTTP server itself is main.ts's to close (io.close() would close it too). */
