@@ -66,7 +66,10 @@ export function barGcode(job: GcodeJob): string {
       `G0 X${n(startX)} Y${n(first[1] + offset)}`,
       `G1 Z${n(cutZ)} F${n(job.travelSpeed / 2)}`,
       `G1 X${n(first[0])} Y${n(first[1] + offset)} F${n(job.travelSpeed)}`,
-      ...job.cutterPath.slice(1).map(([x, y]) => `X${n(x)} Y${n(y + offset)}`),
+    );
+    // A loop, not a spread: a spread passes every point as an argument and overflows the stack on a long path.
+    for (let i = 1; i < job.cutterPath.length; i++) lines.push(`X${n(job.cutterPath[i][0])} Y${n(job.cutterPath[i][1] + offset)}`);
+    lines.push(
       `X${n(endX)} Y${n(last[1] + offset)}`,
       `G0 Z${n(SAFE_HEIGHT_MM)}`,
     );

@@ -81,8 +81,11 @@ function drawTilePage(page: PDFPage, job: PdfJob, tile: Tile, tiles: readonly Ti
 
   const clipWidth = (tile.xTo - tile.xFrom) * k;
   page.pushOperators(pushGraphicsState(), rectangle(margin, 0, clipWidth, height), clip(), endPath());
-  page.pushOperators(pushGraphicsState(), setLineWidth(0.6), setStrokingGrayscaleColor(0), setFillingGrayscaleColor(0.88), ...path(drawing.outline.map(toPt), true), fillAndStroke(), popGraphicsState());
-  page.pushOperators(pushGraphicsState(), setLineWidth(0.4), setStrokingRgbColor(0.7, 0, 0.12), setDashPattern([2, 2], 0), ...path(drawing.cutterPath.map(toPt), false), stroke(), popGraphicsState());
+  // Each page gets only the stretch of the paths it shows (the clip trims the rest): a page per tile of the whole path made long bars slow.
+  const edge = onTile(drawing.edge, tile);
+  const outline: Point[] = [...edge, [edge[edge.length - 1][0], drawing.backY], [edge[0][0], drawing.backY]];
+  pushAll(page, [pushGraphicsState(), setLineWidth(0.6), setStrokingGrayscaleColor(0), setFillingGrayscaleColor(0.88)], path(outline.map(toPt), true), [fillAndStroke(), popGraphicsState()]);
+  pushAll(page, [pushGraphicsState(), setLineWidth(0.4), setStrokingRgbColor(0.7, 0, 0.12), setDashPattern([2, 2], 0)], path(onTile(drawing.cutterPath, tile).map(toPt), false), [stroke(), popGraphicsState()]);
   const blank = [toPt([tile.xFrom, drawing.blankEdgeY]), toPt([tile.xTo, drawing.blankEdgeY])];
   page.pushOperators(pushGraphicsState(), setLineWidth(0.3), setStrokingGrayscaleColor(0.4), ...path(blank, false), stroke(), popGraphicsState());
   page.pushOperators(popGraphicsState());
@@ -106,7 +109,7 @@ function drawTicks(page: PDFPage, job: PdfJob, tile: Tile, toPt: (p: Point) => P
     ops.push(moveTo(x, y), lineTo(x, y - (long ? 8 : 4)));
     if (long) text(`${fmt(i * stepMm, job.units)} ${job.units}`, x + 1.5, y - 16, 7);
   }
-  page.pushOperators(...ops, stroke(), popGraphicsState());
+  pushAll(page, ops, [stroke(), popGraphicsState()]);
 }
 
 /** Dashed lines where the neighbouring tiles start and end, for lining the sheets up. */
@@ -133,9 +136,26 @@ function drawCalibrationSquare(page: PDFPage, units: Units, margin: number, text
   text(`Calibration square: it must measure ${label} on paper.`, margin + side + 6, y + side / 2 - 3);
 }
 
+/** The points of a path (x ascending) on a tile, with one more each side so the lines run past its edges. */
+function onTile(points: readonly Point[], tile: Tile): Point[] {
+  let from = 0;
+  while (from < points.length - 1 && points[from + 1][0] < tile.xFrom) from++;
+  let to = points.length - 1;
+  while (to > from && points[to - 1][0] > tile.xTo) to--;
+  return points.slice(from, to + 1);
+}
+
+/** Operators per pushOperators call: pdf-lib spreads them into one push, which overflows the stack on a long path. */
+const OPERATOR_BATCH = 10_000;
+
+function pushAll(page: PDFPage, ...groups: readonly PDFOperator[][]): void {
+  for (const ops of groups) for (let i = 0; i < ops.length; i += OPERATOR_BATCH) page.pushOperators(...ops.slice(i, i + OPERATOR_BATCH));
+}
+
 function path(points: readonly Point[], closed: boolean): PDFOperator[] {
   const ops = points.map(([x, y], i) => (i === 0 ? moveTo(x, y) : lineTo(x, y)));
-  return closed ? [...ops, closePath()] : ops;
+  if (closed) ops.push(closePath());
+  return ops;
 }
 
 function fmt(mm: number, units: Units): string {

@@ -1,14 +1,26 @@
 import type { Point } from '../types';
 
 /**
+ * Points per stretch simplified on its own. A periodic path makes Ramer–Douglas–Peucker peel one
+ * crest per split (ties go to the first), which costs points × crests: 110 s for a 150 000-point
+ * bar of 3 600 crests. Stretches bound the cost by points × CHUNK and keep one extra point per stretch.
+ */
+export const SIMPLIFY_CHUNK_POINTS = 512;
+
+/**
  * Drops points of a polyline that lie within `tolerance` of the chord between kept points
- * (Ramer–Douglas–Peucker). Kept points are original points, ends always kept. Same units in and out.
+ * (Ramer–Douglas–Peucker, iterative, over stretches of SIMPLIFY_CHUNK_POINTS). Kept points are
+ * original points, ends always kept. Same units in and out.
  */
 export function simplifyPolyline(points: readonly Point[], tolerance: number): Point[] {
   if (points.length <= 2 || tolerance <= 0) return points.slice();
   const keep = new Uint8Array(points.length);
-  keep[0] = keep[points.length - 1] = 1;
-  const stack: Array<[number, number]> = [[0, points.length - 1]];
+  keep[points.length - 1] = 1;
+  const stack: Array<[number, number]> = [];
+  for (let from = 0; from < points.length - 1; from += SIMPLIFY_CHUNK_POINTS) {
+    keep[from] = 1;
+    stack.push([from, Math.min(from + SIMPLIFY_CHUNK_POINTS, points.length - 1)]);
+  }
   while (stack.length > 0) {
     const [from, to] = stack.pop()!;
     let worst = -1;
