@@ -1,4 +1,4 @@
-import { and, count, desc, eq, gt, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, gt, sql, type SQL } from 'drizzle-orm';
 import type { Photo } from '@barwright/contracts';
 import { photos, users, type PhotoRow, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
@@ -33,7 +33,13 @@ export const toPhoto = (p: PhotoRow, uploaderName: string): Photo => ({
   ...hiddenFields(p),
 });
 
-/** 429 once the member has uploaded the day's allowance (a rolling 24 hours). */
+/** First key of the advisory lock that serialises one member's uploads (the second is the member's). */
+const PHOTO_ALLOWANCE_LOCK = 7301;
+
+/**
+ * 429 once the member has uploaded the day's allowance (a rolling 24 hours). Checked before the body is
+ * read (cheap refusal) and again in the insert's transaction under the member's lock (the guarantee).
+ */
 export async function checkDailyAllowance(db: Db, userId: string, perDay: number): Promise<void> {
   const since = new Date(Date.now() - 86_400_000);
   const [{ n }] = await db.select({ n: count() }).from(photos).where(and(eq(photos.uploaderId, userId), gt(photos.createdAt, since)));
@@ -49,22 +55,28 @@ export async function storePhoto(
   const image = await processPhoto(input.upload, limits.maxPixels);
   const names = await files.save(image.extension, image.full, image.thumb);
   try {
-    const [row] = await db
-      .insert(photos)
-      .values({
-        ...input.target,
-        uploaderId: input.uploader.id,
-        kind: input.fields.kind,
-        caption: input.fields.caption,
-        material: input.fields.material,
-        takenOn: input.fields.date,
-        mime: image.mime,
-        width: image.width,
-        height: image.height,
-        bytes: image.full.length,
-        ...names,
-      })
-      .returning();
+    const row = await db.transaction(async (tx) => {
+      // The uploader's uploads queue here from count to insert, so concurrent ones cannot all pass the count.
+      await tx.execute(sql`select pg_advisory_xact_lock(${PHOTO_ALLOWANCE_LOCK}, hashtext(${input.uploader.id}))`);
+      await checkDailyAllowance(tx, input.uploader.id, limits.perDay);
+      const [inserted] = await tx
+        .insert(photos)
+        .values({
+          ...input.target,
+          uploaderId: input.uploader.id,
+          kind: input.fields.kind,
+          caption: input.fields.caption,
+          material: input.fields.material,
+          takenOn: input.fields.date,
+          mime: image.mime,
+          width: image.width,
+          height: image.height,
+          bytes: image.full.length,
+          ...names,
+        })
+        .returning();
+      return inserted;
+    });
     return toPhoto(row, input.uploader.displayName);
   } catch (error) {
     await files.remove(names.fileName, names.thumbName);
