@@ -45,7 +45,13 @@ export const boardSummarySchema = z.object({
 });
 export type BoardSummary = z.infer<typeof boardSummarySchema>;
 
-export const boardMemberSchema = z.object({ userId: z.string(), displayName: z.string(), email: z.string(), role: boardRoleSchema });
+export const boardMemberSchema = z.object({
+  userId: z.string(),
+  displayName: z.string(),
+  /** Sent to the board's owners only: editors and viewers see names, not addresses. */
+  email: z.string().optional(),
+  role: boardRoleSchema,
+});
 export type BoardMember = z.infer<typeof boardMemberSchema>;
 
 export const boardInvitationSchema = z.object({ id: z.string(), email: z.string(), role: inviteRoleSchema, expiresAt: z.string(), invitedBy: z.string() });

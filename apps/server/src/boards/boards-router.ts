@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { and, eq } from 'drizzle-orm';
 import { acceptInvitationBody, createBoardBody, createDesignBody, inviteBody, memberRoleBody, updateBoardBody } from '@barwright/contracts';
-import { boardInvitations, boardMembers, boards } from '../../../../db/schema';
+import { boardMembers, boards } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
 import { HttpError, notFound } from '../http/http-error';
@@ -66,11 +66,7 @@ export function boardsRouter(deps: BoardsRouterDeps): Router {
   });
   router.delete('/:id/invitations/:invitationId', async (req, res) => {
     await requireBoardRole(db, req.params.id, requireUser(req).id, 'owner');
-    const invitationId = requireUuid(req.params.invitationId, 'invitation');
-    await db
-      .update(boardInvitations)
-      .set({ revokedAt: new Date() })
-      .where(and(eq(boardInvitations.id, invitationId), eq(boardInvitations.boardId, req.params.id)));
+    await service.revokeInvitation(db, req.params.id, requireUuid(req.params.invitationId, 'invitation'));
     res.status(204).end();
   });
 

@@ -56,12 +56,14 @@ export async function boardDetail(db: Db, boardId: string, role: BoardRole): Pro
     .innerJoin(users, eq(users.id, boards.ownerId))
     .where(eq(boards.id, boardId));
   if (!row) throw notFound('board');
-  const members: BoardMember[] = await db
+  const rows = await db
     .select({ userId: users.id, displayName: users.displayName, email: users.email, role: boardMembers.role })
     .from(boardMembers)
     .innerJoin(users, eq(users.id, boardMembers.userId))
     .where(eq(boardMembers.boardId, boardId))
     .orderBy(users.displayName);
+  // Addresses go to the owner, who invites and removes by them; other members see names only.
+  const members: BoardMember[] = rows.map(({ email, ...member }) => (role === 'owner' ? { ...member, email } : member));
   const invitations: BoardInvitation[] =
     role === 'owner'
       ? (
@@ -110,4 +112,14 @@ export async function acceptInvitation(db: Db, user: UserRow, token: string): Pr
     await tx.insert(boardMembers).values({ boardId: inv.boardId, userId: user.id, role: inv.role }).onConflictDoNothing();
     return inv.boardId;
   });
+}
+
+/** Withdraws an open invitation of this board; 404 when the board has no invitation with that id. */
+export async function revokeInvitation(db: Db, boardId: string, invitationId: string): Promise<void> {
+  const revoked = await db
+    .update(boardInvitations)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(boardInvitations.id, invitationId), eq(boardInvitations.boardId, boardId)))
+    .returning({ id: boardInvitations.id });
+  if (revoked.length === 0) throw notFound('invitation');
 }

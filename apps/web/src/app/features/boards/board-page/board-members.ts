@@ -86,7 +86,7 @@ export class BoardMembers {
   protected async remove(member: BoardMember): Promise<void> {
     const confirmed = await confirmWith(this.dialog, {
       title: `Remove ${member.displayName}?`,
-      message: `${member.email} loses access to this board and its designs at once, also in an editor they have open.`,
+      message: `${member.email ?? member.displayName} loses access to this board and its designs at once, also in an editor they have open.`,
       confirmLabel: 'Remove member',
       danger: true,
     });
