@@ -63,7 +63,8 @@ export async function requestPasswordReset(deps: AccountDeps, email: string) {
   await sendQuietly(deps, user.email, passwordResetMail(user.displayName, `${deps.publicUrl}/account/reset?token=${token}`));
 }
 
-export async function confirmPasswordReset(deps: AccountDeps, token: string, password: string) {
+/** Sets the new password; returns the account's e-mail (its sign-in lock is lifted by the caller). */
+export async function confirmPasswordReset(deps: AccountDeps, token: string, password: string): Promise<string | undefined> {
   // Check the password before using up the token, so a weak choice can be corrected with the same link.
   refuseWeak(password, ['barwright']);
   // Uses up this user's other reset links too: an older mail must not set the password again.
@@ -77,4 +78,5 @@ export async function confirmPasswordReset(deps: AccountDeps, token: string, pas
     .where(eq(users.id, userId));
   await deps.sessionStore.destroyUserSessions(userId);
   deps.closeUserSockets?.(userId);
+  return user?.email;
 }

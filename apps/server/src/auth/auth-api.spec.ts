@@ -244,7 +244,7 @@ describe('sign-in rate limits', () => {
     expect(tries).toEqual([401, 401, 401, 429]);
     const locked = await c.post('/api/auth/sign-in', { email: 'kit@example.test', password: TEST_PASSWORD });
     expect(locked.status).toBe(429);
-    expect(locked.body.error.code).toBe('rate_limited');
+    expect(locked.body.error.code).toBe('locked');
     const others = [];
     for (let i = 0; i < 3; i++) others.push((await c.post('/api/auth/sign-in', { email: `other${i}@example.test`, password: 'x' })).status);
     expect(others.at(-1)).toBe(429);

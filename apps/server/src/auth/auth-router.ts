@@ -5,7 +5,7 @@ import { users, type UserRow } from '../../../../db/schema';
 import { HttpError, unauthenticated } from '../http/http-error';
 import { issueCsrfToken } from '../http/csrf';
 import { parseBody } from '../http/validate';
-import type { createRateLimits } from '../http/rate-limits';
+import { signInAccountKey, type createRateLimits } from '../http/rate-limits';
 import * as accounts from './account-service';
 import type { PassportInstance } from './passport-setup';
 import { toMe } from './users';
@@ -94,7 +94,9 @@ export function authRouter(deps: AuthRouterDeps): Router {
   });
   router.post('/password-reset/confirm', async (req, res) => {
     const body = parseBody(resetConfirmBody, req.body);
-    await accounts.confirmPasswordReset(deps, body.token, body.password);
+    const email = await accounts.confirmPasswordReset(deps, body.token, body.password);
+    // Whoever chose the new password from the mailbox ends the lock that failed guesses put on the account.
+    if (email) await deps.limits.signInByAccount.resetKey(signInAccountKey(email));
     res.json({ ok: true });
   });
   return router;

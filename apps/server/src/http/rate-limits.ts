@@ -1,4 +1,4 @@
-import { rateLimit, type Options } from 'express-rate-limit';
+import { rateLimit, type AugmentedRequest, type Options } from 'express-rate-limit';
 import type { ApiErrorBody } from '@barwright/contracts';
 
 export interface RateLimitSettings {
@@ -24,6 +24,25 @@ const tooMany: Options['handler'] = (_req, res, _next, options) => {
   res.status(429).json(body);
 };
 
+/** The per-account counter's key: the e-mail as typed at sign-in, trimmed and lower-cased. */
+export const signInAccountKey = (email: unknown) => `account:${String(email ?? '').trim().toLowerCase()}`;
+
+/** Where a locked-out member chooses a new password (the web app's page). */
+export const FORGOT_PASSWORD_PATH = '/account/forgot-password';
+
+/**
+ * The per-account lock refuses the right password too until its window ends (so a guesser learns
+ * nothing from a late hit); the answer says so, for how long, and where to choose a new password.
+ */
+const accountLocked: Options['handler'] = (req, res, _next, options) => {
+  const resetTime = (req as AugmentedRequest)[options.requestPropertyName]?.resetTime;
+  const minutes = Math.max(1, Math.ceil(((resetTime?.getTime() ?? Date.now() + options.windowMs) - Date.now()) / 60_000));
+  const wait = minutes === 1 ? '1 minute' : `${minutes} minutes`;
+  const message = `After ${options.limit} failed sign-ins this account is locked for ${wait}, even with the right password. Wait, or choose a new password at ${FORGOT_PASSWORD_PATH}.`;
+  const body: ApiErrorBody = { error: { code: 'locked', message } };
+  res.status(429).json(body);
+};
+
 export function createRateLimits(s: RateLimitSettings) {
   const base = { windowMs: s.windowMs, standardHeaders: 'draft-8' as const, legacyHeaders: false, handler: tooMany };
   return {
@@ -32,7 +51,8 @@ export function createRateLimits(s: RateLimitSettings) {
       ...base,
       limit: s.signInPerAccount,
       skipSuccessfulRequests: true,
-      keyGenerator: (req) => `account:${String(req.body?.email ?? '').trim().toLowerCase()}`,
+      keyGenerator: (req) => signInAccountKey(req.body?.email),
+      handler: accountLocked,
     }),
     mailByAddress: rateLimit({ ...base, limit: s.mailPerAddress }),
   };

@@ -6,6 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { emailSchema } from '@barwright/contracts';
 import { AuthStore } from '../../../core/auth/auth-store';
+import { ApiError } from '../../../core/http/api-error';
 import { safeReturnUrl } from '../../../core/auth/return-url';
 import { Notifier } from '../../../core/error-handling/notifier';
 import { contractValidator } from '../../../shared/forms/contract-validator';
@@ -17,6 +18,8 @@ const SIGN_IN_PROBLEMS = {
   invalid_credentials: 'That e-mail and password do not match an account. Check both, or reset the password.',
   suspended: 'This account is suspended. Ask an admin of your club to restore it.',
   rate_limited: 'Too many attempts. Wait a few minutes, then try again.',
+  // The server locks an account for 15 minutes after 8 failed sign-ins (rate-limits.ts), right password or not.
+  locked: 'After too many failed sign-ins this account is locked for up to 15 minutes, even with the right password. Wait, or choose a new password now.',
 };
 
 @Component({
@@ -39,12 +42,15 @@ export class SignInPage {
   });
   protected readonly busy = signal(false);
   protected readonly problem = signal<string | null>(null);
+  /** The account is locked: the page offers the password reset beside the message. */
+  protected readonly locked = signal(false);
   protected readonly passwordVisible = signal(false);
   protected readonly fieldMessage = fieldMessage;
   private readonly focusInvalid = injectInvalidFocus();
 
   protected async signIn(): Promise<void> {
     this.problem.set(null);
+    this.locked.set(false);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       this.focusInvalid();
@@ -57,6 +63,7 @@ export class SignInPage {
       void this.notifier.tell(`Signed in as ${me.displayName}.`, undefined, 4000);
     } catch (error) {
       this.problem.set(formProblem(error, this.form, SIGN_IN_PROBLEMS));
+      this.locked.set(error instanceof ApiError && error.code === 'locked');
       this.focusInvalid();
     } finally {
       this.busy.set(false);
