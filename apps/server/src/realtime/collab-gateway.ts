@@ -171,6 +171,9 @@ export class CollabGateway {
   private connect(ws: WebSocket, req: IncomingMessage, conn: Connection) {
     this.connections.add(conn);
     ws.on('close', () => this.connections.delete(conn));
+    // ws reports a frame over maxPayload (and other protocol errors) as an 'error' event, then closes
+    // the socket itself (1009, 1002); unheard, the event would end the process.
+    ws.on('error', (error) => this.log(new Error(`collab: socket error: ${error.message}`)));
     this.dropWhenSlow(ws);
     // y-websocket registers its own 'message' listener; ours runs first, stores the update, then hands it on in order.
     const original = ws.on.bind(ws);
