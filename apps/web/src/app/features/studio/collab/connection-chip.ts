@@ -9,6 +9,7 @@ const ICONS: Readonly<Record<ConnectionStatus, string>> = {
   offline: 'cloud_off',
   'signed-out': 'lock',
   'no-access': 'block',
+  refused: 'sync_problem',
 };
 
 /** The link to the server, always in sight: connecting, live or offline (edits merge when it returns). */
@@ -45,7 +46,8 @@ const ICONS: Readonly<Record<ConnectionStatus, string>> = {
       }
       &.offline,
       &.signed-out,
-      &.no-access {
+      &.no-access,
+      &.refused {
         background: var(--mat-sys-error-container);
         color: var(--mat-sys-on-error-container);
       }

@@ -56,4 +56,9 @@ describe('connectionStatus', () => {
     expect(connectionStatus({ ...facts, closedWith: 4401 }, CLOSE_CODES)).toBe('signed-out');
     expect(connectionStatus({ ...facts, closedWith: 4403 }, CLOSE_CODES)).toBe('no-access');
   });
+
+  it('says a tab was stopped when the server refused an edit or one socket too many', () => {
+    expect(connectionStatus({ ...facts, closedWith: CLOSE_CODES.invalidUpdate }, CLOSE_CODES)).toBe('refused');
+    expect(connectionStatus({ ...facts, closedWith: CLOSE_CODES.tooManySockets }, CLOSE_CODES)).toBe('refused');
+  });
 });
