@@ -1,3 +1,5 @@
+// First: zod's settings must be in place before any module builds a schema.
+import './zod-without-eval';
 import { bootstrapApplication } from '@angular/platform-browser';
 import { App } from './app/app';
 import { appConfig } from './app/app.config';
