@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { checkDesignComplexity } from './design-complexity';
 
 /**
  * The bar design file, format `barwright.design/1`.
@@ -7,6 +8,8 @@ import * as z from 'zod';
  * peak-to-valley. Angles are degrees. `phase` is a fraction of one lobe. Limits on lengths are
  * stated in millimetres and checked after conversion, so an inch file meets the same bounds.
  */
+
+export { COMPLEXITY_LIMITS, designComplexity, type DesignComplexity } from './design-complexity';
 
 export const DESIGN_FORMAT = 'barwright.design/1';
 export const MM_PER_INCH = 25.4;
@@ -180,6 +183,7 @@ function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
   if (d.bar.material === 'custom' && (d.plan.surfaceSpeed === undefined || d.plan.chipLoad === undefined)) {
     ctx.addIssue({ code: 'custom', path: ['plan', 'surfaceSpeed'], message: 'a custom material needs plan.surfaceSpeed and plan.chipLoad' });
   }
+  checkDesignComplexity(d, ctx);
 }
 
 /** A field error: a dotted path (`rosette.layers[0].lobes`) and a message naming the limit. */
