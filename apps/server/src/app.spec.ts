@@ -50,7 +50,7 @@ describe('the app shell', () => {
     expect((await c.get('/api/dev/mailbox')).status).toBe(200);
     expect((await c.get('/api/config')).body).toEqual({ localMail: true, demo: false });
     const mailer = createMailer({ smtpUrl: 'smtp://127.0.0.1:9', from: 'x@example.test' });
-    const real = createApp({ db: database.db, databaseKind: 'pglite', mailer, sessionSecret: 's'.repeat(32), publicUrl: 'https://turners.example', log: () => {} });
+    const real = createApp({ db: database.db, databaseKind: 'pglite', mailer, sessionSecret: 's'.repeat(32), publicUrl: 'https://turners.example', log: () => {}, compute: server.compute });
     const res = await request(real).get('/api/dev/mailbox');
     expect(res.status).toBe(404);
     const me = await request(real).get('/api/auth/me');
@@ -66,6 +66,7 @@ describe('the app shell', () => {
       sessionSecret: 's'.repeat(32),
       publicUrl: 'http://localhost:3000',
       log: () => {},
+      compute: server.compute,
     });
     const res = await request(boom).get('/api/admin/users');
     expect(res.text).not.toMatch(/secret internals|\.ts:/);

@@ -29,6 +29,8 @@ import { NotificationEvents } from './notifications/notification-events';
 import { createModeration } from './moderation/moderation';
 import type { ModerationEvents } from './moderation/moderation-events';
 import type { ModerationLimits } from './moderation/moderation-limits';
+// Engine work (exports, thumbnails) runs in a worker pool with a budget per job.
+import { retryAfterWhenBusy, type ComputePool } from './compute/compute-pool';
 
 /** Idle and absolute session lifetimes. */
 export const SESSION_IDLE_MS = 7 * 24 * 3600_000;
@@ -63,6 +65,8 @@ export interface AppDeps {
   /** Moderation: shared with the moderation socket gateway (queue counts, roles removed); lower limits for tests. */
   moderationEvents?: ModerationEvents;
   moderationLimits?: Partial<ModerationLimits>;
+  /** Runs engine work off the request thread; main.ts (or the test) creates and closes it. */
+  compute: ComputePool;
 }
 
 /** What main.ts needs besides the handler: the same session parser for the socket upgrade. */
@@ -96,7 +100,7 @@ export function createApp(deps: AppDeps): express.Express {
   const app = express();
   app.disable('x-powered-by');
   const community = createCommunity({
-    db: deps.db, store, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.sessionSecret,
+    db: deps.db, store, compute: deps.compute, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.sessionSecret,
     events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, log,
   });
   const moderation = createModeration({
@@ -133,7 +137,7 @@ export function createApp(deps: AppDeps): express.Express {
   const boardDeps = { db: deps.db, mailer: deps.mailer, publicUrl: deps.publicUrl, accessEvents, log, notifyInvited: community.notifier.invited.bind(community.notifier) };
   api.use('/boards', boardsRouter(boardDeps));
   api.use('/invitations', invitationsRouter(boardDeps));
-  api.use('/designs', designsRouter({ db: deps.db, store, closeDesignSockets: deps.closeDesignSockets ?? (() => {}) }));
+  api.use('/designs', designsRouter({ db: deps.db, store, compute: deps.compute, closeDesignSockets: deps.closeDesignSockets ?? (() => {}) }));
   api.use(community.router);
   api.use(moderation.router);
   if (deps.localSmtp) api.use('/dev', mailboxRouter(deps.localSmtp));
@@ -142,6 +146,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api', api);
   if (deps.webDist) app.use(webAppRouter(deps.webDist));
   app.use((_req, _res, next) => next(new HttpError(404, 'not_found', 'Not found')));
+  app.use(retryAfterWhenBusy);
   app.use(errorMiddleware(log));
   return app;
 }

@@ -1,6 +1,7 @@
 import http from 'node:http';
 import path from 'node:path';
 import { createApp, type AppLocals } from './app';
+import { ComputePool } from './compute/compute-pool';
 import { BoardAccessEvents } from './boards/board-access';
 import { CLOSE_CODES } from '@barwright/contracts';
 import { CollabGateway } from './realtime/collab-gateway';
@@ -40,6 +41,7 @@ async function main() {
   const origins = allowedOrigins(config.publicUrl, config.extraOrigins);
   const notificationEvents = new NotificationEvents();
   const sessionSecret = sessionSecretFor(config);
+  const compute = new ComputePool();
   const app = createApp({
     accessEvents,
     closeDesignSockets: (designId) => gateway?.closeWhere((c) => c.designId === designId, CLOSE_CODES.forbidden, 'design deleted'),
@@ -63,6 +65,7 @@ async function main() {
     demo: config.demoData,
     notificationEvents,
     uploadsDir: path.join(config.dataDir, 'uploads'),
+    compute,
   });
   const server = http.createServer(app);
   gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins });
@@ -96,6 +99,7 @@ async function main() {
     server.closeAllConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     mailer.close();
+    await compute.close();
     await localSmtp?.close();
     await database.close();
     release();

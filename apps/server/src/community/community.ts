@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { ComputePool } from '../compute/compute-pool';
 import type { Db } from '../database/database';
 import type { Mailer } from '../mail/mailer';
 import type { DesignDocStore } from '../realtime/design-doc-store';
@@ -18,6 +19,7 @@ import { DEFAULT_COMMUNITY_LIMITS, type CommunityLimits } from './community-limi
 export interface CommunityDeps {
   db: Db;
   store: DesignDocStore;
+  compute: ComputePool;
   mailer: Mailer;
   publicUrl: string;
   /** Signs unsubscribe links (the session secret). */
@@ -40,7 +42,7 @@ export function createCommunity(deps: CommunityDeps) {
   const notifier = new Notifier({ db, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.secret, events, log: deps.log });
   const router = Router();
   router.use(exploreRouter({ db }));
-  router.use(publishingRouter({ db, store: deps.store }));
+  router.use(publishingRouter({ db, store: deps.store, compute: deps.compute }));
   router.use(ratingsRouter({ db, notifier }));
   router.use(commentsRouter({ db, notifier, limits: { perMinute: limits.commentsPerMinute, editWindowMs: limits.commentEditWindowMs } }));
   router.use(remixRouter({ db, notifier }));

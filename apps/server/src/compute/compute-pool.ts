@@ -1,4 +1,5 @@
 import { MessageChannel } from 'node:worker_threads';
+import type { ErrorRequestHandler } from 'express';
 import { Piscina } from 'piscina';
 import type { Design } from '@barwright/contracts';
 import type { ExportedFile, ExportFormat } from '@barwright/engine';
@@ -12,6 +13,12 @@ export class ComputeBusyError extends HttpError {
     super(503, 'busy', `The server is busy computing other designs. Try again in ${retryAfterSeconds} s.`);
   }
 }
+
+/** Error handler, before the one that answers: a busy answer says when to come back. */
+export const retryAfterWhenBusy: ErrorRequestHandler = (error, _req, res, next) => {
+  if (error instanceof ComputeBusyError) res.set('Retry-After', String(error.retryAfterSeconds));
+  next(error);
+};
 
 // The worker is a .ts file under tsx (development, tests) and a .js file in a compiled build.
 const workerExtension = import.meta.url.endsWith('.ts') ? '.ts' : '.js';

@@ -3,8 +3,9 @@ import * as Y from 'yjs';
 import { and, desc, eq } from 'drizzle-orm';
 import { createVersionBody, updateDesignBody, type DesignMeta, type DesignVersion } from '@barwright/contracts';
 import { NOTES_TEXT, readDesign, writeDesign } from '@barwright/contracts/design-doc';
-import { exportDesign, EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
+import { EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
 import { boards, designs, designVersions, users } from '../../../../db/schema';
+import type { ComputePool } from '../compute/compute-pool';
 import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
 import { requireDesignRole } from '../boards/board-access';
@@ -18,6 +19,7 @@ import { createDesign, toDesignSummary, validatedDesign } from './designs-servic
 export interface DesignsRouterDeps {
   db: Db;
   store: DesignDocStore;
+  compute: ComputePool;
   /** Closes the open sockets of a deleted design. */
   closeDesignSockets: (designId: string) => void;
 }
@@ -68,7 +70,7 @@ export function designsRouter(deps: DesignsRouterDeps): Router {
     if (!EXPORT_FORMATS.includes(format)) {
       throw new HttpError(400, 'invalid_input', `format must be one of ${EXPORT_FORMATS.join(', ')}`, { format: `must be one of ${EXPORT_FORMATS.join(', ')}` });
     }
-    const file = await exportDesign(validatedDesign(await currentDoc(store, design.id)), format, { name: slug(design.title) });
+    const file = await deps.compute.exportDesign(validatedDesign(await currentDoc(store, design.id)), format, slug(design.title));
     res.type(file.mime).attachment(file.filename).send(typeof file.content === 'string' ? file.content : Buffer.from(file.content));
   });
 

@@ -3,7 +3,9 @@ import { Router, type Request, type Response } from 'express';
 import { publishBody, type DesignEntryLink, type PublishResult } from '@barwright/contracts';
 import { and, eq, isNull } from 'drizzle-orm';
 import { entries } from '../../../../db/schema';
-import { exportDesign, EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
+import { EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
+import type { ComputePool } from '../compute/compute-pool';
+import { ExportCache } from '../compute/export-cache';
 import { requireUser } from '../auth/auth-router';
 import { requireDesignRole } from '../boards/board-access';
 import { validatedDesign } from '../designs/designs-service';
@@ -20,6 +22,7 @@ import { deleteEntry, publishDesign } from './publishing-service';
 export interface PublishingRouterDeps {
   db: Db;
   store: DesignDocStore;
+  compute: ComputePool;
 }
 
 const slug = (title: string) => title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'bar';
@@ -39,15 +42,17 @@ function sendSvg(req: Request, res: Response, svg: string, maxAgeSeconds: number
 }
 
 export function publishingRouter(deps: PublishingRouterDeps): Router {
-  const { db, store } = deps;
+  const { db, store, compute } = deps;
   const router = Router();
+  // A revision never changes, so neither do its files.
+  const exports = new ExportCache(compute.limits.cacheBytes);
 
   router.post('/designs/:id/publish', async (req, res) => {
     const user = requireUser(req);
     const { design } = await requireDesignRole(db, req.params.id, user.id, 'editor');
     const body = parseBody(publishBody, req.body);
     const file = validatedDesign(await currentDoc(store, design.id));
-    res.status(201).json((await publishDesign(db, design, file, user, body)) satisfies PublishResult);
+    res.status(201).json((await publishDesign(db, design, file, user, body, (d) => compute.thumbnailSvg(d))) satisfies PublishResult);
   });
 
   // The live entry a board design was published as, so a republish can start from its words.
@@ -86,7 +91,7 @@ export function publishingRouter(deps: PublishingRouterDeps): Router {
       throw new HttpError(400, 'invalid_input', `format must be one of ${EXPORT_FORMATS.join(', ')}`, { format: `must be one of ${EXPORT_FORMATS.join(', ')}` });
     }
     const revision = await requireRevision(db, entry, req.query.revision === undefined ? undefined : String(req.query.revision));
-    const file = await exportDesign(revision.design, format, { name: slug(revision.title) });
+    const file = await exports.get(`${revision.id}:${format}`, () => compute.exportDesign(revision.design, format, slug(revision.title)));
     res.type(file.mime).attachment(file.filename).send(typeof file.content === 'string' ? file.content : Buffer.from(file.content));
   });
   router.delete('/entries/:id', async (req, res) => {

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import { createApp, type AppDeps } from '../app';
+import { ComputePool } from '../compute/compute-pool';
 import { startLocalSmtp, type LocalSmtp } from '../mail/local-smtp';
 import { createMailer } from '../mail/mailer';
 import { insertUser } from '../auth/users';
@@ -17,12 +18,15 @@ export const TEST_PASSWORD = 'quiet-walnut-crosscut-49';
 export interface TestServer {
   app: Express;
   smtp: LocalSmtp;
+  /** The engine's worker pool (overrides.compute, else one with the default budget). */
+  compute: ComputePool;
   close(): Promise<void>;
 }
 
 export async function startTestServer(database: TestDatabase, overrides: Partial<AppDeps> = {}): Promise<TestServer> {
   const smtp = await startLocalSmtp();
   const mailer = createMailer({ localPort: smtp.port, from: 'Barwright <no-reply@barwright.example>' });
+  const compute = overrides.compute ?? new ComputePool();
   const app = createApp({
     db: database.db,
     databaseKind: database.kind,
@@ -32,8 +36,9 @@ export async function startTestServer(database: TestDatabase, overrides: Partial
     publicUrl: 'http://localhost:3000',
     log: () => {},
     ...overrides,
+    compute,
   });
-  return { app, smtp, close: async () => { mailer.close(); await smtp.close(); } };
+  return { app, smtp, compute, close: async () => { mailer.close(); await smtp.close(); await compute.close(); } };
 }
 
 /** A browser-like client: keeps cookies, and echoes the XSRF-TOKEN cookie in X-XSRF-TOKEN as Angular does. */
