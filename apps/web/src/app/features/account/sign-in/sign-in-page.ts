@@ -19,7 +19,7 @@ const SIGN_IN_PROBLEMS = {
   suspended: 'This account is suspended. Ask an admin of your club to restore it.',
   rate_limited: 'Too many attempts. Wait a few minutes, then try again.',
   // The server locks an account for 15 minutes after 8 failed sign-ins (rate-limits.ts), right password or not.
-  locked: 'After too many failed sign-ins this account is locked for up to 15 minutes, even with the right password. Wait, or choose a new password now.',
+  locked: 'After too many failed sign-ins this account is locked for up to 15 minutes, even with the right password. Wait, or',
 };
 
 @Component({
