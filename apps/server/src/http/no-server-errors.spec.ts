@@ -32,6 +32,10 @@ const OPERATIONS: Operation[] = Object.entries(doc.paths as Json).flatMap(([p, o
     query: ((op.parameters ?? []) as Json[]).map((x) => (x.$ref ? resolve(x.$ref) : x)).filter((x) => x.in === 'query'),
   })),
 );
+type Body = { json: unknown } | { raw: string; headers: Record<string, string> } | undefined;
+type Who = 'anonymous' | 'member' | 'admin';
+interface FuzzRequest { op: Operation; who: Who; ids: string[]; query: string; body: Body }
+
 /** Every byte percent-encoded (encodeURIComponent throws on a lone surrogate, which the fuzzer makes). */
 const percentEncoded = (s: string) => [...Buffer.from(s, 'utf8')].map((b) => `%${b.toString(16).padStart(2, '0')}`).join('');
 
@@ -102,7 +106,6 @@ describe('no request answers 5xx (fuzzed over the OpenAPI document, on PGlite)',
         { arbitrary: fc.constantFrom(...RAW_QUERIES), weight: 2 },
       );
 
-    type Body = { json: unknown } | { raw: string; headers: Record<string, string> } | undefined;
     const bodyArb = (op: Operation): fc.Arbitrary<Body> =>
       fc.oneof(
         { arbitrary: fc.constant(undefined), weight: op.body ? 1 : 4 },
@@ -127,23 +130,23 @@ describe('no request answers 5xx (fuzzed over the OpenAPI document, on PGlite)',
         },
       );
 
-    const requestArb = fc.constantFrom(...OPERATIONS).chain((op) => {
+    const requestArb: fc.Arbitrary<FuzzRequest> = fc.constantFrom(...OPERATIONS).chain((op) => {
       const destructive = DESTRUCTIVE.test(`${op.method} ${op.path}`);
       const names = [...op.path.matchAll(/\{(\w+)\}/g)].map((m) => m[1]);
       return fc.record({
         op: fc.constant(op),
         // Signing out would end the run's sessions: only the anonymous client does it.
-        who: op.path === '/api/auth/sign-out' ? fc.constant('anonymous' as const) : fc.constantFrom<keyof typeof clients>('anonymous', 'member', 'admin'),
-        ids: fc.tuple(...names.map((n) => idArb(op.path, n, destructive))),
+        who: op.path === '/api/auth/sign-out' ? fc.constant<Who>('anonymous') : fc.constantFrom<Who>('anonymous', 'member', 'admin'),
+        ids: fc.tuple(...names.map((n) => idArb(op.path, n, destructive))) as fc.Arbitrary<string[]>,
         query: queryArb(op),
         body: bodyArb(op),
       });
     });
 
-    const send = async ({ op, who, ids, query, body }: fc.RecordValue<any>): Promise<request.Response> => {
+    const send = async ({ op, who, ids, query, body }: FuzzRequest): Promise<request.Response> => {
       let i = 0;
       const url = op.path.replace(/\{\w+\}/g, () => ids[i++]) + (query ? `?${query}` : '');
-      const client = clients[who as keyof typeof clients];
+      const client = clients[who];
       // Read each time: a sign-in the fuzzer sends may give the client a new token.
       let req = client.agent[op.method as 'get'](url).set('X-XSRF-TOKEN', await xsrfOf(client));
       if (body && 'raw' in body) req = req.set(body.headers).send(body.raw);
