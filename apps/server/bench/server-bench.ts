@@ -1,6 +1,7 @@
 /**
  * Foundation figures: cold start on a new and on an existing data directory, the production
- * initial transfer size (gzip, fonts aside), and sign-in throughput with argon2id.
+ * initial transfer size (gzip, fonts aside), sign-in throughput with argon2id, and /api/health
+ * latency with 20 heavy exports in flight (the compute pool's budget).
  * Run with `npm run bench -w apps/server` (after `npm run build` for the transfer size).
  */
 import fs from 'node:fs';
@@ -9,6 +10,7 @@ import path from 'node:path';
 import zlib from 'node:zlib';
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
+import { healthUnderHeavyExports } from './heavy-export-load';
 
 const root = fileURLToPath(new URL('../../../', import.meta.url));
 
@@ -69,11 +71,13 @@ await cold.stop();
 const warm = await startServer(dataDir, port);
 // The sign-in limiter allows 30 per address per window; stay under it so argon2id is what is measured.
 const perSecond = await signInThroughput(port, 25, 4);
+const heavy = await healthUnderHeavyExports(`http://127.0.0.1:${port}`, 'maren@example.test', 'marsh-lathe-demo-2026');
 await warm.stop();
 fs.rmSync(dataDir, { recursive: true, force: true });
 const transfer = initialTransfer();
 
 console.log(`cold start, new data directory:      ${cold.ms.toFixed(0)} ms (migrate + seed + listen, tsx included)`);
 console.log(`cold start, existing data directory: ${warm.ms.toFixed(0)} ms`);
+console.log(`/api/health with 20 heavy exports in flight: p95 ${heavy.p95.toFixed(1)} ms, max ${heavy.max.toFixed(1)} ms over ${heavy.probes} probes (after their arrival: p95 ${heavy.settledP95.toFixed(1)} ms; target < 100 ms); exports ${heavy.ok} × 200, ${heavy.busy} × 503${heavy.other ? `, ${heavy.other} other` : ''}`);
 console.log(`sign-in throughput (argon2id m=19 MiB t=2 p=1, ${os.cpus().length} cores): ${perSecond.toFixed(1)} per second`);
 console.log(transfer ? `initial transfer (gzip, fonts aside): ${transfer.gzipKb.toFixed(1)} kB in ${transfer.files} files (target < 250 kB)` : 'initial transfer: build the web app first (npm run build)');
