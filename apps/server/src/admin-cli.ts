@@ -34,7 +34,7 @@ async function main() {
   const weakness = passwordWeakness(password.data, [email.data]);
   if (weakness) fail(`--password ${weakness}`);
 
-  const config = loadConfig({ ...process.env, ...(values['data-dir'] ? { DATA_DIR: values['data-dir'] } : {}) });
+  const config = loadConfig({ ...process.env, ...(values['data-dir'] ? { DATA_DIR: values['data-dir'] } : {}) }, { serving: false });
   const { database, release } = await openConfiguredDatabase(config, console.log);
   try {
     const existing = await findUserByEmail(database.db, email.data);

@@ -24,6 +24,10 @@ describe('configuration', () => {
     expect(loadConfig(production).smtpUrl).toBe('smtp://mail.example:587');
   });
 
+  it('asks the command-line tools (admin, seed) for neither SESSION_SECRET nor SMTP_URL: they sign no cookie and send no mail', () => {
+    expect(loadConfig({ NODE_ENV: 'production' }, { serving: false }).nodeEnv).toBe('production');
+  });
+
   it('seeds the demo accounts in production only when DEMO_DATA=true is set, and then warns', () => {
     expect(loadConfig(production).demoData).toBe(false);
     expect(configWarnings(loadConfig(production))).toEqual([]);

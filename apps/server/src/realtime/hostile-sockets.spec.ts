@@ -203,7 +203,7 @@ describe('hostile collab sockets', () => {
 
     // The viewer re-announces the watcher's client id with a name of its choosing: left out.
     const forged = new Uint8Array([...encodingOf(watcher.doc.clientID, 99, { user: { id: 'o', name: 'Forged', colour: '#000' } })]);
-    (viewer.provider.ws as WebSocket).send(forged);
+    (viewer.provider.ws as unknown as WebSocket).send(forged);
     await wait(300);
     const own = viewer.provider.awareness.getStates().get(watcher.doc.clientID) as { user: { name: string } };
     expect(own.user.name).not.toBe('Forged');

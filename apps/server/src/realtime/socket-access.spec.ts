@@ -71,9 +71,9 @@ describe('who may keep a realtime socket', () => {
     const otherWs = (await collab(other.cookie, TEST_ORIGIN)) as WebSocket;
     const otherNotify = await io(other.cookie, TEST_ORIGIN);
     expect([notify.outcome, desk.outcome, otherNotify.outcome]).toEqual(['connected', 'connected', 'connected']);
-    const closed = [closeOf(ws), ioClosed(notify.socket), ioClosed(desk.socket)];
+    const closed = Promise.all([closeOf(ws), ioClosed(notify.socket), ioClosed(desk.socket)] as const);
     expect((await client.post('/api/auth/sign-out')).status).toBe(204);
-    const [collabClose, notifyWhy, deskWhy] = await Promise.all(closed);
+    const [collabClose, notifyWhy, deskWhy] = await closed;
     expect(collabClose.code).toBe(CLOSE_CODES.unauthorized);
     expect([notifyWhy, deskWhy]).toEqual(['io server disconnect', 'io server disconnect']);
     await new Promise((r) => setTimeout(r, 100));
