@@ -83,10 +83,15 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await tobias.page.mouse.up();
   await expect.poll(() => curatedOrder(tobias.page)).toEqual([basket, moire]);
   // …and by keyboard: down, then back up, with the move buttons.
-  await tobias.page.getByRole('button', { name: `Move ${BASKET} down` }).focus();
+  // The move buttons wait while the previous order is being saved: press only once they are enabled again.
+  const moveDown = tobias.page.getByRole('button', { name: `Move ${BASKET} down` });
+  await expect(moveDown).toBeEnabled();
+  await moveDown.focus();
   await tobias.page.keyboard.press('Enter');
   await expect.poll(() => curatedOrder(tobias.page)).toEqual([moire, basket]);
-  await tobias.page.getByRole('button', { name: `Move ${BASKET} up` }).focus();
+  const moveUp = tobias.page.getByRole('button', { name: `Move ${BASKET} up` });
+  await expect(moveUp).toBeEnabled();
+  await moveUp.focus();
   await tobias.page.keyboard.press('Enter');
   await expect.poll(() => curatedOrder(tobias.page)).toEqual([basket, moire]);
   await expect(tobias.page.getByTestId('curation-note').first()).toContainText('cuts clean in A2');
