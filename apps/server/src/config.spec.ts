@@ -38,6 +38,19 @@ describe('configuration', () => {
     expect(configWarnings(loadConfig({}))).toEqual([]);
   });
 
+  it('asks for SESSION_SECRET with DATABASE_URL (instances must sign cookies alike) and reads REDIS_URL and TRUST_PROXY', () => {
+    const url = 'postgres://db.example/barwright';
+    expect(() => loadConfig({ DATABASE_URL: url })).toThrow(/SESSION_SECRET: is required when DATABASE_URL is set/);
+    expect(loadConfig({ DATABASE_URL: url }, { serving: false }).databaseUrl).toBe(url);
+    const c = loadConfig({ DATABASE_URL: url, SESSION_SECRET: secret, REDIS_URL: 'redis://127.0.0.1:6379' });
+    expect(c).toMatchObject({ redisUrl: 'redis://127.0.0.1:6379', trustProxy: false });
+    expect(() => loadConfig({ REDIS_URL: 'http://127.0.0.1:6379' })).toThrow(/REDIS_URL: must be a redis/);
+    expect(loadConfig({ TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ TRUST_PROXY: 'true' }).trustProxy).toBe(true);
+    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8' }).trustProxy).toBe('loopback, 10.0.0.0/8');
+    expect(() => loadConfig({ TRUST_PROXY: 'a;b' })).toThrow(/TRUST_PROXY/);
+  });
+
   it('takes PUBLIC_URL without a trailing slash', () => {
     expect(loadConfig({ PUBLIC_URL: 'https://turners.example/' }).publicUrl).toBe('https://turners.example');
   });

@@ -21,6 +21,16 @@ const envSchema = z.object({
   // Unset means on in development and test, off in production: the demo accounts share a published password.
   DEMO_DATA: bool.optional(),
   WEB_DIST: z.string().optional(),
+  // Several instances: Redis carries socket.io rooms, the co-editing relay and the rate-limit counters.
+  REDIS_URL: z.url().refine((u) => /^rediss?:/.test(u), 'must be a redis:// or rediss:// URL').optional(),
+  // Express's 'trust proxy': true/false, a hop count, or comma-separated addresses/subnets (e.g. loopback, 10.0.0.0/8).
+  TRUST_PROXY: z.string().optional().transform((v, ctx) => {
+    if (v === undefined || v === '' || v === 'false') return false;
+    if (v === 'true') return true;
+    if (/^\d+$/.test(v)) return Number(v);
+    if (!/^[\w.:/,\s-]+$/.test(v)) ctx.addIssue({ code: 'custom', message: 'must be true, false, a hop count, or comma-separated addresses' });
+    return v;
+  }),
 });
 
 export interface Config {
@@ -38,6 +48,10 @@ export interface Config {
   /** Seed the demo scenario (accounts with a published password). */
   demoData: boolean;
   webDist: string;
+  /** Set: several instances share Redis (socket.io adapter, co-editing relay, rate limits). */
+  redisUrl?: string;
+  /** Express's `trust proxy` setting (false: the socket's own address is the client's). */
+  trustProxy: boolean | number | string;
 }
 
 /**
@@ -54,6 +68,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, { serving = tru
   const e = parsed.data;
   if (serving && e.NODE_ENV === 'production' && !e.SESSION_SECRET) {
     throw new Error('Invalid configuration:\n  SESSION_SECRET: is required when NODE_ENV=production (at least 32 characters)');
+  }
+  // Instances on one PostgreSQL server must sign cookies alike, and a secret kept in one DATA_DIR is not shared.
+  if (serving && e.DATABASE_URL && !e.SESSION_SECRET) {
+    throw new Error('Invalid configuration:\n  SESSION_SECRET: is required when DATABASE_URL is set (the same value on every instance, at least 32 characters)');
   }
   // Without SMTP_URL the server would start its fake SMTP server and the mailbox page, which shows every
   // reset link to whoever asks: never in production.
@@ -73,6 +91,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, { serving = tru
     nodeEnv: e.NODE_ENV,
     demoData: e.DEMO_DATA ?? e.NODE_ENV !== 'production',
     webDist: path.resolve(e.WEB_DIST ?? 'dist/web/browser'),
+    redisUrl: e.REDIS_URL,
+    trustProxy: e.TRUST_PROXY,
   };
 }
 
