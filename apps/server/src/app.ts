@@ -24,6 +24,7 @@ import { DesignDocStore } from './realtime/design-doc-store';
 // The community (publishing, Explore, ratings, comments, remix, shop log, notifications).
 import { createCommunity } from './community/community';
 import type { CommunityLimits } from './community/community-limits';
+import type { PhotoStorage } from './shop-log/photo-storage';
 import { NotificationEvents } from './notifications/notification-events';
 // Moderation: the showcase, reports and the desk, the audit log.
 import { createModeration } from './moderation/moderation';
@@ -61,6 +62,8 @@ export interface AppDeps {
   /** The community: shared with the notification socket gateway; where photos are stored (DATA_DIR/uploads); lower limits for tests. */
   notificationEvents?: NotificationEvents;
   uploadsDir?: string;
+  /** Photo storage shared by instances (an S3 bucket); takes the place of uploadsDir. */
+  photoStorage?: PhotoStorage;
   communityLimits?: Partial<CommunityLimits>;
   /** Moderation: shared with the moderation socket gateway (queue counts, roles removed); lower limits for tests. */
   moderationEvents?: ModerationEvents;
@@ -101,7 +104,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.disable('x-powered-by');
   const community = createCommunity({
     db: deps.db, store, compute: deps.compute, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.sessionSecret,
-    events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, log,
+    events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, photoStorage: deps.photoStorage, log,
   });
   const moderation = createModeration({
     db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}), notificationEvents: community.events,

@@ -1,5 +1,4 @@
 import http from 'node:http';
-import path from 'node:path';
 import { createApp, type AppLocals } from './app';
 import { ComputePool } from './compute/compute-pool';
 import { BoardAccessEvents } from './boards/board-access';
@@ -10,7 +9,7 @@ import { configWarnings, loadConfig } from './config';
 import { DataDirBusyError } from './database/data-dir-lock';
 import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
 import { createMailer } from './mail/mailer';
-import { openConfiguredDatabase, sessionSecretFor } from './runtime';
+import { openConfiguredDatabase, openPhotoStorage, sessionSecretFor } from './runtime';
 import { seedDemoScenario } from '../../../seeds/seed-demo';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../../seeds/demo-scenario';
 import { NotificationEvents } from './notifications/notification-events';
@@ -25,6 +24,7 @@ async function main() {
   const started = performance.now();
   const config = loadConfig();
   for (const line of configWarnings(config)) console.warn(`[barwright] ${line}`);
+  const photoStorage = await openPhotoStorage(config);
   const { database, release, fresh } = await openConfiguredDatabase(config, log);
   let localSmtp: LocalSmtp | undefined;
   if (!config.smtpUrl) localSmtp = await startLocalSmtp();
@@ -64,7 +64,7 @@ async function main() {
     webDist: config.webDist,
     demo: config.demoData,
     notificationEvents,
-    uploadsDir: path.join(config.dataDir, 'uploads'),
+    photoStorage,
     compute,
   });
   const server = http.createServer(app);
@@ -80,6 +80,7 @@ async function main() {
 
   const ms = Math.round(performance.now() - started);
   log(`database: ${database.kind}${database.kind === 'pglite' ? ` in ${config.dataDir}${fresh ? ' (new)' : ''}` : ''}`);
+  log(`photos: ${photoStorage.description}`);
   log(`mail: ${localSmtp ? `local fake SMTP on 127.0.0.1:${localSmtp.port}; messages at ${config.publicUrl}/mailbox` : 'SMTP_URL'}`);
   if (seeded) {
     log(`demo scenario seeded; every demo account's password is "${DEMO_PASSWORD}":`);

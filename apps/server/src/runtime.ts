@@ -4,6 +4,8 @@ import { randomBytes } from 'node:crypto';
 import type { Config } from './config';
 import { lockDataDir } from './database/data-dir-lock';
 import { openDatabase, type Database } from './database/database';
+import { PhotoFiles } from './shop-log/photo-files';
+import type { PhotoStorage } from './shop-log/photo-storage';
 
 /** Opens the configured database: a PostgreSQL server when DATABASE_URL is set, else PGlite in DATA_DIR (locked). */
 export async function openConfiguredDatabase(config: Config, log: (line: string) => void): Promise<{ database: Database; release: () => void; fresh: boolean }> {
@@ -29,4 +31,16 @@ export function sessionSecretFor(config: Config): string {
   const secret = randomBytes(32).toString('base64url');
   fs.writeFileSync(file, secret + '\n', { mode: 0o600 });
   return secret;
+}
+
+/**
+ * Where photos go: the S3 bucket when S3_URL and S3_BUCKET are set (reached once now, so a wrong
+ * setting stops the start), else DATA_DIR/uploads. The S3 client is loaded only when asked for.
+ */
+export async function openPhotoStorage(config: Config): Promise<PhotoStorage & { close?(): void }> {
+  if (!config.s3) return new PhotoFiles(path.join(config.dataDir, 'uploads'));
+  const { S3PhotoStorage } = await import('./shop-log/photo-s3-storage');
+  const storage = new S3PhotoStorage(config.s3);
+  await storage.verify();
+  return storage;
 }

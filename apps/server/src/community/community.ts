@@ -14,6 +14,7 @@ import { remixRouter } from '../remix/remix-router';
 import { measuredRouter } from '../shop-log/measured-router';
 import { PhotoFiles } from '../shop-log/photo-files';
 import { photosRouter } from '../shop-log/photos-router';
+import type { PhotoStorage } from '../shop-log/photo-storage';
 import { DEFAULT_COMMUNITY_LIMITS, type CommunityLimits } from './community-limits';
 
 export interface CommunityDeps {
@@ -26,7 +27,8 @@ export interface CommunityDeps {
   secret: string;
   events?: NotificationEvents;
   limits?: Partial<CommunityLimits>;
-  /** DATA_DIR/uploads in production; photo uploads answer 503 without it. */
+  /** Where photos are stored (main.ts: the S3 bucket or DATA_DIR/uploads); else a folder, uploadsDir (tests). Uploads answer 503 without either. */
+  photoStorage?: PhotoStorage;
   uploadsDir?: string;
   log: (error: unknown) => void;
 }
@@ -46,7 +48,7 @@ export function createCommunity(deps: CommunityDeps) {
   router.use(ratingsRouter({ db, notifier }));
   router.use(commentsRouter({ db, notifier, limits: { perMinute: limits.commentsPerMinute, editWindowMs: limits.commentEditWindowMs } }));
   router.use(remixRouter({ db, notifier }));
-  router.use(photosRouter({ db, files: deps.uploadsDir ? new PhotoFiles(deps.uploadsDir) : undefined, limits: { maxBytes: limits.photoMaxBytes, maxPixels: limits.photoMaxPixels, perDay: limits.photosPerDay } }));
+  router.use(photosRouter({ db, files: deps.photoStorage ?? (deps.uploadsDir ? new PhotoFiles(deps.uploadsDir) : undefined), limits: { maxBytes: limits.photoMaxBytes, maxPixels: limits.photoMaxPixels, perDay: limits.photosPerDay } }));
   router.use(measuredRouter());
   router.use(notificationsRouter({ db, notifier, events, secret: deps.secret, publicUrl: deps.publicUrl }));
   return { router, events, notifier };

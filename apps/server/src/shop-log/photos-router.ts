@@ -1,3 +1,4 @@
+import { pipeline } from 'node:stream/promises';
 import { Router, type Request, type RequestHandler } from 'express';
 import { and, eq } from 'drizzle-orm';
 import { PHOTO_FIELD, photoFields } from '@barwright/contracts';
@@ -8,15 +9,15 @@ import { requireDesignRole } from '../boards/board-access';
 import { forbidden, HttpError, notFound } from '../http/http-error';
 import { parseBody } from '../http/validate';
 import { isUuid, requireOpenEntry, requireVisibleEntry, viewerOf } from '../publishing/entry-access';
-import type { PhotoFiles } from './photo-files';
+import type { PhotoStorage } from './photo-storage';
 import { receiveFile } from './photo-upload';
 import { checkDailyAllowance, listPhotos, storePhoto, type PhotoLimits } from './photos-service';
 import { photosShownTo, seesHiddenItem } from '../moderation/hidden-visibility';
 
 export interface PhotosRouterDeps {
   db: Db;
-  /** Absent when the server has no uploads directory: uploads then answer 503. */
-  files?: PhotoFiles;
+  /** The local folder or the S3 bucket; absent (uploads answer 503) when the server has neither. */
+  files?: PhotoStorage;
   limits: PhotoLimits;
 }
 
@@ -70,12 +71,19 @@ export function photosRouter(deps: PhotosRouterDeps): Router {
 
   const serve = (which: 'fileName' | 'thumbName'): RequestHandler => async (req, res) => {
     const photo = await requirePhotoAccess(db, req);
-    if (!deps.files) throw notFound('photo');
-    res.set({ 'X-Content-Type-Options': 'nosniff', 'Content-Security-Policy': "default-src 'none'", 'Cache-Control': 'private, max-age=3600' });
-    // Names are ours (uuid-based); with `root`, the dot-file rule applies to the name only, not to a
-    // data directory that happens to sit under a dot folder.
-    deps.files.pathOf(photo[which]); // refuses any name we did not make
-    res.type(photo.mime).sendFile(photo[which], { root: deps.files.dir, dotfiles: 'deny' });
+    const stored = await deps.files?.read(photo[which]);
+    if (!stored) throw notFound('photo');
+    // A stored name never changes content, so it is the entity tag.
+    const etag = `"${photo[which]}"`;
+    res.set({ 'X-Content-Type-Options': 'nosniff', 'Content-Security-Policy': "default-src 'none'", 'Cache-Control': 'private, max-age=3600', ETag: etag });
+    if (req.headers['if-none-match'] === etag) {
+      stored.body.destroy();
+      res.status(304).end();
+      return;
+    }
+    res.type(photo.mime).set('Content-Length', String(stored.bytes));
+    // Headers are sent: a storage failure from here on can only cut the answer short.
+    await pipeline(stored.body, res).catch(() => res.destroy());
   };
   router.get('/photos/:id', serve('fileName'));
   router.get('/photos/:id/thumb', serve('thumbName'));

@@ -3,7 +3,7 @@ import type { Photo } from '@barwright/contracts';
 import { photos, users, type PhotoRow, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { HttpError } from '../http/http-error';
-import type { PhotoFiles } from './photo-files';
+import type { PhotoStorage } from './photo-storage';
 import { processPhoto } from './photo-image';
 import { hiddenFields } from '../moderation/hidden-visibility';
 
@@ -48,7 +48,7 @@ export async function checkDailyAllowance(db: Db, userId: string, perDay: number
 
 export async function storePhoto(
   db: Db,
-  files: PhotoFiles,
+  files: PhotoStorage,
   input: { upload: Buffer; target: { entryId: string } | { designId: string }; uploader: UserRow; fields: { kind: PhotoRow['kind']; caption: string; material: string; date: string } },
   limits: PhotoLimits,
 ): Promise<Photo> {

@@ -1,0 +1,17 @@
+/** The part of s3rver (a local fake S3 server, JavaScript only) the tests use. */
+declare module 's3rver' {
+  import type { AddressInfo } from 'node:net';
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    directory: string;
+    silent?: boolean;
+    resetOnClose?: boolean;
+    configureBuckets?: { name: string; configs?: string[] }[];
+  }
+  export default class S3rver {
+    constructor(options: S3rverOptions);
+    run(): Promise<AddressInfo>;
+    close(): Promise<void>;
+  }
+}
