@@ -94,7 +94,7 @@ describe('barwright CLI (spawned with node)', () => {
     const run = await barwright(['profile', EXAMPLE_IN, '--step', '0.002']);
     expect(run.code).toBe(0);
     const profile = JSON.parse(run.stdout);
-    expect(Object.keys(profile)).toEqual(['units', 'period', 'cutterPath', 'barEdge', 'followerPath', 'minRadiusOfCurvature', 'warnings']);
+    expect(Object.keys(profile)).toEqual(['units', 'period', 'cutterPath', 'barEdge', 'followerPath', 'minRadiusOfCurvature', 'crest', 'warnings']);
     expect(profile.period).toBeCloseTo(100 / 24 / MM_PER_INCH, 6);
     expect(profile.cutterPath.at(-1)[0]).toBeCloseTo(150 / MM_PER_INCH, 6);
     expect(Math.max(...profile.cutterPath.map((p: number[]) => p[1]))).toBeCloseTo(1.5 / MM_PER_INCH, 3);

@@ -8,6 +8,8 @@ export { lowerDiscEnvelope, upperDiscEnvelope } from './disc-envelope';
 export { barEdge, cutterHeights, counterPhaseDesign, invertHeights } from './bar';
 export { followerPath } from './follower';
 export { rosetteCurvatureRadius, graphCurvatureRadius, minCrestRadius } from './curvature';
+export { crestCurvature, crestText, type CrestCurvature, type CrestInput } from './crest-curvature';
+export { layerDerivatives, type LayerDerivatives, type WaveJet, type WaveCorner } from './wave-derivatives';
 export { type DetailLossInput, detailLossWarnings } from './detail-loss';
 export { type BarGrid, barGrid, defaultStep } from './bar-grid';
 export { type ProfileOptions, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';

@@ -1,7 +1,7 @@
 import type { Design } from '@barwright/contracts';
 import { barEdge, counterPhaseDesign, cutterHeights, invertHeights } from './bar';
 import { barGrid, coarseSamplingWarning, nodeX, type BarGrid } from './bar-grid';
-import { minCrestRadius } from './curvature';
+import { crestCurvature, type CrestCurvature } from './crest-curvature';
 import { detailLossWarnings } from './detail-loss';
 import { followerAt, followerPath } from './follower';
 import { rubberAt, trackRubber } from './rubber-track';
@@ -23,6 +23,7 @@ export interface BarSamples {
   bar: Float64Array;
   follower: Float64Array;
   minRadiusOfCurvature: number;
+  crest: CrestCurvature;
   warnings: EngineWarning[];
 }
 
@@ -42,6 +43,7 @@ export function computeProfile(design: Design, options: ProfileOptions = {}): Pr
     barEdge: points(bar),
     followerPath: points(follower),
     minRadiusOfCurvature: samples.minRadiusOfCurvature,
+    crest: samples.crest,
     warnings: samples.warnings,
   };
 }
@@ -99,7 +101,9 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   });
   const coarse = options.step === undefined ? coarseSamplingWarning(grid, design.units) : undefined;
   const warnings = [...(coarse ? [coarse] : []), ...track.warnings, ...loss];
-  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: minCrestRadius(bar, h, from, to, Math.min(10, grid.perPeriod / 50)), warnings };
+  const onePeriod = track.s.subarray(-track.first, -track.first + Math.min(grid.perPeriod, lastNode + 1));
+  const crest = crestCurvature({ design: d, s: onePeriod, dTheta: grid.dTheta, step: h, inverted: options.companion !== undefined && options.companion !== 'counter-phase' });
+  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: crest.radius, crest, warnings };
 }
 
 /**

@@ -1,4 +1,5 @@
 /** Shared result types of the engine. All lengths are millimetres unless a name says otherwise. */
+import type { CrestCurvature } from './crest-curvature';
 
 /** A point on the bar: x along the bar from 0 to its length, y height (mm). */
 export type Point = [x: number, y: number];
@@ -36,7 +37,9 @@ export interface Profile {
   cutterPath: Point[];
   barEdge: Point[];
   followerPath: Point[];
-  /** Smallest radius of curvature of the bar edge's crests (convex parts), mm. */
+  /** Smallest radius of curvature of the bar edge's crests (convex parts), mm: 0 at a sharp corner, Infinity when straight. */
   minRadiusOfCurvature: number;
+  /** The same with where it is, whether it is a sharp corner, and the cutter path's own figure (exact geometry). */
+  crest?: CrestCurvature;
   warnings: EngineWarning[];
 }

@@ -105,7 +105,7 @@ function normalised(raw: WaveFn, lo: number, hi: number): WaveFn {
 }
 
 /** Extremes of a trigonometric polynomial: dense sampling, then Newton steps on the derivative. */
-function fourierRange(terms: readonly { k: number; a: number; b: number }[], raw: WaveFn): [number, number] {
+export function fourierRange(terms: readonly { k: number; a: number; b: number }[], raw: WaveFn): [number, number] {
   const kMax = Math.max(...terms.map((t) => t.k));
   const count = Math.max(512, 32 * kMax);
   const step = TWO_PI / count;

@@ -1,4 +1,5 @@
 import { MM_PER_INCH, type Units } from '@barwright/contracts';
+import { crestText, type CrestCurvature } from '../crest-curvature';
 import type { CutPlan } from '../cut-plan';
 import type { EngineWarning, Point, Profile } from '../types';
 
@@ -30,7 +31,10 @@ export function fileUnits(units: Units): FileUnits {
   };
 }
 
-/** The `profile` command's output. `minRadiusOfCurvature` is null when the edge has no crest (a straight bar). */
+/**
+ * The `profile` command's output. `minRadiusOfCurvature` is null when the edge has no crest (a straight bar)
+ * and 0 at a sharp corner; `crest` says which, where, and the cutter path's own figure, in words too.
+ */
 export function profileInFileUnits(profile: Profile, u: FileUnits) {
   return {
     units: u.units,
@@ -39,6 +43,7 @@ export function profileInFileUnits(profile: Profile, u: FileUnits) {
     barEdge: u.points(profile.barEdge),
     followerPath: u.points(profile.followerPath),
     minRadiusOfCurvature: Number.isFinite(profile.minRadiusOfCurvature) ? u.length(profile.minRadiusOfCurvature) : null,
+    ...(profile.crest ? { crest: crestInFileUnits(profile.crest, u) } : {}),
     warnings: u.warnings(profile.warnings),
   };
 }
@@ -58,6 +63,17 @@ export function planInFileUnits(plan: CutPlan, u: FileUnits) {
     stepOver: u.length(plan.stepOver),
     warnings: u.warnings(plan.warnings),
     ...(heatTreatment ? { heatTreatment } : {}),
+  };
+}
+
+function crestInFileUnits(crest: CrestCurvature, u: FileUnits) {
+  const finite = (mm: number) => (Number.isFinite(mm) ? u.length(mm) : null);
+  return {
+    radius: finite(crest.radius),
+    corner: crest.corner,
+    x: crest.x === null ? null : u.length(crest.x),
+    pathRadius: finite(crest.pathRadius),
+    text: crestText(crest, u.units),
   };
 }
 

@@ -3,6 +3,7 @@ import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatIconModule } from '@angular/material/icon';
 import type { Units } from '@barwright/contracts';
 import type { ProfileData } from '../../studio/compute/design-views';
+import { crestCaption } from '../../studio/views/crest-caption';
 import { profileDrawing, type ProfileMode } from '../../studio/views/profile-drawing';
 import { lengthText } from './length-text';
 
@@ -27,12 +28,7 @@ export class EntryProfile {
     const p = this.profile();
     return p ? this.length(p.period) : '';
   });
-  protected readonly crestRadius = computed(() => {
-    const r = this.profile()?.minRadiusOfCurvature;
-    if (r === undefined) return '';
-    if (!Number.isFinite(r)) return 'no crest';
-    return r === 0 ? 'sharp' : this.length(r);
-  });
+  protected readonly crestRadius = computed(() => crestCaption(this.profile()?.crest, (mm) => this.length(mm)));
 
   protected setMode(mode: ProfileMode): void {
     this.mode.set(mode);

@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, planCut, toMm, type CutPlan, type EngineWarning, type Profile } from '@barwright/engine';
+import { computeLineStudy, computeProfile, planCut, toMm, type CrestCurvature, type CutPlan, type EngineWarning, type Profile } from '@barwright/engine';
 
 /** How fine to compute: a quick preview (about 200 samples a period) or the engine's own default step. */
 export type ComputeStage = 'preview' | 'full';
@@ -16,6 +16,8 @@ export interface ProfileData {
   bar: Float64Array;
   follower: Float64Array;
   minRadiusOfCurvature: number;
+  /** The tightest crest, exact geometry: radius, sharp corner or not, where. */
+  crest?: CrestCurvature;
   warnings: EngineWarning[];
   /** Cutter and follower radii and the bar's length the profile was computed for, mm. */
   cutterRadius: number;
@@ -77,7 +79,7 @@ function profileData(p: Profile): Omit<ProfileData, 'cutterRadius' | 'followerRa
     cutter[i] = p.cutterPath[i][1];
     follower[i] = p.followerPath[i][1];
   }
-  return { period: p.period, step: p.step, x, cutter, bar, follower, minRadiusOfCurvature: p.minRadiusOfCurvature, warnings: p.warnings };
+  return { period: p.period, step: p.step, x, cutter, bar, follower, minRadiusOfCurvature: p.minRadiusOfCurvature, crest: p.crest, warnings: p.warnings };
 }
 
 function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'depth' | 'vAngle'> {

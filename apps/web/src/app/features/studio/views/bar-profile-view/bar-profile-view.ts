@@ -4,6 +4,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { CollabSession } from '../../collab/collab-session';
 import { DesignCompute } from '../../compute/design-compute';
 import { displayNumber } from '../../units/field-units';
+import { crestCaption } from '../crest-caption';
 import { PointerArea } from '../pointer-area/pointer-area';
 import { profileDrawing, type ProfileMode } from '../profile-drawing';
 
@@ -32,12 +33,7 @@ export class BarProfileView {
     const p = this.compute.views()?.profile.period;
     return p === undefined ? '' : this.length(p);
   });
-  protected readonly crestRadius = computed(() => {
-    const r = this.compute.full()?.profile.minRadiusOfCurvature;
-    if (r === undefined) return '';
-    if (!Number.isFinite(r)) return 'no crest';
-    return r === 0 ? 'sharp' : this.length(r);
-  });
+  protected readonly crestRadius = computed(() => crestCaption(this.compute.full()?.profile.crest, (mm) => this.length(mm)));
 
   protected setMode(mode: ProfileMode): void {
     this.mode.set(mode);
