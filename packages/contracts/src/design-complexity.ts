@@ -32,7 +32,7 @@ export interface DesignComplexity {
 
 /** The three products of a design (unit-free: lengths enter only as the ratio bar length ÷ travel). */
 export function designComplexity(d: Pick<Design, 'rosette' | 'motion' | 'bar' | 'study'>): DesignComplexity {
-  const moving = d.rosette.layers.filter((l) => l.amplitude > 0);
+  const moving = d.rosette.layers.filter((l) => l.amplitude > 0 || (l.wave.shape === 'measured' && l.wave.scale === 'as-read'));
   const details = moving.map((l) => l.lobes * harmonic(l));
   const rosetteDetail = details.reduce((s, n) => s + n, 0);
   const finest = details.reduce((m, n) => Math.max(m, n), 0);

@@ -40,6 +40,11 @@ const waveSchema = z.discriminatedUnion('shape', [
       .array(z.tuple([finite.min(0, 'angle must be at least 0°').lt(360, 'angle must be below 360°'), positive]))
       .min(8, 'needs at least 8 readings')
       .max(3600, 'takes at most 3600 readings'),
+    /**
+     * `as-read`: the readings' own rise and fall about their middle, the layer's amplitude unused;
+     * `to-amplitude` (the default, and the behaviour of files without the field): stretched to the amplitude.
+     */
+    scale: z.enum(['as-read', 'to-amplitude'], { error: 'must be "as-read" or "to-amplitude"' }).optional(),
   }),
 ]);
 export type Wave = z.infer<typeof waveSchema>;
@@ -80,6 +85,13 @@ const scheduleSchema = z.discriminatedUnion('kind', [
 export type PhaseSchedule = z.infer<typeof scheduleSchema>;
 export type ScheduleKind = PhaseSchedule['kind'];
 
+const pivotSchema = z.discriminatedUnion('kind', [
+  z.strictObject({ kind: z.literal('linear') }),
+  /** `distance`: from the rocking axis to the spindle centre line, a length. */
+  z.strictObject({ kind: z.literal('rocking'), distance: positive }),
+]);
+export type MotionPivot = z.infer<typeof pivotSchema>;
+
 export const designSchema = z
   .strictObject({
     format: z.literal(DESIGN_FORMAT, { error: `must be "${DESIGN_FORMAT}"` }),
@@ -94,10 +106,14 @@ export const designSchema = z
       travelPerRev: positive,
       /** Cutter displacement per rubber displacement. */
       leverRatio: positive.max(10, 'must be at most 10'),
+      /** How the headstock carries the motion: a straight line (the default) or an arc about a rocking axis. */
+      pivot: pivotSchema.optional(),
     }),
     cutter: z.strictObject({
       diameter: positive,
       flutes: finite.int('must be a whole number').min(1, 'must be at least 1').max(8, 'must be at most 8'),
+      /** Distance of the cutter's contact from the spindle centre line, along the bar, a length (default 0). */
+      offset: finite.optional(),
     }),
     bar: z.strictObject({
       length: positive,
@@ -142,6 +158,8 @@ export const LENGTH_LIMITS_MM = {
   'plan.stepOver': [0.001, 5],
   'plan.cleanup': [0, 20],
   'plan.travelSpeed': [1, 20000],
+  'cutter.offset': [-50, 50],
+  'motion.pivot.distance': [10, 2000],
 } as const satisfies Record<string, readonly [number, number]>;
 
 function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
@@ -150,7 +168,9 @@ function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
   const show = (mm: number) => (unit === 'in' ? `${+(mm / MM_PER_INCH).toFixed(4)} in` : `${mm} mm`);
   const read = (path: string): number => path.split('.').reduce<any>((o, k) => o?.[k], d);
   for (const [path, [lo, hi]] of Object.entries(LENGTH_LIMITS_MM)) {
-    const mm = read(path) * toMm;
+    const value = read(path);
+    if (value === undefined) continue; // an optional field left out
+    const mm = value * toMm;
     if (mm < lo || mm > hi) {
       ctx.addIssue({ code: 'custom', path: path.split('.'), message: `must be between ${show(lo)} and ${show(hi)}` });
     }
@@ -159,7 +179,7 @@ function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
   if (d.rubber.shape === 'round' && d.rubber.radius > R0) {
     ctx.addIssue({ code: 'custom', path: ['rubber', 'radius'], message: `must not be larger than the rosette's base radius (${R0} ${unit})` });
   }
-  const swing = d.rosette.layers.reduce((s, l) => s + l.amplitude / 2, 0);
+  const swing = d.rosette.layers.reduce((s, l) => s + layerPeakToValley(l) / 2, 0);
   if (swing >= R0) {
     ctx.addIssue({ code: 'custom', path: ['rosette', 'layers'], message: `half the summed amplitudes must stay below the base radius (${R0} ${unit})` });
   }
@@ -180,10 +200,33 @@ function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
       ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'wave', 'terms'], message: 'needs at least one non-zero coefficient' });
     }
   });
+  const pivot = d.motion.pivot;
+  if (pivot?.kind === 'rocking') {
+    const reach = d.motion.leverRatio * swing + Math.abs(d.cutter.offset ?? 0);
+    if (pivot.distance <= reach) {
+      ctx.addIssue({ code: 'custom', path: ['motion', 'pivot', 'distance'], message: `must be more than the cutter's half swing plus its offset (${+reach.toPrecision(4)} ${unit})` });
+    }
+  }
   if (d.bar.material === 'custom' && (d.plan.surfaceSpeed === undefined || d.plan.chipLoad === undefined)) {
     ctx.addIssue({ code: 'custom', path: ['plan', 'surfaceSpeed'], message: 'a custom material needs plan.surfaceSpeed and plan.chipLoad' });
   }
   checkDesignComplexity(d, ctx);
+}
+
+/**
+ * The peak-to-valley a layer adds to the radius, in the file's units: the amplitude, or for a
+ * measured wave read `as-read` the readings' own rise (largest minus smallest radius).
+ */
+export function layerPeakToValley(layer: RosetteLayer): number {
+  const wave = layer.wave;
+  if (wave.shape !== 'measured' || wave.scale !== 'as-read') return layer.amplitude;
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const [, r] of wave.points) {
+    if (r < lo) lo = r;
+    if (r > hi) hi = r;
+  }
+  return hi - lo;
 }
 
 /** A field error: a dotted path (`rosette.layers[0].lobes`) and a message naming the limit. */

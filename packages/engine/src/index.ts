@@ -13,6 +13,8 @@ export { layerDerivatives, type LayerDerivatives, type WaveJet, type WaveCorner 
 export { type DetailLossInput, detailLossWarnings } from './detail-loss';
 export { type BarGrid, barGrid, defaultStep } from './bar-grid';
 export { type ProfileOptions, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';
+export { type Companion, COMPANIONS, oppositeProfile } from './profile';
+export { type CutterPlacement, type PlacementFigures, cutterPlacement, placementFigures, alongBarShift, acrossBarHeight } from './cutter-placement';
 export { type PeriodProfile, periodProfile } from './period-profile';
 export { type LineStudy, computeLineStudy, vGrooveWidth } from './line-study';
 export { linePhase, reducedPhase } from './phase-schedule';

@@ -2,17 +2,24 @@ import type { Design } from '@barwright/contracts';
 import { barEdge, counterPhaseDesign, cutterHeights, invertHeights } from './bar';
 import { barGrid, coarseSamplingWarning, nodeX, type BarGrid } from './bar-grid';
 import { crestCurvature, type CrestCurvature } from './crest-curvature';
+import { cutterPlacement, placeCutter, placementMargin } from './cutter-placement';
 import { detailLossWarnings } from './detail-loss';
 import { followerAt, followerPath } from './follower';
 import { rubberAt, trackRubber } from './rubber-track';
 import type { EngineWarning, Point, Profile } from './types';
 import { toMm } from './units';
 
+export type Companion = 'counter-phase' | 'inverted' | 'opposite';
+export const COMPANIONS: readonly Companion[] = ['counter-phase', 'inverted', 'opposite'];
+
 export interface ProfileOptions {
   /** Sampling interval along x (mm); the grid uses the largest step not above it that divides the period. */
   step?: number;
-  /** Compute a companion bar instead: shifted half a period, or mirrored top to bottom. */
-  companion?: 'counter-phase' | 'inverted';
+  /**
+   * Compute a companion bar instead: shifted half a period, mirrored top to bottom, or the
+   * opposite blank of the same cut (above the cutter: the upper envelope, the follower under it).
+   */
+  companion?: Companion;
 }
 
 /** The profile as typed arrays over the points x (mm): the nodes on the bar, then its end if off the grid. */
@@ -58,6 +65,14 @@ export function invertedProfile(design: Design, options: Omit<ProfileOptions, 'c
   return computeProfile(design, { ...options, companion: 'inverted' });
 }
 
+/**
+ * The opposite blank of the same cut (the blank above the cutter): its edge is the upper envelope of
+ * the cutter disc, not the bar edge mirrored; turned over it is the inverted companion.
+ */
+export function oppositeProfile(design: Design, options: Omit<ProfileOptions, 'companion'> = {}): Profile {
+  return computeProfile(design, { ...options, companion: 'opposite' });
+}
+
 /** The same computation as `computeProfile`, returning typed arrays (for batches and exports). */
 export function computeBarSamples(design: Design, options: ProfileOptions = {}): BarSamples {
   const mm = design.units === 'mm' ? design : toMm(design);
@@ -66,7 +81,8 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   const { step: h, lastNode } = grid;
   const rc = d.cutter.diameter / 2;
   const rf = d.follower.radius;
-  const margin = Math.ceil(rc / h) + 1; // the cutter runs past both ends of the bar
+  const placement = cutterPlacement(d);
+  const margin = Math.ceil(rc / h) + 1 + placementMargin(placement, d, h); // the cutter runs past both ends of the bar
   const track = trackRubber(d, grid, -margin, lastNode + 1 + margin, design.units);
   const offGrid = !grid.endOnGrid;
   const sEnd = offGrid ? rubberAt(d, grid, (2 * Math.PI * grid.length) / d.motion.travelPerRev) : NaN;
@@ -74,7 +90,9 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   const sMin = Math.min(minOf(onBar), offGrid ? sEnd : Infinity);
   let yExt = cutterHeights(track.s, d.motion.leverRatio, sMin);
   let yEnd = d.motion.leverRatio * (sEnd - sMin);
-  if (options.companion === 'inverted') {
+  if (placement) ({ y: yExt, yEnd } = placeCutter(placement, yExt, margin, grid));
+  const opposite = options.companion === 'opposite';
+  if (options.companion === 'inverted' || opposite) {
     const yMax = Math.max(maxOf(yExt.subarray(margin, margin + lastNode + 1)), offGrid ? yEnd : -Infinity);
     yExt = invertHeights(yExt, yMax);
     yEnd = yMax - yEnd;
@@ -101,6 +119,7 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   });
   const coarse = options.step === undefined ? coarseSamplingWarning(grid, design.units) : undefined;
   const warnings = [...(coarse ? [coarse] : []), ...track.warnings, ...loss];
+  if (opposite) turnOver(cutter, bar, follower);
   const onePeriod = track.s.subarray(-track.first, -track.first + Math.min(grid.perPeriod, lastNode + 1));
   const crest = crestCurvature({ design: d, s: onePeriod, dTheta: grid.dTheta, step: h, inverted: options.companion !== undefined && options.companion !== 'counter-phase' });
   return { grid, x, cutter, bar, follower, minRadiusOfCurvature: crest.radius, crest, warnings };
@@ -138,6 +157,15 @@ function followerOverBar(bar: Float64Array, x: Float64Array, grid: BarGrid, rf: 
   const near = Math.max(0, nodes - Math.ceil(rf / grid.step) - 2);
   follower[end] = followerAt(grid.length, x.subarray(near), bar.subarray(near), rf);
   return follower;
+}
+
+/**
+ * The opposite blank, from the inverted companion (the same bar turned over): mirrored back, its
+ * edge is the upper envelope of the cutter disc and its follower rides under it (in place).
+ */
+function turnOver(cutter: Float64Array, bar: Float64Array, follower: Float64Array): void {
+  const yMax = maxOf(cutter);
+  for (const y of [cutter, bar, follower]) for (let i = 0; i < y.length; i++) y[i] = yMax - y[i];
 }
 
 function minOf(values: Float64Array): number {

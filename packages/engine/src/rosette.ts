@@ -1,4 +1,4 @@
-import type { Design } from '@barwright/contracts';
+import { layerPeakToValley, type Design } from '@barwright/contracts';
 import { layerWave, type WaveFn } from './waves';
 
 type Rosette = Design['rosette'];
@@ -47,19 +47,19 @@ export function sampleRevolution(rosette: Rosette, samples: number): Float64Arra
  * that move (amplitude > 0); the period on the bar is travelPerRev divided by it.
  */
 export function rosetteRepeats(rosette: Rosette): number {
-  const moving = rosette.layers.filter((l) => l.amplitude > 0);
+  const moving = rosette.layers.filter((l) => layerPeakToValley(l) > 0);
   return (moving.length ? moving : rosette.layers).reduce((g, l) => gcd(g, l.lobes), 0);
 }
 
 /** A lower bound of r: every wave stays within [−1, 1]. */
 export function rosetteMinRadius(rosette: Rosette): number {
-  return rosette.baseRadius - rosette.layers.reduce((s, l) => s + l.amplitude / 2, 0);
+  return rosette.baseRadius - rosette.layers.reduce((s, l) => s + layerPeakToValley(l) / 2, 0);
 }
 
 function prepare(rosette: Rosette): PreparedLayer[] {
   return rosette.layers
-    .filter((l) => l.amplitude > 0)
-    .map((l) => ({ lobes: l.lobes, half: l.amplitude / 2, phase: 2 * Math.PI * l.phase, wave: layerWave(l, rosette.baseRadius) }));
+    .filter((l) => layerPeakToValley(l) > 0)
+    .map((l) => ({ lobes: l.lobes, half: layerPeakToValley(l) / 2, phase: 2 * Math.PI * l.phase, wave: layerWave(l, rosette.baseRadius) }));
 }
 
 function gcd(a: number, b: number): number {

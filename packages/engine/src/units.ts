@@ -35,13 +35,17 @@ function scaleLengths(d: Design, factor: number): Design {
         amplitude: len(layer.amplitude),
         wave:
           layer.wave.shape === 'measured'
-            ? { shape: 'measured', points: layer.wave.points.map(([deg, radius]) => [deg, len(radius)] as [number, number]) }
+            ? { ...layer.wave, points: layer.wave.points.map(([deg, radius]) => [deg, len(radius)] as [number, number]) }
             : structuredClone(layer.wave),
       })),
     },
     rubber: d.rubber.shape === 'round' ? { shape: 'round', radius: len(d.rubber.radius) } : { shape: 'flat', width: len(d.rubber.width) },
-    motion: { ...d.motion, travelPerRev: len(d.motion.travelPerRev) },
-    cutter: { ...d.cutter, diameter: len(d.cutter.diameter) },
+    motion: {
+      ...d.motion,
+      travelPerRev: len(d.motion.travelPerRev),
+      ...(d.motion.pivot?.kind === 'rocking' ? { pivot: { kind: 'rocking', distance: len(d.motion.pivot.distance) } } : {}),
+    },
+    cutter: { ...d.cutter, diameter: len(d.cutter.diameter), ...(d.cutter.offset === undefined ? {} : { offset: len(d.cutter.offset) }) },
     bar: { ...d.bar, length: len(d.bar.length), thickness: len(d.bar.thickness) },
     follower: { radius: len(d.follower.radius) },
     study: {

@@ -3,7 +3,7 @@ import { planCut } from '../cut-plan';
 import { EXPORT_FORMATS, exportDesign, type ExportFormat } from '../export/index';
 import { computeLineStudy } from '../line-study';
 import { lineStudySvg } from '../line-study-svg';
-import { computeProfile } from '../profile';
+import { COMPANIONS, computeProfile, type Companion } from '../profile';
 import { UsageError } from './design-file';
 import { fileUnits, planInFileUnits, profileInFileUnits } from './file-units';
 import { jsonText } from './json-text';
@@ -29,18 +29,23 @@ export const MIN_STEP_MM = 0.001;
 
 const profileCommand: Command = {
   summary: 'the cutter path, bar edge and follower path as JSON',
-  usage: 'barwright profile FILE [--step S]',
+  usage: 'barwright profile FILE [--step S] [--companion counter-phase|inverted|opposite]',
   details: [
     'Prints { units, period, cutterPath, barEdge, followerPath, minRadiusOfCurvature, warnings }.',
     'Paths are [[x, y], ...]: x along the bar, y the height, 0 at the cutter path\'s lowest point.',
     '  --step S   sampling interval along x, in the file\'s units, at least 0.001 mm (default: 1/2000 of the period,',
     '             within 0.1 % of the amplitude at sharp crests, at most 0.02 mm and 150 000 points; a warning',
     '             says when a bar of more than 75 periods is sampled more coarsely)',
+    '  --companion C   a companion of the bar instead: counter-phase (shifted half a period), inverted (the cutter',
+    '             path mirrored top to bottom, cut afresh) or opposite (the blank above the cutter in the same cut:',
+    '             its edge is the upper envelope of the cutter, the follower rides under it; turned over it is the',
+    '             inverted bar)',
   ].join('\n'),
-  options: { step: { type: 'string' } },
+  options: { step: { type: 'string' }, companion: { type: 'string' } },
   async run(design, values, io) {
     const step = stepInMm(design, values.step);
-    const profile = computeProfile(design, step === undefined ? {} : { step });
+    const companion = companionOf(values.companion);
+    const profile = computeProfile(design, { ...(step === undefined ? {} : { step }), ...(companion ? { companion } : {}) });
     io.stdout(jsonText(profileInFileUnits(profile, fileUnits(design.units))) + '\n');
   },
 };
@@ -109,6 +114,15 @@ export const COMMANDS: Readonly<Record<string, Command>> = {
   plan: planCommand,
   export: exportCommand,
 };
+
+/** Reads --companion; undefined when absent. */
+function companionOf(raw: string | boolean | undefined): Companion | undefined {
+  if (raw === undefined) return undefined;
+  if (typeof raw !== 'string' || !(COMPANIONS as readonly string[]).includes(raw)) {
+    throw new UsageError(`--companion: must be one of ${COMPANIONS.join(', ')} (got "${String(raw)}")`);
+  }
+  return raw as Companion;
+}
 
 /** Reads --step (file units) as mm; undefined when absent. */
 function stepInMm(design: Design, raw: string | boolean | undefined): number | undefined {
