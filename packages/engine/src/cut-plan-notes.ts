@@ -22,9 +22,15 @@ export function setUpReminders(args: {
   stepOver: string;
   thickness: string;
   topOfEdge: string;
+  /** The cutter's modelled placement off the centre line or on a rocking arc (`placementText`), if any. */
+  placement?: string;
 }): string[] {
+  const rule =
+    'Feed each pass with the upper slide, never the cross slide: a cutter off the spindle centre line (the line through the rubber\'s contact and the rosette axis) distorts the pattern.';
   const reminders = [
-    'Set the end mill\'s centre on the spindle centre line (the line through the rubber\'s contact and the rosette axis); the profile assumes it.',
+    args.placement
+      ? `The profile models the cutter ${args.placement}; set it exactly so. ${rule}`
+      : `Set the end mill's centre on the spindle centre line; the profile assumes it. ${rule}`,
     'Check the rubber is set to the profile\'s rubber and bears on the rosette with enough spring pressure to follow every valley.',
     `Clamp the bar with the edge standing proud; the cutter's flutes must reach through its ${args.thickness} thickness.`,
     `Touch off on the blank's edge: the finished crests sit ${args.topOfEdge} below it; step in ${args.stepOver} per pass.`,

@@ -1,5 +1,6 @@
 import { MM_PER_INCH, type Design, type MaterialId } from '@barwright/contracts';
 import { cutPlanWarnings } from './cut-plan-warnings';
+import { placementText } from './cutter-placement';
 import { SAFETY_CAUTIONS, setUpReminders } from './cut-plan-notes';
 import { formatLength } from './length-format';
 import { cuttingFigures } from './materials';
@@ -81,6 +82,7 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
     stepOver: show(stepOver),
     thickness: show(mm.bar.thickness),
     topOfEdge: show(mm.plan.cleanup),
+    placement: placementText(mm, peakToValley(path.cutterPath), design.units),
   });
   return {
     material: design.bar.material,

@@ -104,3 +104,20 @@ describe('cutter placement', () => {
     expect(peakToValley(inch.cutterPath)).toBeCloseTo(peakToValley(mm.cutterPath), 8);
   });
 });
+
+describe('cutter placement in words', () => {
+  it('says the figures in the file\'s units, and the rule comes with them in the cut plan\'s reminders', async () => {
+    const { planCut } = await import('./cut-plan');
+    const { placementText } = await import('./cutter-placement');
+    const design = sineBar({ offset: 0.5, pivot: 150 });
+    expect(placementText(design, 1.505, 'mm')).toBe(
+      '0.5 mm off the centre line, rocking 150 mm from its axis: amplitude +0.33 %, crests and valleys lean 0.0019 mm towards the axis, the pattern moved 0.5 mm along the bar',
+    );
+    expect(placementText(sineBar({ offset: -0.5 }), 1.5, 'mm')).toBe('0.5 mm off the centre line, linear motion: the shape unchanged, the pattern moved 0.5 mm back along the bar');
+    expect(placementText(sineBar(), 1.5, 'mm')).toBeUndefined();
+    const [first] = planCut(design).reminders;
+    expect(first).toContain('The profile models the cutter 0.5 mm off the centre line');
+    expect(first).toContain('never the cross slide');
+    expect(planCut(sineBar()).reminders[0]).toMatch(/^Set the end mill's centre on the spindle centre line.*never the cross slide/);
+  });
+});

@@ -1,5 +1,6 @@
-import type { Design } from '@barwright/contracts';
+import type { Design, Units } from '@barwright/contracts';
 import type { BarGrid } from './bar-grid';
+import { formatLength } from './length-format';
 import { rosetteMinRadius } from './rosette';
 
 /**
@@ -138,4 +139,27 @@ export function placementFigures(design: Design, height: number): PlacementFigur
   const change = p.pivot === Infinity ? 0 : p.offset / p.pivot;
   const halfSwing = height / (2 * (1 + change));
   return { amplitudeChange: change, shift: p.offset, lean: p.offset - alongBarShift(p, halfSwing) };
+}
+
+/**
+ * The placement in one line for the studio and the cut plan, lengths in `units`:
+ * "0.5 mm off the centre line, rocking 150 mm from its axis: amplitude +0.33 %, crests and valleys
+ * lean 0.0019 mm towards the axis, the pattern moved 0.5 mm along the bar". Undefined when nominal.
+ */
+export function placementText(design: Design, height: number, units: Units): string | undefined {
+  const p = cutterPlacement(design);
+  if (!p) return undefined;
+  const f = placementFigures(design, height);
+  const show = (mm: number) => formatLength(mm, units);
+  const where = p.offset === 0 ? 'on the centre line' : `${show(Math.abs(p.offset))} off the centre line`;
+  const motion = p.pivot === Infinity ? 'linear motion' : `rocking ${show(p.pivot)} from its axis`;
+  const effects =
+    p.pivot === Infinity
+      ? ['the shape unchanged']
+      : [
+          `amplitude ${f.amplitudeChange >= 0 ? '+' : '−'}${+Math.abs(100 * f.amplitudeChange).toPrecision(2)} %`,
+          `crests and valleys lean ${show(f.lean)} towards the axis`,
+        ];
+  if (p.offset !== 0) effects.push(`the pattern moved ${show(Math.abs(p.offset))} ${p.offset > 0 ? 'along' : 'back along'} the bar`);
+  return `${where}, ${motion}: ${effects.join(', ')}`;
 }
