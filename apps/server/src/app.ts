@@ -10,7 +10,7 @@ import { mailboxRouter } from './dev/mailbox-router';
 import { csrfProtection } from './http/csrf';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { HttpError } from './http/http-error';
-import { createRateLimits, DEFAULT_RATE_LIMITS, type RateLimitSettings } from './http/rate-limits';
+import { createRateLimits, DEFAULT_RATE_LIMITS, type RateLimitSettings, type RateLimitStoreFactory } from './http/rate-limits';
 import { securityHeaders } from './http/security-headers';
 import { refuseHostileShapes } from './http/request-shape';
 import type { LocalSmtp } from './mail/local-smtp';
@@ -50,6 +50,12 @@ export interface AppDeps {
   webDist?: string;
   demo?: boolean;
   rateLimits?: Partial<RateLimitSettings>;
+  /** Several instances: the rate-limit counters' shared store (Redis); omitted: in memory. */
+  rateLimitStore?: RateLimitStoreFactory;
+  /** Express's `trust proxy` (TRUST_PROXY): which hops' X-Forwarded-For to believe for the client's address. */
+  trustProxy?: boolean | number | string;
+  /** The co-editing store shared with the realtime gateway (its append listener feeds the cross-instance relay). */
+  designDocStore?: DesignDocStore;
   log?: (error: unknown) => void;
   /** Shared with the realtime gateway so role changes reach open sockets. */
   accessEvents?: BoardAccessEvents;
@@ -86,10 +92,10 @@ export function createApp(deps: AppDeps): express.Express {
   const secureCookies = deps.publicUrl.startsWith('https://');
   const sessionStore = new DatabaseSessionStore(deps.db);
   const passport = createPassport(deps.db);
-  const limits = createRateLimits({ ...DEFAULT_RATE_LIMITS, ...deps.rateLimits });
+  const limits = createRateLimits({ ...DEFAULT_RATE_LIMITS, ...deps.rateLimits }, deps.rateLimitStore);
 
   const accessEvents = deps.accessEvents ?? new BoardAccessEvents();
-  const store = new DesignDocStore(deps.db);
+  const store = deps.designDocStore ?? new DesignDocStore(deps.db);
   const sessionParser = session({
     name: SESSION_COOKIE,
     secret: deps.sessionSecret,
@@ -102,6 +108,7 @@ export function createApp(deps: AppDeps): express.Express {
 
   const app = express();
   app.disable('x-powered-by');
+  app.set('trust proxy', deps.trustProxy ?? false);
   const community = createCommunity({
     db: deps.db, store, compute: deps.compute, mailer: deps.mailer, publicUrl: deps.publicUrl, secret: deps.sessionSecret,
     events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, photoStorage: deps.photoStorage, log,

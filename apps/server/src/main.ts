@@ -16,6 +16,12 @@ import { NotificationEvents } from './notifications/notification-events';
 import { NotifyGateway } from './notifications/notify-gateway';
 import { DIGEST_CHECK_MS, sendDueDigests } from './notifications/digests';
 import { ModerationGateway } from './moderation/moderation-gateway';
+// Several instances (REDIS_URL): socket.io rooms, the co-editing relay and the rate-limit counters in Redis.
+import { createAdapter } from '@socket.io/redis-streams-adapter';
+import { openRedis } from './cluster/redis-connection';
+import { redisRateLimitStores } from './http/rate-limits';
+import { DesignDocStore } from './realtime/design-doc-store';
+import { RedisRelay } from './realtime/redis-relay';
 
 const log = (line: string) => console.log(`[barwright] ${line}`);
 
@@ -26,6 +32,10 @@ async function main() {
   for (const line of configWarnings(config)) console.warn(`[barwright] ${line}`);
   const photoStorage = await openPhotoStorage(config);
   const { database, release, fresh } = await openConfiguredDatabase(config, log);
+  const redis = config.redisUrl ? await openRedis(config.redisUrl, log) : undefined;
+  // One store for the app and the gateway: each stored update is published to the other instances.
+  const designDocStore = new DesignDocStore(database.db, undefined, (designId, seq, update) => relay?.published(designId, seq, update));
+  const relay = redis && new RedisRelay(redis, designDocStore, console.error);
   let localSmtp: LocalSmtp | undefined;
   if (!config.smtpUrl) localSmtp = await startLocalSmtp();
   const mailer = createMailer({ smtpUrl: config.smtpUrl, localPort: localSmtp?.port, from: config.mailFrom });
@@ -44,14 +54,14 @@ async function main() {
   const compute = new ComputePool();
   const app = createApp({
     accessEvents,
-    closeDesignSockets: (designId) => gateway?.closeWhere((c) => c.designId === designId, CLOSE_CODES.forbidden, 'design deleted'),
+    closeDesignSockets: (designId) => gateway?.closeEverywhere({ designId }, CLOSE_CODES.forbidden, 'design deleted'),
     closeUserSockets: (userId) => {
-      gateway?.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'signed out: account suspended or password reset');
+      gateway?.closeEverywhere({ userId }, CLOSE_CODES.unauthorized, 'signed out: account suspended or password reset');
       notify?.disconnectUser(userId);
       moderation?.disconnectUser(userId);
     },
     closeSessionSockets: (sessionId) => {
-      gateway?.closeWhere((c) => c.sessionId === sessionId, CLOSE_CODES.unauthorized, 'signed out');
+      gateway?.closeEverywhere({ sessionId }, CLOSE_CODES.unauthorized, 'signed out');
       notify?.disconnectSession(sessionId);
       moderation?.disconnectSession(sessionId);
     },
@@ -66,11 +76,14 @@ async function main() {
     notificationEvents,
     photoStorage,
     compute,
+    designDocStore,
+    trustProxy: config.trustProxy,
+    rateLimitStore: redis && redisRateLimitStores((args) => redis.client.sendCommand(args)),
   });
   const server = http.createServer(app);
-  gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins });
+  gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins, store: designDocStore, relay });
   gateway.attach(server);
-  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins });
+  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins, adapter: redis && createAdapter(redis.client) });
   notify.attach(server);
   // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
   moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
@@ -81,6 +94,7 @@ async function main() {
   const ms = Math.round(performance.now() - started);
   log(`database: ${database.kind}${database.kind === 'pglite' ? ` in ${config.dataDir}${fresh ? ' (new)' : ''}` : ''}`);
   log(`photos: ${photoStorage.description}`);
+  log(`instances: ${redis ? `several, sharing Redis at ${new URL(config.redisUrl!).host}` : 'one'}`);
   log(`mail: ${localSmtp ? `local fake SMTP on 127.0.0.1:${localSmtp.port}; messages at ${config.publicUrl}/mailbox` : 'SMTP_URL'}`);
   if (seeded) {
     log(`demo scenario seeded; every demo account's password is "${DEMO_PASSWORD}":`);
@@ -97,6 +111,7 @@ async function main() {
     clearInterval(digests);
     moderation?.close();
     notify?.close();
+    await redis?.close();
     server.closeAllConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     mailer.close();

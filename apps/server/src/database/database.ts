@@ -7,6 +7,7 @@ import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import pg from 'pg';
 import * as schema from '../../../../db/schema';
+import { ADVISORY_LOCKS } from './advisory-locks';
 
 export type Schema = typeof schema;
 /** The one database type the services use, whichever driver is underneath. */
@@ -37,6 +38,22 @@ export async function openDatabase(target: DatabaseTarget): Promise<Database> {
   // An idle client the server drops (restart, failover) is replaced on the next query; it must not crash us.
   pool.on('error', (error) => console.error(`[barwright] database connection lost: ${error.message}`));
   const db = drizzlePg(pool, { schema });
-  await migratePg(db, { migrationsFolder: MIGRATIONS_FOLDER });
+  await migrateUnderLock(pool, () => migratePg(db, { migrationsFolder: MIGRATIONS_FOLDER }));
   return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };
+}
+
+/**
+ * Runs the migrations while holding a session-level advisory lock on a connection of its own:
+ * instances starting together on an empty database would otherwise race on CREATE TABLE (duplicate
+ * key in pg_type). The others wait, then find every migration applied.
+ */
+async function migrateUnderLock(pool: pg.Pool, migrate: () => Promise<void>): Promise<void> {
+  const client = await pool.connect();
+  try {
+    await client.query('select pg_advisory_lock($1, 0)', [ADVISORY_LOCKS.migrations]);
+    await migrate();
+  } finally {
+    await client.query('select pg_advisory_unlock($1, 0)', [ADVISORY_LOCKS.migrations]).catch(() => {});
+    client.release();
+  }
 }

@@ -1,4 +1,5 @@
-import { rateLimit, type AugmentedRequest, type Options } from 'express-rate-limit';
+import { rateLimit, type AugmentedRequest, type Options, type Store } from 'express-rate-limit';
+import { RedisStore, type RedisReply } from 'rate-limit-redis';
 import type { ApiErrorBody } from '@barwright/contracts';
 
 export interface RateLimitSettings {
@@ -43,17 +44,27 @@ const accountLocked: Options['handler'] = (req, res, _next, options) => {
   res.status(429).json(body);
 };
 
-export function createRateLimits(s: RateLimitSettings) {
+/** Makes the counter store of one limit (named by `prefix`); omitted: in memory, one process's own. */
+export type RateLimitStoreFactory = (prefix: string) => Store;
+
+/** Counters in Redis, shared by every instance (rate-limit-redis over the instance's command connection). */
+export function redisRateLimitStores(sendCommand: (args: string[]) => Promise<unknown>): RateLimitStoreFactory {
+  return (prefix) => new RedisStore({ prefix: `barwright:rate:${prefix}:`, sendCommand: (...args: string[]) => sendCommand(args) as Promise<RedisReply> });
+}
+
+export function createRateLimits(s: RateLimitSettings, storeFor?: RateLimitStoreFactory) {
   const base = { windowMs: s.windowMs, standardHeaders: 'draft-8' as const, legacyHeaders: false, handler: tooMany };
+  const store = (prefix: string) => (storeFor ? { store: storeFor(prefix) } : {});
   return {
-    signInByAddress: rateLimit({ ...base, limit: s.signInPerAddress }),
+    signInByAddress: rateLimit({ ...base, limit: s.signInPerAddress, ...store('sign-in-address') }),
     signInByAccount: rateLimit({
       ...base,
+      ...store('sign-in-account'),
       limit: s.signInPerAccount,
       skipSuccessfulRequests: true,
       keyGenerator: (req) => signInAccountKey(req.body?.email),
       handler: accountLocked,
     }),
-    mailByAddress: rateLimit({ ...base, limit: s.mailPerAddress }),
+    mailByAddress: rateLimit({ ...base, limit: s.mailPerAddress, ...store('mail-address') }),
   };
 }

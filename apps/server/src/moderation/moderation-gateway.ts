@@ -3,7 +3,7 @@ import type { Namespace, Server } from 'socket.io';
 import { MODERATION_NAMESPACE, MODERATION_REFUSALS, userRoom, type ModerationClientEvents, type ModerationServerEvents } from '@barwright/contracts';
 import type { Db } from '../database/database';
 import { findUserById } from '../auth/users';
-import { overSocketCap, sessionIdOf, sessionUser, TOO_MANY_SOCKETS } from '../notifications/notify-gateway';
+import { overSocketCap, sessionIdOf, sessionRoom, sessionUser, TOO_MANY_SOCKETS } from '../notifications/notify-gateway';
 import { DEFAULT_REALTIME_LIMITS, type RealtimeLimits } from '../realtime/realtime-limits';
 import type { ModerationEvents } from './moderation-events';
 import { isModerator } from './moderation-rules';
@@ -53,6 +53,7 @@ export class ModerationGateway {
     this.namespace.on('connection', (socket) => {
       socket.onAny(() => socket.disconnect(true)); // clients send nothing on the desk's socket either
       void socket.join(userRoom(socket.data.userId as string));
+      if (socket.data.sessionId) void socket.join(sessionRoom(socket.data.sessionId as string));
       void openReportCount(deps.db).then((n) => socket.emit('moderation:queue', n), this.log);
     });
     deps.events.on('queue', this.onQueue);
@@ -74,7 +75,7 @@ export class ModerationGateway {
 
   /** Ends the desk sockets opened with one session (signed out). */
   disconnectSession(sessionId: string): void {
-    for (const socket of this.namespace.sockets.values()) if (socket.data.sessionId === sessionId) socket.disconnect(true);
+    this.namespace.in(sessionRoom(sessionId)).disconnectSockets(true);
   }
 
   close(): void {

@@ -1,6 +1,6 @@
 import type { Server as HttpServer, IncomingMessage } from 'node:http';
 import type { RequestHandler, Response } from 'express';
-import { Server } from 'socket.io';
+import { Server, type ServerOptions } from 'socket.io';
 import { NOTIFY_REFUSALS, NOTIFY_SOCKET_PATH, userRoom, type NotifyClientEvents, type NotifyServerEvents } from '@barwright/contracts';
 import type { Db } from '../database/database';
 import { findUserById } from '../auth/users';
@@ -17,7 +17,12 @@ export interface NotifyGatewayDeps {
   origins?: ReadonlySet<string>;
   limits?: Partial<RealtimeLimits>;
   log?: (error: unknown) => void;
+  /** Several instances: the Redis adapter, so rooms (a user's, a session's) and disconnections reach every instance. */
+  adapter?: ServerOptions['adapter'];
 }
+
+/** The room of the sockets opened with one HTTP session (signing out ends them on every instance). */
+export const sessionRoom = (sessionId: string) => `session:${sessionId}`;
 
 /** The signed-in user of a handshake request, read with the app's own session parser (the moderation socket uses it too). */
 export function sessionUser(parser: RequestHandler, req: IncomingMessage): Promise<string | undefined> {
@@ -70,6 +75,7 @@ export class NotifyGateway {
       destroyUpgrade: false,
       maxHttpBufferSize: this.limits.notifyMaxMessageBytes,
       allowRequest: (req, callback) => callback(null, !origins || originAllowed(req, origins)),
+      ...(deps.adapter ? { adapter: deps.adapter } : {}),
     });
     this.io.use((socket, next) => {
       void this.authenticate(socket.request)
@@ -91,6 +97,7 @@ export class NotifyGateway {
       // Clients send nothing here (reading is done through REST): one that does is dropped.
       socket.onAny(() => socket.disconnect(true));
       void socket.join(userRoom(userId));
+      if (socket.data.sessionId) void socket.join(sessionRoom(socket.data.sessionId));
       void unreadCount(deps.db, userId).then((n) => socket.emit('notification:unread', n), this.log);
     });
     deps.events.on('created', ({ userId, notification, unread }) => this.io.to(userRoom(userId)).emit('notification:new', notification, unread));
@@ -116,7 +123,7 @@ export class NotifyGateway {
 
   /** Ends the sockets opened with one session (signed out). */
   disconnectSession(sessionId: string): void {
-    for (const socket of this.io.sockets.sockets.values()) if (socket.data.sessionId === sessionId) socket.disconnect(true);
+    this.io.in(sessionRoom(sessionId)).disconnectSockets(true);
   }
 
   /** Ends every socket; the HTTP server itself is main.ts's to close (io.close() would close it too). */

@@ -13,6 +13,7 @@ import { boardRoleOf, type BoardAccessEvents } from '../boards/board-access';
 import { findDesign } from '../designs/designs-service';
 import { originAllowed } from './allowed-origins';
 import { DesignDocStore } from './design-doc-store';
+import type { CloseMatch, ControlMessage, RedisRelay } from './redis-relay';
 import { CLIENT_IDS_PER_SOCKET, stampPresence } from './presence-stamp';
 import { DEFAULT_REALTIME_LIMITS, TokenBucket, type RealtimeLimits } from './realtime-limits';
 import { UpdateCheck } from './update-check';
@@ -50,6 +51,10 @@ export interface CollabGatewayDeps {
   log?: (error: unknown) => void;
   /** Stored rows per design above which the background compaction merges them. */
   compactAbove?: number;
+  /** The store shared with the app (its append listener feeds the relay); omitted: one of the gateway's own. */
+  store?: DesignDocStore;
+  /** Several instances: updates, presence, role changes and closings cross to the others through Redis. */
+  relay?: RedisRelay;
 }
 
 /** What a y-websocket message carries: a sync step 1, an update (sync step 2 or update), presence, or something else. */
@@ -89,18 +94,24 @@ export class CollabGateway {
   private readonly connections = new Set<Connection>();
   private readonly checks = new WeakMap<Y.Doc, UpdateCheck>();
   private readonly timer: NodeJS.Timeout;
+  /** Each socket's messages, handled one after another (stored, then applied); drain() waits for the last. */
+  private readonly received = new WeakMap<Connection, Promise<void>>();
 
   constructor(private readonly deps: CollabGatewayDeps) {
     this.limits = { ...DEFAULT_REALTIME_LIMITS, ...deps.limits };
     this.wss = new WebSocketServer({ noServer: true, maxPayload: this.limits.maxFrameBytes });
-    this.store = new DesignDocStore(deps.db, (message) => this.log(new Error(message)));
+    this.store = deps.store ?? new DesignDocStore(deps.db, (message) => this.log(new Error(message)));
     const store = this.store;
+    const relay = deps.relay;
     setPersistence({
       provider: store,
       // The library calls this without awaiting or catching: every error is handled here.
       bindState: (designId: string, doc: WSSharedDoc) => {
         const loaded = (async () => {
-          Y.applyUpdate(doc, await store.loadUpdate(designId), 'storage');
+          await relay?.follow(designId, doc); // subscribed before the load, so no update falls between
+          const { update, lastSeq } = await store.loadAfter(designId, 0);
+          Y.applyUpdate(doc, update, 'storage');
+          relay?.loaded(designId, doc, lastSeq);
           this.checks.set(doc, new UpdateCheck(doc));
         })();
         doc.whenInitialized = loaded;
@@ -110,11 +121,16 @@ export class CollabGateway {
         });
       },
       writeState: async (designId: string, doc: WSSharedDoc) => {
+        await relay?.unfollow(designId, doc);
         this.checks.get(doc)?.dispose();
         await store.compact(designId).catch(this.log);
       },
     });
-    deps.accessEvents.on('changed', ({ boardId, userId }) => void this.recheck(boardId, userId).catch(this.log));
+    deps.accessEvents.on('changed', ({ boardId, userId }) => {
+      relay?.publishControl({ kind: 'access', boardId, userId });
+      void this.recheck(boardId, userId).catch(this.log);
+    });
+    void relay?.onControl((message) => this.control(message)).catch(this.log);
     this.timer = setInterval(() => void this.compactBusyDocs(), 60_000);
     this.timer.unref();
   }
@@ -177,15 +193,15 @@ export class CollabGateway {
     this.dropWhenSlow(ws);
     // y-websocket registers its own 'message' listener; ours runs first, stores the update, then hands it on in order.
     const original = ws.on.bind(ws);
-    let relay: ((data: RawData | Uint8Array) => void) | undefined;
+    let handOn: ((data: RawData | Uint8Array) => void) | undefined;
     (ws as unknown as { on: typeof ws.on }).on = ((event: string, listener: (...args: unknown[]) => void) =>
-      event === 'message' ? ((relay = listener as never), ws) : original(event as never, listener as never)) as typeof ws.on;
+      event === 'message' ? ((handOn = listener as never), ws) : original(event as never, listener as never)) as typeof ws.on;
     setupWSConnection(ws, req, { docName: conn.designId });
     ws.on = original as typeof ws.on;
     const doc = docs.get(conn.designId)!;
-    let queue = Promise.resolve();
+    this.received.set(conn, Promise.resolve());
     original('message', (data: RawData) => {
-      queue = queue.then(() => this.receive(conn, doc, data, relay)).catch(this.log);
+      this.received.set(conn, this.received.get(conn)!.then(() => this.receive(conn, doc, data, handOn)).catch(this.log));
     });
   }
 
@@ -201,7 +217,7 @@ export class CollabGateway {
     };
   }
 
-  private async receive(conn: Connection, doc: WSSharedDoc, data: RawData, relay?: (data: RawData | Uint8Array) => void) {
+  private async receive(conn: Connection, doc: WSSharedDoc, data: RawData, handOn?: (data: RawData | Uint8Array) => void) {
     if (conn.ws.readyState !== conn.ws.OPEN) return;
     const bytes = new Uint8Array(data as ArrayBuffer);
     let message: ReturnType<typeof readMessage>;
@@ -210,7 +226,7 @@ export class CollabGateway {
     } catch {
       return conn.ws.close(CLOSE_CODES.invalidUpdate, 'a message that does not decode');
     }
-    if (message.kind === 'awareness') return this.receivePresence(conn, doc, message.update, relay);
+    if (message.kind === 'awareness') return this.receivePresence(conn, doc, message.update, handOn);
     if (message.kind === 'other') return;
     if (message.kind === 'update') {
       if (!conn.updates.take()) return conn.ws.close(CLOSE_CODES.rateLimited, 'too many updates: slow down');
@@ -229,11 +245,11 @@ export class CollabGateway {
         });
       }
     } else await doc.whenInitialized; // sync step 1: answered from the loaded document
-    relay?.(data);
+    handOn?.(data);
   }
 
   /** Presence: rate-limited and size-limited (excess dropped), stamped with the account, own client ids only. */
-  private receivePresence(conn: Connection, doc: WSSharedDoc, update: Uint8Array, relay?: (data: Uint8Array) => void) {
+  private receivePresence(conn: Connection, doc: WSSharedDoc, update: Uint8Array, handOn?: (data: Uint8Array) => void) {
     if (update.length > this.limits.maxAwarenessBytes || !conn.awareness.take()) return;
     const owners = [...this.connections].filter((c) => c !== conn && c.designId === conn.designId);
     const owns = (clientId: number) => {
@@ -243,7 +259,7 @@ export class CollabGateway {
       return true;
     };
     const stamped = stampPresence(update, conn, owns);
-    if (stamped) relay?.(awarenessMessage(stamped));
+    if (stamped) handOn?.(awarenessMessage(stamped));
   }
 
   private async recheck(boardId: string, userId?: string) {
@@ -258,7 +274,23 @@ export class CollabGateway {
     }
   }
 
-  /** Closes every socket of a design (deleted), of a user (suspended, password reset) or of a session (signed out). */
+  /** Closes the matching sockets on every instance: of a design (deleted), a user (suspended, password reset), a session (signed out). */
+  closeEverywhere(match: CloseMatch, code: number, reason: string) {
+    this.deps.relay?.publishControl({ kind: 'close', match, code, reason });
+    this.closeMatching(match, code, reason);
+  }
+
+  private closeMatching(match: CloseMatch, code: number, reason: string) {
+    this.closeWhere((c) => (!match.designId || c.designId === match.designId) && (!match.userId || c.userId === match.userId) && (!match.sessionId || c.sessionId === match.sessionId), code, reason);
+  }
+
+  /** Work asked by another instance. */
+  private control(message: ControlMessage) {
+    if (message.kind === 'access') void this.recheck(message.boardId, message.userId).catch(this.log);
+    else if (message.match.designId || message.match.userId || message.match.sessionId) this.closeMatching(message.match, message.code, message.reason);
+  }
+
+  /** Closes this instance's sockets of a design, a user or a session (closeEverywhere reaches the other instances too). */
   closeWhere(match: (c: { designId: string; userId: string; boardId: string; sessionId: string }) => boolean, code: number, reason: string) {
     for (const conn of this.connections) if (match(conn)) conn.ws.close(code, reason);
   }
@@ -268,8 +300,31 @@ export class CollabGateway {
     for (const id of ids) await this.store.compact(id).catch(this.log);
   }
 
+  /**
+   * Shutdown, before close(): every socket is closed with `code` (a client reconnects, to another
+   * instance behind the balancer), and the updates already received are stored. A socket that does
+   * not finish the closing handshake within `timeoutMs` is cut.
+   */
+  async drain(code: number, reason: string, timeoutMs = 3_000): Promise<void> {
+    await Promise.all(
+      [...this.connections].map(async (conn) => {
+        await new Promise<void>((resolve) => {
+          if (conn.ws.readyState === conn.ws.CLOSED) return resolve();
+          const timer = setTimeout(() => conn.ws.terminate(), timeoutMs);
+          conn.ws.once('close', () => {
+            clearTimeout(timer);
+            resolve();
+          });
+          conn.ws.close(code, reason);
+        });
+        await this.received.get(conn);
+      }),
+    );
+  }
+
   async close(): Promise<void> {
     clearInterval(this.timer);
+    await this.deps.relay?.close();
     for (const conn of this.connections) conn.ws.terminate();
     await new Promise<void>((resolve) => this.wss.close(() => resolve()));
   }

@@ -1,7 +1,11 @@
 import * as Y from 'yjs';
-import { asc, count, eq, and, inArray, sql } from 'drizzle-orm';
+import { asc, count, eq, and, gt, sql } from 'drizzle-orm';
 import { designUpdates } from '../../../../db/schema';
 import type { Db } from '../database/database';
+import { ADVISORY_LOCKS, tryAdvisoryXactLock } from '../database/advisory-locks';
+
+/** Told of every stored update with its row's sequence number (the cross-instance relay publishes it). */
+export type AppendListener = (designId: string, seq: number, update: Uint8Array) => void;
 
 /**
  * The stored form of the design documents: every Yjs update as it arrived, appended in order, and
@@ -12,21 +16,35 @@ export class DesignDocStore {
   constructor(
     private readonly db: Db,
     private readonly report: (message: string) => void = (message) => console.error(`[barwright] ${message}`),
+    private readonly appended?: AppendListener,
   ) {}
 
-  async append(designId: string, update: Uint8Array): Promise<void> {
-    await this.db.insert(designUpdates).values({ designId, update });
+  /** Stores an update; returns its row's sequence number once it is on disk (and tells the listener). */
+  async append(designId: string, update: Uint8Array): Promise<number> {
+    const [{ seq }] = await this.db.insert(designUpdates).values({ designId, update }).returning({ seq: designUpdates.seq });
+    this.appended?.(designId, seq, update);
+    return seq;
   }
 
   /** All stored updates merged into one (an empty update when none); rows that do not decode are skipped and reported. */
   async loadUpdate(designId: string): Promise<Uint8Array> {
+    return (await this.loadAfter(designId, 0)).update;
+  }
+
+  /**
+   * The stored rows with a sequence number above `after`, merged, and the highest sequence number
+   * read (`after` when none). Compaction replaces rows by one with a higher number, so rows above
+   * `after` always hold every update stored after the row `after`.
+   */
+  async loadAfter(designId: string, after: number): Promise<{ update: Uint8Array; lastSeq: number }> {
     const rows = await this.db
       .select({ seq: designUpdates.seq, update: designUpdates.update })
       .from(designUpdates)
-      .where(eq(designUpdates.designId, designId))
+      .where(and(eq(designUpdates.designId, designId), gt(designUpdates.seq, after)))
       .orderBy(asc(designUpdates.seq));
     const good = this.decodable(designId, rows);
-    return good.length === 1 ? good[0].update : Y.mergeUpdates(good.map((r) => r.update));
+    const lastSeq = rows.length ? rows[rows.length - 1].seq : after;
+    return { update: good.length === 1 ? good[0].update : Y.mergeUpdates(good.map((r) => r.update)), lastSeq };
   }
 
   /** A fresh Y.Doc holding the stored state (for reads outside a live session). */
@@ -62,11 +80,15 @@ export class DesignDocStore {
   }
 
   /**
-   * Replaces the rows up to the newest one read with their merge, in one transaction, so rows
-   * appended meanwhile stay as they are and nothing is lost if the process dies half-way.
+   * Replaces the rows read with their merge, in one transaction, so nothing is lost if the process
+   * dies half-way. It deletes exactly the rows it merged (seq = ANY), never "up to the newest read":
+   * a row whose insert began earlier but committed after the read has a lower number than the newest
+   * read and must stay. One compaction per design at a time, across instances (an advisory lock;
+   * a second one meanwhile does nothing).
    */
   async compact(designId: string): Promise<{ before: number; after: number }> {
     return this.db.transaction(async (tx) => {
+      if (!(await tryAdvisoryXactLock(tx, ADVISORY_LOCKS.compaction, designId))) return { before: 0, after: 0 };
       const rows = await tx
         .select({ seq: designUpdates.seq, update: designUpdates.update, merged: designUpdates.merged })
         .from(designUpdates)
@@ -76,7 +98,9 @@ export class DesignDocStore {
       const good = this.decodable(designId, rows); // a row that does not decode stays as it is, for inspection
       const merged = Y.mergeUpdates(good.map((r) => r.update));
       const total = good.reduce((s, r) => s + r.merged, 0);
-      await tx.delete(designUpdates).where(and(eq(designUpdates.designId, designId), inArray(designUpdates.seq, good.map((r) => r.seq))));
+      // One array parameter, not one per row (PostgreSQL takes at most 65 535 bind parameters).
+      const seqs = `{${good.map((r) => r.seq).join(',')}}`;
+      await tx.delete(designUpdates).where(and(eq(designUpdates.designId, designId), sql`${designUpdates.seq} = ANY(${seqs}::bigint[])`));
       await tx.insert(designUpdates).values({ designId, update: merged, merged: total });
       return { before: rows.length, after: 1 + rows.length - good.length };
     });

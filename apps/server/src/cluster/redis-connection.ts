@@ -1,0 +1,53 @@
+import { createClient } from 'redis';
+
+/** Reconnects by itself, backing off to 2 s. */
+const connectTo = (url: string) =>
+  createClient({ url, socket: { reconnectStrategy: (retries: number) => Math.min(100 * 2 ** retries, 2000), connectTimeout: 5000 } });
+
+export type RedisClient = ReturnType<typeof connectTo>;
+
+/** The Redis connections of one instance: one for commands and PUBLISH, one subscribed. */
+export interface RedisConnection {
+  client: RedisClient;
+  /** In subscriber mode (it takes SUBSCRIBE/UNSUBSCRIBE only). */
+  subscriber: RedisClient;
+  /** Listeners called each time the subscriber is ready again after losing its connection (resubscribed by then). */
+  onResubscribed(listener: () => void): void;
+  close(): Promise<void>;
+}
+
+/**
+ * Connects to REDIS_URL. Both connections reconnect on their own (backing off to 2 s) and queue
+ * commands meanwhile, so a PUBLISH during a Redis restart is sent late, not lost; node-redis
+ * resubscribes before it reports the subscriber ready again. A first connection that fails stops the start.
+ */
+export async function openRedis(url: string, log: (line: string) => void): Promise<RedisConnection> {
+  const client = connectTo(url);
+  const subscriber = connectTo(url);
+  const listeners: (() => void)[] = [];
+  const watch = (c: RedisClient, name: 'commands' | 'subscriber') => {
+    let lost = false;
+    // Unheard, an 'error' event would end the process; the client reconnects by itself.
+    c.on('error', (error: Error) => {
+      if (!lost) log(`redis (${name}): ${error.message}; reconnecting`);
+      lost = true;
+    });
+    c.on('ready', () => {
+      if (!lost) return;
+      lost = false;
+      log(`redis (${name}): connected again`);
+      if (name === 'subscriber') for (const l of listeners) l();
+    });
+  };
+  watch(client, 'commands');
+  watch(subscriber, 'subscriber');
+  await Promise.all([client.connect(), subscriber.connect()]);
+  return {
+    client,
+    subscriber,
+    onResubscribed: (listener) => void listeners.push(listener),
+    close: async () => {
+      await Promise.all([client.close(), subscriber.close()].map((p) => p.catch(() => {})));
+    },
+  };
+}

@@ -1,0 +1,22 @@
+import { sql } from 'drizzle-orm';
+import type { Db } from './database';
+
+/**
+ * First keys of the PostgreSQL advisory locks that make work happen once across instances
+ * (pg_advisory_lock(key, 0) or pg_advisory_xact_lock(key, hashtext(id))). PGlite takes them too,
+ * trivially: it has one connection.
+ */
+export const ADVISORY_LOCKS = {
+  /** Held while the migrations run: instances starting together wait for the first. */
+  migrations: 7401,
+  /** With the member (hashtext of the user id): one digest at a time per member. */
+  digest: 7402,
+  /** With the design (hashtext of the design id): one compaction at a time per design. */
+  compaction: 7403,
+} as const;
+
+/** Takes the transaction-scoped lock (key, hashtext(id)) if free; false when another transaction holds it. */
+export async function tryAdvisoryXactLock(tx: Pick<Db, 'execute'>, key: number, id: string): Promise<boolean> {
+  const result = (await tx.execute(sql`select pg_try_advisory_xact_lock(${key}, hashtext(${id})) as locked`)) as unknown as { rows: { locked: boolean }[] };
+  return result.rows[0]?.locked === true;
+}
