@@ -1,6 +1,7 @@
 import express from 'express';
 import session from 'express-session';
 import type { ClientConfig, Health } from '@barwright/contracts';
+import { healthRouter, type ReadinessCheck } from './http/health-router';
 import type { Db } from './database/database';
 import { adminRouter } from './admin/admin-router';
 import { authRouter } from './auth/auth-router';
@@ -74,6 +75,9 @@ export interface AppDeps {
   /** Moderation: shared with the moderation socket gateway (queue counts, roles removed); lower limits for tests. */
   moderationEvents?: ModerationEvents;
   moderationLimits?: Partial<ModerationLimits>;
+  /** Readiness probes besides the database's (`redis`), and whether shutdown has begun: see http/health-router.ts. */
+  readinessChecks?: Record<string, ReadinessCheck>;
+  isDraining?: () => boolean;
   /** Runs engine work off the request thread; main.ts (or the test) creates and closes it. */
   compute: ComputePool;
 }
@@ -127,9 +131,7 @@ export function createApp(deps: AppDeps): express.Express {
   api.get('/openapi.json', (_req, res) => {
     res.json(openapi);
   });
-  api.get('/health', (_req, res) => {
-    res.json({ status: 'ok', database: deps.databaseKind } satisfies Health);
-  });
+  api.use(healthRouter({ db: deps.db, databaseKind: deps.databaseKind, readinessChecks: deps.readinessChecks, isDraining: deps.isDraining }));
   api.use(sessionParser);
   api.use((req, _res, next) => {
     // The absolute timeout: a session older than this ends however active it is.

@@ -1,5 +1,6 @@
 import http from 'node:http';
 import { createApp, type AppLocals } from './app';
+import { closeHttpServer } from './http/graceful-close';
 import { ComputePool } from './compute/compute-pool';
 import { BoardAccessEvents } from './boards/board-access';
 import { CLOSE_CODES } from '@barwright/contracts';
@@ -24,6 +25,10 @@ import { DesignDocStore } from './realtime/design-doc-store';
 import { RedisRelay } from './realtime/redis-relay';
 
 const log = (line: string) => console.log(`[barwright] ${line}`);
+
+/** Shutdown: how long requests in flight may take to finish, and the whole sequence at most. */
+const HTTP_DRAIN_MS = 10_000;
+const SHUTDOWN_DEADLINE_MS = 20_000;
 
 /** The only file that starts things: config, database, mail, HTTP; and stops them on SIGINT/SIGTERM. */
 async function main() {
@@ -52,6 +57,7 @@ async function main() {
   const notificationEvents = new NotificationEvents();
   const sessionSecret = sessionSecretFor(config);
   const compute = new ComputePool();
+  const lifecycle = { draining: false };
   const app = createApp({
     accessEvents,
     closeDesignSockets: (designId) => gateway?.closeEverywhere({ designId }, CLOSE_CODES.forbidden, 'design deleted'),
@@ -75,6 +81,8 @@ async function main() {
     demo: config.demoData,
     notificationEvents,
     photoStorage,
+    isDraining: () => lifecycle.draining,
+    readinessChecks: redis && { redis: () => redis.client.ping() },
     compute,
     designDocStore,
     trustProxy: config.trustProxy,
@@ -102,23 +110,33 @@ async function main() {
   }
   log(`ready in ${ms} ms at ${config.publicUrl}`);
 
-  let stopping = false;
+  // Draining: readiness answers 503 at once; no new connection is accepted; sockets close with
+  // "going away" (clients reconnect, to another instance); requests and updates in flight are
+  // stored; then Redis and the database close. Past SHUTDOWN_DEADLINE_MS the process exits regardless.
   const stop = async (signal: string) => {
-    if (stopping) return;
-    stopping = true;
-    log(`${signal}: shutting down`);
-    await gateway?.close();
+    if (lifecycle.draining) return;
+    lifecycle.draining = true;
+    log(`${signal}: draining`);
+    setTimeout(() => {
+      console.error(`[barwright] shutdown took longer than ${SHUTDOWN_DEADLINE_MS} ms; exiting`);
+      process.exit(1);
+    }, SHUTDOWN_DEADLINE_MS).unref();
     clearInterval(digests);
+    const httpClosed = closeHttpServer(server, HTTP_DRAIN_MS);
+    notify?.io.engine.close(); // transports closed, so socket.io clients reconnect (a server-side disconnect would be final)
+    await gateway?.drain(CLOSE_CODES.goingAway, 'server going away');
     moderation?.close();
     notify?.close();
+    await gateway?.close();
+    await httpClosed;
     await redis?.close();
-    server.closeAllConnections();
-    await new Promise<void>((resolve) => server.close(() => resolve()));
-    mailer.close();
     await compute.close();
+    mailer.close();
     await localSmtp?.close();
+    photoStorage.close?.();
     await database.close();
     release();
+    log('stopped');
     process.exit(0);
   };
   process.on('SIGINT', () => void stop('SIGINT'));

@@ -10,6 +10,8 @@ export interface ApiErrorBody {
 
 /** Close codes of the realtime sockets (4000–4999 are free for applications, RFC 6455 §7.4.2). */
 export const CLOSE_CODES = {
+  /** The server is shutting down (RFC 6455 §7.4.1, "going away"): the client reconnects, to another instance. */
+  goingAway: 1001,
   unauthorized: 4401,
   forbidden: 4403,
   /** Your role on the board changed: the client reconnects and reads its new role. */

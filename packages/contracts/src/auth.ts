@@ -95,6 +95,12 @@ export type MailboxMessage = z.infer<typeof mailboxMessageSchema>;
 /** `GET /api/health`. */
 export const healthSchema = z.object({ status: z.literal('ok'), database: z.enum(['pglite', 'postgres']) });
 export type Health = z.infer<typeof healthSchema>;
+/** `GET /api/health/ready`: 200 `ready` when every dependency answers; 503 `unavailable` or, while shutting down, `draining`. */
+export const readinessSchema = z.object({
+  status: z.enum(['ready', 'unavailable', 'draining']),
+  checks: z.record(z.string(), z.object({ ok: z.boolean(), ms: z.number(), error: z.string().optional() })),
+});
+export type Readiness = z.infer<typeof readinessSchema>;
 
 /** `GET /api/config`: what the web app needs to know about the server it talks to. */
 export const clientConfigSchema = z.object({ localMail: z.boolean(), demo: z.boolean() });

@@ -19,7 +19,8 @@ export interface Database {
   close(): Promise<void>;
 }
 
-export const MIGRATIONS_FOLDER = fileURLToPath(new URL('../../../../db/migrations', import.meta.url));
+// The repository's db/migrations under tsx; the copy beside the bundle in a build (dist/server/migrations).
+export const MIGRATIONS_FOLDER = fileURLToPath(new URL(import.meta.url.endsWith('.ts') ? '../../../../db/migrations' : './migrations', import.meta.url));
 
 export type DatabaseTarget =
   | { kind: 'pglite'; dataDir?: string } // no dataDir: in memory

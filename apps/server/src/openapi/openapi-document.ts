@@ -30,7 +30,8 @@ const ok = z.object({ ok: z.literal(true) });
 const id = z.object({ id: z.string() });
 
 export const ROUTES: Route[] = [
-  { method: 'get', path: '/api/health', summary: 'Server and database health', tag: 'system', answer: c.healthSchema },
+  { method: 'get', path: '/api/health', summary: 'Liveness: the process answers (touches nothing else)', tag: 'system', answer: c.healthSchema },
+  { method: 'get', path: '/api/health/ready', summary: 'Readiness: the database (and Redis when configured) answer; 503 when not, or while shutting down', tag: 'system', answer: c.readinessSchema },
   { method: 'get', path: '/api/config', summary: 'What the web app needs to know about this server', tag: 'system', answer: c.clientConfigSchema },
   { method: 'get', path: '/api/openapi.json', summary: 'This document', tag: 'system' },
   { method: 'post', path: '/api/auth/sign-up', summary: 'Create an account; sends the verification mail', tag: 'accounts', body: c.signUpBody, answer: ok, status: 201 },
