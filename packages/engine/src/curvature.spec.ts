@@ -71,7 +71,7 @@ describe('detail lost between cutter and follower', () => {
     expect(crest[0].message).toMatch(/rounds a crest/);
     expect(spansPhase(crest[0], 0)).toBe(true);
     const small = computeProfile(design({ cutter: 1, follower: 0.2 }), { step: P / 1000 }).warnings;
-    expect(small.map((w) => w.code).sort()).toEqual(['detail-lost-cutter', 'detail-lost-follower']);
+    expect(small.map((w) => w.code).sort()).toEqual(['detail-lost-cutter', 'detail-lost-follower', 'follower-radius']);
     expect(spansPhase(small.find((w) => w.code === 'detail-lost-cutter')!, 0.5)).toBe(true);
     // a follower as large as the cutter reads those valleys back exactly
     expect(computeProfile(design({ cutter: 0.25, follower: 0.25 }), { step: P / 1000 }).warnings).toEqual([]);

@@ -117,17 +117,19 @@ function describe(zone: Zone, input: DetailLossInput, kind: 'crest' | 'bridged' 
   const radius = Math.abs(graphCurvatureRadius(input.cutter, zone.worst, input.step));
   const len = (mm: number) => formatLength(mm, input.units);
   const where = `at x ${formatLengthRange(at.xFrom, at.xTo, input.units)}${repeats ? `, and every ${len(input.period)} along the bar` : ''}`;
-  const shape = `radius of curvature ${len(radius)}`;
+  // A radius is named only where it explains the loss: finite, and (at a crest) tighter than the cutter.
+  const named = Number.isFinite(radius) && (kind !== 'crest' || radius < input.cutterRadius);
+  const shape = named ? ` (radius of curvature ${len(radius)})` : '';
   const rc = len(input.cutterRadius);
   const rf = len(input.followerRadius);
   if (kind === 'crest') {
-    const message = `The follower rounds a crest of the bar ${where}: the cutter path's crest (${shape}) is narrower than the cutter (radius ${rc}), and the engraved line loses ${len(amount)} there.`;
+    const message = `The follower rounds a crest of the bar ${where}: the cutter path's crest${shape} is narrower than the cutter (radius ${rc}), and the engraved line loses ${len(amount)} there.`;
     return { code: 'detail-lost-follower', message, at, amount };
   }
   if (kind === 'bridged') {
     const message = `The follower (radius ${rf}) cannot reach the bottom of a bar valley ${where}: the engraved line misses ${len(amount)} of its depth.`;
     return { code: 'detail-lost-follower', message, at, amount };
   }
-  const message = `A valley of the cutter path ${where} (${shape}) is narrower than the cutter (radius ${rc}) cuts for a follower of radius ${rf}: the engraved line reads it blunter, by up to ${len(amount)}.`;
+  const message = `A valley of the cutter path ${where}${shape} is narrower than the cutter (radius ${rc}) cuts for a follower of radius ${rf}: the engraved line reads it blunter, by up to ${len(amount)}.`;
   return { code: 'detail-lost-cutter', message, at, amount };
 }

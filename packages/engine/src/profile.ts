@@ -4,10 +4,12 @@ import { barGrid, coarseSamplingWarning, nodeX, type BarGrid } from './bar-grid'
 import { crestCurvature, type CrestCurvature } from './crest-curvature';
 import { cutterPlacement, placeCutter, placementMargin } from './cutter-placement';
 import { detailLossWarnings } from './detail-loss';
+import { followerRadiusWarnings } from './engraving-check';
 import { followerAt, followerPath } from './follower';
 import { rubberAt, trackRubber } from './rubber-track';
 import type { EngineWarning, Point, Profile } from './types';
 import { toMm } from './units';
+import { summarizeWarnings } from './warning-summary';
 
 export type Companion = 'counter-phase' | 'inverted' | 'opposite';
 export const COMPANIONS: readonly Companion[] = ['counter-phase', 'inverted', 'opposite'];
@@ -118,7 +120,9 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
     ...{ period: grid.period, units: design.units },
   });
   const coarse = options.step === undefined ? coarseSamplingWarning(grid, design.units) : undefined;
-  const warnings = [...(coarse ? [coarse] : []), ...track.warnings, ...loss];
+  const engraving = followerRadiusWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period, units: design.units });
+  const summary = { height: maxOf(cutter) - minOf(cutter), period: grid.period, periodic: lastNode >= grid.perPeriod, length: grid.length, units: design.units };
+  const warnings = summarizeWarnings([...(coarse ? [coarse] : []), ...track.warnings, ...loss, ...engraving], summary);
   if (opposite) turnOver(cutter, bar, follower);
   const onePeriod = track.s.subarray(-track.first, -track.first + Math.min(grid.perPeriod, lastNode + 1));
   const crest = crestCurvature({ design: d, s: onePeriod, dTheta: grid.dTheta, step: h, inverted: options.companion !== undefined && options.companion !== 'counter-phase' });

@@ -9,13 +9,15 @@ export type WarningCode =
   | 'cusp-rounded' // the rubber rounds a sharp rosette crest or cusp
   | 'detail-lost-cutter' // a bar valley is narrower than the cutter can reach
   | 'detail-lost-follower' // the follower rounds a crest of the bar
+  | 'follower-radius' // a follower of another radius than the cutter engraves another shape than the cutter path
   | 'pass-too-deep'
   | 'rubbing'
   | 'cutter-off-centre'
   | 'other';
 
 /**
- * A warning with where it applies (x range on the bar, mm) and by how much (mm). `at` and `amount`
+ * A warning with where it applies (x range on the bar, mm: the worst place) and by how much (mm). A
+ * profile gives one warning per code, with how many places and the first. `at` and `amount`
  * are always mm, as every number in a result; the `message` is written in the design file's units.
  */
 export interface EngineWarning {
@@ -23,6 +25,12 @@ export interface EngineWarning {
   message: string;
   at?: { xFrom: number; xTo: number };
   amount?: number;
+  /** How many such places: in each period when the message says "every … along the bar", else along the bar. */
+  count?: number;
+  /** The first such place (mm); `at` is the worst. */
+  first?: { xFrom: number; xTo: number };
+  /** The places (mm, at most 100), for drawing them. */
+  zones?: { xFrom: number; xTo: number }[];
 }
 
 /** The result of `computeProfile`: the three paths sampled on one common x grid. */

@@ -87,14 +87,17 @@ function discsAt(x: number, p: ProfileData) {
 function marksIn(warnings: ProfileData['warnings'], from: number, to: number, sx: number, period: number): ProfileDrawing['marks'] {
   const marks: ProfileDrawing['marks'] = [];
   for (const w of warnings) {
-    if (!w.at || !w.code.startsWith('detail-lost')) continue;
-    const first = Math.max(0, Math.ceil((from - w.at.xTo) / period));
-    for (let k = first; w.at.xFrom + k * period <= to && marks.length < 200; k++) {
-      const a = Math.max(from, w.at.xFrom + k * period);
-      const b = Math.min(to, w.at.xTo + k * period);
-      if (b < a) continue;
-      const width = Math.max(4, (b - a) * sx); // a zone narrower than a few units still shows
-      marks.push({ x: round((a - from) * sx - (width - (b - a) * sx) / 2), width: round(width), title: w.message });
+    if (!w.at || !(w.code.startsWith('detail-lost') || w.code === 'follower-radius')) continue;
+    // One warning per kind lists its places in one period (`zones`); older results gave one place each.
+    for (const zone of w.zones ?? [w.at]) {
+      const first = Math.max(0, Math.ceil((from - zone.xTo) / period));
+      for (let k = first; zone.xFrom + k * period <= to && marks.length < 200; k++) {
+        const a = Math.max(from, zone.xFrom + k * period);
+        const b = Math.min(to, zone.xTo + k * period);
+        if (b < a) continue;
+        const width = Math.max(4, (b - a) * sx); // a zone narrower than a few units still shows
+        marks.push({ x: round((a - from) * sx - (width - (b - a) * sx) / 2), width: round(width), title: w.message });
+      }
     }
   }
   return marks;
