@@ -1,5 +1,6 @@
 import { computed, DestroyRef, inject, Injectable, signal } from '@angular/core';
 import type { Design } from '@barwright/contracts';
+import type { Companion } from '@barwright/engine';
 import type { ComputeReply, ComputeRequest } from './compute-messages';
 import { computeDesignViews, type DesignViews } from './design-views';
 
@@ -22,6 +23,8 @@ export class DesignCompute {
   private readonly sentAt = new Map<number, number>();
   private readonly latency = signal<number | null>(null);
   private slowTimer: ReturnType<typeof setTimeout> | null = null;
+  private readonly companionKind = signal<Companion | null>(null);
+  private lastDesign: Design | null = null;
 
   /** The newest views computed (a preview until the full computation lands). */
   readonly views = computed(() => this.shown()?.views ?? null);
@@ -32,6 +35,8 @@ export class DesignCompute {
   readonly error = this.failure.asReadonly();
   /** From handing the design to the worker to the first views back, ms (the redraw follows in the next frame). */
   readonly lastLatencyMs = this.latency.asReadonly();
+  /** The companion bar the bar view shows beside the design's own (null: none). */
+  readonly companion = this.companionKind.asReadonly();
 
   constructor() {
     this.worker?.addEventListener('message', (event: MessageEvent<ComputeReply>) => this.receive(event.data));
@@ -43,17 +48,25 @@ export class DesignCompute {
 
   /** Asks for the views of `design`; earlier requests still waiting are dropped. */
   request(design: Design): void {
+    this.lastDesign = design;
+    const companion = this.companionKind() ?? undefined;
     const id = ++this.nextId;
     this.requested.set(id);
     this.sentAt.set(id, performance.now());
     if (this.slowTimer) clearTimeout(this.slowTimer);
     this.slowTimer = setTimeout(() => this.slow.set((this.refined()?.id ?? 0) < this.requested()), PROGRESS_AFTER_MS);
     if (this.worker) {
-      this.worker.postMessage({ id, design } satisfies ComputeRequest);
+      this.worker.postMessage({ id, design, companion } satisfies ComputeRequest);
     } else {
       // No worker (an old browser): compute here, after this frame, full stage only.
-      setTimeout(() => this.receive(computeHere(id, design)), 0);
+      setTimeout(() => this.receive(computeHere(id, design, companion)), 0);
     }
+  }
+
+  /** Computes a companion bar with the design from now on (null: none), starting with the current design. */
+  setCompanion(kind: Companion | null): void {
+    this.companionKind.set(kind);
+    if (this.lastDesign) this.request(this.lastDesign);
   }
 
   private receive(reply: ComputeReply): void {
@@ -86,9 +99,9 @@ function createWorker(): Worker | null {
   }
 }
 
-function computeHere(id: number, design: Design): ComputeReply {
+function computeHere(id: number, design: Design, companion?: Companion): ComputeReply {
   try {
-    return { id, views: computeDesignViews(design, 'full') };
+    return { id, views: computeDesignViews(design, 'full', companion) };
   } catch (error) {
     return { id, error: error instanceof Error ? error.message : String(error) };
   }

@@ -31,7 +31,7 @@ async function work(): Promise<void> {
 
 function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
   try {
-    const views = computeDesignViews(request.design, stage);
+    const views = computeDesignViews(request.design, stage, request.companion);
     self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
   } catch (error) {
     self.postMessage({ id, error: error instanceof Error ? error.message : String(error) } satisfies ComputeReply);

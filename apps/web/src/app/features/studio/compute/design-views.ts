@@ -1,5 +1,6 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, planCut, toMm, type CrestCurvature, type CutPlan, type EngineWarning, type Profile } from '@barwright/engine';
+import { computeLineStudy, computeProfile, planCut, toMm, type Companion, type CrestCurvature, type CutPlan, type EngineWarning, type Profile } from '@barwright/engine';
+import { placementViews, type PlacementViews } from './placement-views';
 
 /** How fine to compute: a quick preview (about 200 samples a period) or the engine's own default step. */
 export type ComputeStage = 'preview' | 'full';
@@ -43,12 +44,16 @@ export interface DesignViews {
   study: StudyData;
   /** Only from the full computation (the preview's step is too coarse for depths and warnings). */
   plan: CutPlan | null;
+  /** The companion bar asked for (same x as `profile`), or null. */
+  companion: { kind: Companion; profile: ProfileData } | null;
+  /** The cutter off the centre line or on a rocking arc: the nominal path (before) and the figures, or null. */
+  placement: PlacementViews | null;
   /** Time the engine took, ms. */
   ms: number;
 }
 
 /** Runs the engine on a valid design. Pure apart from reading the clock. */
-export function computeDesignViews(design: Design, stage: ComputeStage): DesignViews {
+export function computeDesignViews(design: Design, stage: ComputeStage, companion?: Companion): DesignViews {
   const started = performance.now();
   const step = stage === 'preview' ? previewStep(design) : undefined;
   const profile = computeProfile(design, step === undefined ? {} : { step });
@@ -57,7 +62,11 @@ export function computeDesignViews(design: Design, stage: ComputeStage): DesignV
   const mm = toMm(design);
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
   const groove = { depth: mm.study.depth, vAngle: mm.study.vAngle };
-  return { stage, profile: { ...profileData(profile), ...sizes }, study: { ...studyData(study), ...groove }, plan, ms: performance.now() - started };
+  const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion })), ...sizes } } : null;
+  return {
+    ...{ stage, profile: { ...profileData(profile), ...sizes }, study: { ...studyData(study), ...groove }, plan },
+    ...{ companion: other, placement: placementViews(design, profile), ms: performance.now() - started },
+  };
 }
 
 /** The preview's step (mm): the period on the bar over PREVIEW_SAMPLES_PER_PERIOD, in the file's units converted to mm. */
@@ -97,5 +106,7 @@ function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'dep
 /** The buffers of a result, handed over to the page without copying. */
 export function transferables(views: DesignViews): ArrayBuffer[] {
   const p = views.profile;
-  return [p.x, p.cutter, p.bar, p.follower, ...views.study.lines].map((a) => a.buffer as ArrayBuffer);
+  const c = views.companion?.profile;
+  const extra = [...(c ? [c.x, c.cutter, c.bar, c.follower] : []), ...(views.placement ? [views.placement.nominal] : [])];
+  return [p.x, p.cutter, p.bar, p.follower, ...views.study.lines, ...extra].map((a) => a.buffer as ArrayBuffer);
 }

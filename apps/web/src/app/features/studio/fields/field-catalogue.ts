@@ -27,13 +27,17 @@ export const FIELDS: Readonly<Record<string, FieldInfo>> = {
   'rosette.layers[].wave.terms[].a': { label: 'Cosine coefficient', kind: 'ratio' },
   'rosette.layers[].wave.terms[].b': { label: 'Sine coefficient', kind: 'ratio' },
   'rosette.layers[].wave.points': { label: 'Measured readings', kind: 'list' },
+  'rosette.layers[].wave.scale': { label: 'Readings taken', kind: 'choice' },
   'rubber.shape': { label: 'Rubber shape', kind: 'choice' },
   'rubber.radius': { label: 'Rubber radius', kind: 'length', slider: [0, 10] },
   'rubber.width': { label: 'Flat rubber width', kind: 'length', slider: [0.5, 30] },
   'motion.travelPerRev': { label: 'Travel per revolution', kind: 'length', slider: [10, 400] },
   'motion.leverRatio': { label: 'Lever ratio', kind: 'ratio', slider: [0.1, 5] },
+  'motion.pivot.kind': { label: 'Headstock motion', kind: 'choice' },
+  'motion.pivot.distance': { label: 'Rocking axis to centre line', kind: 'length', slider: [20, 500] },
   'cutter.diameter': { label: 'End mill diameter', kind: 'length', slider: [0.5, 20] },
   'cutter.flutes': { label: 'Flutes', kind: 'count', slider: [1, 8] },
+  'cutter.offset': { label: 'Off the centre line', kind: 'length', slider: [-5, 5] },
   'bar.length': { label: 'Bar length', kind: 'length', slider: [10, 500] },
   'bar.thickness': { label: 'Bar thickness', kind: 'length', slider: [1, 30] },
   'bar.material': { label: 'Material', kind: 'choice' },
@@ -79,6 +83,16 @@ export const MATERIAL_LABELS: Readonly<Record<MaterialId, string>> = {
   brass: 'Free-machining brass',
   a2: 'A2 tool steel (keeper)',
   custom: 'Custom (own figures)',
+};
+
+export const PIVOT_LABELS: Readonly<Record<'linear' | 'rocking', string>> = {
+  linear: 'Straight line (pumping)',
+  rocking: 'Rocking about an axis',
+};
+
+export const MEASURED_SCALE_LABELS: Readonly<Record<'as-read' | 'to-amplitude', string>> = {
+  'as-read': 'As read (the table’s own rise)',
+  'to-amplitude': 'Scaled to the layer’s amplitude',
 };
 
 export const RUBBER_LABELS: Readonly<Record<'round' | 'flat', string>> = { round: 'Round', flat: 'Flat' };

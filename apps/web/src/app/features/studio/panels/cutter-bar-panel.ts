@@ -10,6 +10,8 @@ import { NumberField } from '../fields/number-field/number-field';
     <div class="fields">
       <bw-number-field path="cutter.diameter" hint="The bar edge is the envelope of this cutter, not a copy of the rosette" />
       <bw-number-field path="cutter.flutes" />
+      <bw-number-field path="cutter.offset" [optional]="true"
+                       hint="Keep 0: feed with the upper slide, never the cross slide. Set it to see what an offset along the bar does" />
       <fieldset class="group">
         <legend class="group-title">Bar blank</legend>
         <bw-number-field path="bar.length" />

@@ -9,12 +9,13 @@ import { WAVE_LABELS } from '../fields/field-catalogue';
 import { NumberField } from '../fields/number-field/number-field';
 import { FourierTerms } from './fourier-terms';
 import { MeasuredReadings } from './measured-readings';
+import { MeasuredScale } from './measured-scale';
 import { newLayer, waveFor } from './shape-defaults';
 
 /** The rosette: base radius and its layers (a compound rosette is the sum of them). */
 @Component({
   selector: 'bw-rosette-panel',
-  imports: [MatButtonModule, MatIconModule, ChoiceField, NumberField, FourierTerms, MeasuredReadings],
+  imports: [MatButtonModule, MatIconModule, ChoiceField, NumberField, FourierTerms, MeasuredReadings, MeasuredScale],
   templateUrl: './rosette-panel.html',
   styleUrl: './panels.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -27,6 +28,11 @@ export class RosettePanel {
   protected readonly layers = computed(() => {
     const layers = valueAt(this.session.design(), 'rosette.layers');
     return Array.isArray(layers) ? layers.map((l) => String((l as { wave?: { shape?: unknown } })?.wave?.shape ?? '')) : [];
+  });
+  /** Per layer: a measured table kept as read, so the amplitude field is not used. */
+  protected readonly asRead = computed(() => {
+    const layers = valueAt(this.session.design(), 'rosette.layers');
+    return Array.isArray(layers) ? layers.map((l) => (l as { wave?: { scale?: unknown } })?.wave?.scale === 'as-read') : [];
   });
   protected readonly layersError = computed(() => this.session.fieldErrors().get('rosette.layers') ?? '');
 

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { CollabSession } from '../collab/collab-session';
 import { ChoiceField, choicesOf } from '../fields/choice-field/choice-field';
 import { valueAt } from '../fields/design-values';
-import { RUBBER_LABELS } from '../fields/field-catalogue';
+import { PIVOT_LABELS, RUBBER_LABELS } from '../fields/field-catalogue';
 import { NumberField } from '../fields/number-field/number-field';
 import { rubberFor } from './shape-defaults';
 
@@ -23,6 +23,11 @@ import { rubberFor } from './shape-defaults';
         <legend class="group-title">Motion</legend>
         <bw-number-field path="motion.leverRatio" hint="Cutter movement per rubber movement" />
         <bw-number-field path="motion.travelPerRev" hint="Bar travel for one turn of the rosette; the period on the bar is this over the lobes" />
+        <bw-choice-field path="motion.pivot.kind" [options]="pivotChoices" (choose)="setPivot($event)" fallback="linear"
+                         hint="A rocking headstock carries the cutter on an arc; a pumping one in a straight line" />
+        @if (pivot() === 'rocking') {
+          <bw-number-field path="motion.pivot.distance" [slider]="false" hint="From the rocking axis to the spindle centre line" />
+        }
       </fieldset>
     </div>
   `,
@@ -33,6 +38,19 @@ export class RubberMotionPanel {
   private readonly session = inject(CollabSession);
   protected readonly rubberChoices = choicesOf(RUBBER_LABELS);
   protected readonly shape = computed(() => valueAt(this.session.design(), 'rubber.shape'));
+  protected readonly pivotChoices = choicesOf(PIVOT_LABELS);
+  /** Linear when the design does not say (the field is optional). */
+  protected readonly pivot = computed(() => (valueAt(this.session.design(), 'motion.pivot.kind') === 'rocking' ? 'rocking' : 'linear'));
+
+  /** Linear motion removes the field (the default); rocking starts 150 mm from the axis, in the design's units. */
+  protected setPivot(kind: string): void {
+    if (kind !== 'rocking') {
+      this.session.clearField(['motion', 'pivot']);
+      return;
+    }
+    const units = valueAt(this.session.design(), 'units') === 'in' ? 'in' : 'mm';
+    this.session.setField(['motion', 'pivot'], { kind: 'rocking', distance: units === 'in' ? 6 : 150 });
+  }
 
   protected setShape(shape: string): void {
     const units = valueAt(this.session.design(), 'units') === 'in' ? 'in' : 'mm';

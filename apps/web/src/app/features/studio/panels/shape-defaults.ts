@@ -6,7 +6,8 @@ const inUnits = (mm: number, units: Units) => cleanNumber(units === 'in' ? mm / 
 
 /**
  * The wave a layer gets when its shape is changed: the new shape's own fields with workable values.
- * A measured table starts as twelve readings of a sine of the layer's amplitude around the base radius.
+ * A measured table starts as twelve readings of a sine of the layer's amplitude around the base radius,
+ * kept as read (a new table is a dial indicator's, not a shape to stretch).
  */
 export function waveFor(shape: WaveShape, layer: { amplitude?: unknown }, baseRadius: unknown): Wave {
   switch (shape) {
@@ -18,7 +19,7 @@ export function waveFor(shape: WaveShape, layer: { amplitude?: unknown }, baseRa
       const r0 = typeof baseRadius === 'number' && baseRadius > 0 ? baseRadius : 50;
       const half = typeof layer.amplitude === 'number' && layer.amplitude > 0 ? layer.amplitude / 2 : 0.5;
       const points = Array.from({ length: 12 }, (_, i): [number, number] => [i * 30, cleanNumber(Number((r0 + half * Math.cos((i * Math.PI) / 6)).toFixed(5)))]);
-      return { shape, points };
+      return { shape, points, scale: 'as-read' };
     }
     default:
       return { shape };

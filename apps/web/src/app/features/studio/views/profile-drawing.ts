@@ -16,6 +16,11 @@ export interface ProfileDrawing {
   barEdge: string;
   cutter: string;
   follower: string;
+  /** The cutter path on the centre line with linear motion (the "before" of a placed cutter), or ''. */
+  nominal: string;
+  /** The opposite blank (above the cutter) as a polygon, and its edge, or ''. */
+  upper: string;
+  upperEdge: string;
   /** The cutter and follower discs at the middle of the window (detail only), viewBox units. */
   discs: { cx: number; cy: number; r: number; kind: 'cutter' | 'follower' }[];
   /** Where the engine reports lost detail, viewBox units. */
@@ -31,18 +36,28 @@ const BUCKETS = 1400;
 /** The whole bar is drawn about this high, as a fraction of its width. */
 const WHOLE_ASPECT = 0.22;
 
+/** What else the drawing may hold: the blank above the cutter (the opposite blank), the nominal cutter path. */
+export interface ProfileExtras {
+  /** The edge of the opposite blank of the same cut (its material above it), on `p.x` (mm). */
+  upper?: Float64Array | null;
+  /** Cutter heights on the centre line with linear motion, on `p.x` (mm). */
+  nominal?: Float64Array | null;
+}
+
 /** The geometry of the bar-profile drawing (pure). */
-export function profileDrawing(p: ProfileData, mode: ProfileMode, warnings = p.warnings): ProfileDrawing {
+export function profileDrawing(p: ProfileData, mode: ProfileMode, warnings = p.warnings, extras: ProfileExtras = {}): ProfileDrawing {
   const [from, to] = mode === 'detail' ? detailWindow(p) : [0, p.barLength];
   const cutter = thinForDrawing(p.x, p.cutter, from, to, BUCKETS);
   const bar = thinForDrawing(p.x, p.bar, from, to, BUCKETS);
   const follower = thinForDrawing(p.x, p.follower, from, to, BUCKETS);
+  const nominal = extras.nominal ? thinForDrawing(p.x, extras.nominal, from, to, BUCKETS) : null;
+  const upper = extras.upper ? thinForDrawing(p.x, extras.upper, from, to, BUCKETS) : null;
   const discs = mode === 'detail' ? discsAt((from + to) / 2, p) : [];
+  const paths = [cutter, follower, ...(nominal ? [nominal] : []), ...(upper ? [upper] : [])];
   let lo = Math.min(...rangeOf(bar), ...discs.map((d) => d.cy - d.r));
-  let hi = Math.max(...rangeOf(cutter), ...rangeOf(follower), ...discs.map((d) => d.cy + d.r));
-  const base = lo - Math.max(0.15 * (hi - lo), 0.2); // some bar below the deepest valley
-  lo = base;
-  hi += 0.08 * (hi - lo);
+  let hi = Math.max(...paths.flatMap(rangeOf), ...discs.map((d) => d.cy + d.r));
+  lo -= Math.max(0.15 * (hi - lo), 0.2); // some bar below the deepest valley
+  hi += upper ? Math.max(0.15 * (hi - lo), 0.2) : 0.08 * (hi - lo); // and some opposite blank above its highest point
   const sx = WIDTH / (to - from);
   const natural = (hi - lo) * sx;
   const exaggeration = mode === 'detail' || natural >= WHOLE_ASPECT * WIDTH ? 1 : niceFactor((WHOLE_ASPECT * WIDTH) / natural);
@@ -59,6 +74,9 @@ export function profileDrawing(p: ProfileData, mode: ProfileMode, warnings = p.w
     barEdge: svgPoints(bar, scale),
     cutter: svgPoints(cutter, scale),
     follower: svgPoints(follower, scale),
+    nominal: nominal ? svgPoints(nominal, scale) : '',
+    upper: upper ? `${svgPoints(upper, scale)} ${WIDTH},0 0,0` : '',
+    upperEdge: upper ? svgPoints(upper, scale) : '',
     discs: discs.map((d) => ({ kind: d.kind, cx: round((d.cx - from) * sx), cy: round((hi - d.cy) * scale.sy), r: round(d.r * sx) })),
     marks: marksIn(warnings, from, to, sx, p.period),
     ticks: ticksFor(from, to, sx),

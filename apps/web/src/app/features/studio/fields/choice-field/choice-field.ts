@@ -50,10 +50,12 @@ export class ChoiceField {
   readonly options = input.required<readonly Choice[]>();
   readonly label = input<string>();
   readonly hint = input<string>();
+  /** Shown while the design leaves an optional choice out (its default). */
+  readonly fallback = input<string>();
   readonly choose = output<string>();
 
   protected readonly shownLabel = computed(() => this.label() ?? FIELDS[catalogueKey(this.path())]?.label ?? this.path());
-  protected readonly value = computed(() => valueAt(this.session.design(), this.path()));
+  protected readonly value = computed(() => valueAt(this.session.design(), this.path()) ?? this.fallback());
   protected readonly error = computed(() => this.session.fieldErrors().get(this.path()) ?? '');
 }
 
