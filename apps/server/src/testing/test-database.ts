@@ -22,6 +22,8 @@ export async function postgresAnswers(): Promise<boolean> {
 export type Driver = 'pglite' | 'postgres';
 
 export interface TestDatabase extends Database {
+  /** The connection string of the PostgreSQL-server database (undefined on PGlite). */
+  url?: string;
   /** Empties every table between tests (cheaper than a new database). */
   reset(): Promise<void>;
 }
@@ -50,6 +52,7 @@ export async function openTestDatabase(driver: Driver): Promise<TestDatabase> {
   const database = await openDatabase(url ? { kind: 'postgres', url } : { kind: 'pglite' });
   return {
     ...database,
+    url,
     reset: async () => {
       await database.db.execute(sql`TRUNCATE users, sessions, account_tokens, boards, board_members, board_invitations, designs, design_updates, design_versions, entries, entry_revisions, design_origins, entry_ratings, comments, photos, notifications, notification_settings, showcase_items, reports, audit_log RESTART IDENTITY CASCADE`);
     },
