@@ -1,8 +1,8 @@
 import { createClient } from 'redis';
 
 /** Reconnects by itself, backing off to 2 s. */
-const connectTo = (url: string) =>
-  createClient({ url, socket: { reconnectStrategy: (retries: number) => Math.min(100 * 2 ** retries, 2000), connectTimeout: 5000 } });
+const connectTo = (url: string, name?: string) =>
+  createClient({ url, name, socket: { reconnectStrategy: (retries: number) => Math.min(100 * 2 ** retries, 2000), connectTimeout: 5000 } });
 
 export type RedisClient = ReturnType<typeof connectTo>;
 
@@ -21,9 +21,10 @@ export interface RedisConnection {
  * commands meanwhile, so a PUBLISH during a Redis restart is sent late, not lost; node-redis
  * resubscribes before it reports the subscriber ready again. A first connection that fails stops the start.
  */
-export async function openRedis(url: string, log: (line: string) => void): Promise<RedisConnection> {
-  const client = connectTo(url);
-  const subscriber = connectTo(url);
+export async function openRedis(url: string, log: (line: string) => void, name = `barwright-${process.pid}`): Promise<RedisConnection> {
+  // Named (CLIENT LIST shows them), so an operator, or a test, can tell the connections apart.
+  const client = connectTo(url, `${name}-commands`);
+  const subscriber = connectTo(url, `${name}-subscriber`);
   const listeners: (() => void)[] = [];
   const watch = (c: RedisClient, name: 'commands' | 'subscriber') => {
     let lost = false;
