@@ -20,6 +20,10 @@ export type Units = z.infer<typeof unitsSchema>;
 const finite = z.number({ error: 'must be a number' }).finite('must be a finite number');
 const positive = finite.positive('must be greater than 0');
 const nonNegative = finite.min(0, 'must not be negative');
+/** A phase, a fraction of a lobe or of the bar's period, taken modulo 1: ±1 000 000 is more turns than any shop means. */
+const phaseValue = finite.min(-1e6, 'must be between -1000000 and 1000000').max(1e6, 'must be between -1000000 and 1000000');
+/** A Fourier coefficient: a relative weight, so ±1 000 000 leaves room for any ratio a shop means (and no overflow). */
+const coefficient = finite.min(-1e6, 'must be between -1000000 and 1000000').max(1e6, 'must be between -1000000 and 1000000');
 
 const waveSchema = z.discriminatedUnion('shape', [
   z.strictObject({ shape: z.literal('sine') }),
@@ -30,7 +34,7 @@ const waveSchema = z.discriminatedUnion('shape', [
   z.strictObject({
     shape: z.literal('fourier'),
     terms: z
-      .array(z.strictObject({ k: finite.int('must be a whole number').min(1, 'must be at least 1').max(64, 'must be at most 64'), a: finite, b: finite }))
+      .array(z.strictObject({ k: finite.int('must be a whole number').min(1, 'must be at least 1').max(64, 'must be at most 64'), a: coefficient, b: coefficient }))
       .min(1, 'needs at least 1 term')
       .max(32, 'takes at most 32 terms'),
   }),
@@ -55,8 +59,8 @@ const layerSchema = z.strictObject({
   lobes: finite.int('must be a whole number').min(1, 'must be at least 1').max(360, 'must be at most 360'),
   /** Peak-to-valley, a length. */
   amplitude: nonNegative,
-  /** Fraction of one lobe; any real value, taken modulo 1. */
-  phase: finite,
+  /** Fraction of one lobe, taken modulo 1; within ±1 000 000. */
+  phase: phaseValue,
   wave: waveSchema,
 });
 export type RosetteLayer = z.infer<typeof layerSchema>;
@@ -80,7 +84,7 @@ const scheduleSchema = z.discriminatedUnion('kind', [
     depth: finite.min(0, 'must not be negative').max(1, 'must be at most 1'),
   }),
   z.strictObject({ kind: z.literal('twist'), step: finite.min(-1, 'must be at least -1').max(1, 'must be at most 1') }),
-  z.strictObject({ kind: z.literal('list'), phases: z.array(finite).min(1, 'needs at least 1 phase').max(1000, 'takes at most 1000 phases') }),
+  z.strictObject({ kind: z.literal('list'), phases: z.array(phaseValue).min(1, 'needs at least 1 phase').max(1000, 'takes at most 1000 phases') }),
 ]);
 export type PhaseSchedule = z.infer<typeof scheduleSchema>;
 export type ScheduleKind = PhaseSchedule['kind'];
@@ -105,7 +109,7 @@ export const designSchema = z
       /** Bar travel for one revolution of the rosette, a length. */
       travelPerRev: positive,
       /** Cutter displacement per rubber displacement. */
-      leverRatio: positive.max(10, 'must be at most 10'),
+      leverRatio: positive.min(0.01, 'must be at least 0.01').max(10, 'must be at most 10'),
       /** How the headstock carries the motion: a straight line (the default) or an arc about a rocking axis. */
       pivot: pivotSchema.optional(),
     }),
@@ -137,7 +141,7 @@ export const designSchema = z
       /** Feed of the slide along the bar, length per minute. */
       travelSpeed: positive,
       /** Overrides for the material preset (required for `custom`). */
-      surfaceSpeed: positive.max(2000, 'must be at most 2000 m/min').optional(),
+      surfaceSpeed: positive.min(0.1, 'must be at least 0.1 m/min').max(2000, 'must be at most 2000 m/min').optional(),
       chipLoad: positive.optional(),
     }),
   })
@@ -158,9 +162,14 @@ export const LENGTH_LIMITS_MM = {
   'plan.stepOver': [0.001, 5],
   'plan.cleanup': [0, 20],
   'plan.travelSpeed': [1, 20000],
+  'plan.chipLoad': [0.0001, 2],
+  'rubber.width': [0.01, 1000],
   'cutter.offset': [-50, 50],
   'motion.pivot.distance': [10, 2000],
 } as const satisfies Record<string, readonly [number, number]>;
+
+/** Limits on a layer's lengths in millimetres (the base radius's own bound), checked after conversion. */
+export const LAYER_LIMITS_MM = { amplitude: 500, measuredRadius: 1000 } as const;
 
 function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
   const toMm = d.units === 'in' ? MM_PER_INCH : 1;
@@ -198,6 +207,15 @@ function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
     }
     if (wave.shape === 'fourier' && wave.terms.every((t) => t.a === 0 && t.b === 0)) {
       ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'wave', 'terms'], message: 'needs at least one non-zero coefficient' });
+    } else if (wave.shape === 'fourier' && wave.terms.every((t) => Math.abs(t.a) < 1e-9 && Math.abs(t.b) < 1e-9)) {
+      ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'wave', 'terms'], message: 'needs a coefficient of at least 1e-9 in size (they are relative weights: scale them all up)' });
+    }
+    if (layer.amplitude * toMm > LAYER_LIMITS_MM.amplitude) {
+      ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'amplitude'], message: `must be at most ${show(LAYER_LIMITS_MM.amplitude)}` });
+    }
+    if (wave.shape === 'measured') {
+      const j = wave.points.findIndex((p) => p[1] * toMm > LAYER_LIMITS_MM.measuredRadius);
+      if (j >= 0) ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'wave', 'points', j, 1], message: `radius must be at most ${show(LAYER_LIMITS_MM.measuredRadius)}` });
     }
   });
   const pivot = d.motion.pivot;

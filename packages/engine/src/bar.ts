@@ -1,5 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import { lowerDiscEnvelope } from './disc-envelope';
+import { reducedPhase } from './phase-schedule';
 import { rosetteRepeats } from './rosette';
 
 /** Cutter-centre heights y = k·(s − sMin) (mm) from the rubber's displacements s. */
@@ -28,7 +29,7 @@ export function counterPhaseDesign(design: Design): Design {
     ...design,
     rosette: {
       ...design.rosette,
-      layers: design.rosette.layers.map((l) => ({ ...l, phase: l.phase + l.lobes / (2 * repeats) })),
+      layers: design.rosette.layers.map((l) => ({ ...l, phase: reducedPhase(reducedPhase(l.phase) + l.lobes / (2 * repeats)) })),
     },
   };
 }

@@ -52,13 +52,13 @@ describe('detail lost between cutter and follower', () => {
   const pathRadius = 1 / (0.75 * (2 * Math.PI / P) ** 2); // ≈ 0.586 mm
 
   it('keeps everything when cutter and follower fit the path, and reports the bar crest radius R − rc', () => {
-    const s = computeBarSamples(design({ cutter: 0.25 }), { step: P / 1000 });
+    const s = computeBarSamples(design({ cutter: 0.25 }), { step: P / 2000 });
     expect(s.warnings).toEqual([]);
     expect(s.minRadiusOfCurvature).toBeCloseTo(pathRadius - 0.25, 2);
   });
 
   it('warns where the follower is too large to reach a valley', () => {
-    const { warnings } = computeProfile(design({ cutter: 0.25, follower: 1.5 }), { step: P / 1000 });
+    const { warnings } = computeProfile(design({ cutter: 0.25, follower: 1.5 }), { step: P / 2000 });
     const valley = warnings.find((w) => w.code === 'detail-lost-follower')!;
     expect(valley.message).toMatch(/cannot reach the bottom/);
     expect(spansPhase(valley, 0.5)).toBe(true);
@@ -66,22 +66,22 @@ describe('detail lost between cutter and follower', () => {
   });
 
   it('warns where a crest is narrower than the cutter, and where a valley is when the follower is smaller', () => {
-    const crest = computeProfile(design({ cutter: 1 }), { step: P / 1000 }).warnings;
+    const crest = computeProfile(design({ cutter: 1 }), { step: P / 2000 }).warnings;
     expect(crest.map((w) => w.code)).toEqual(['detail-lost-follower']);
     expect(crest[0].message).toMatch(/rounds a crest/);
     expect(spansPhase(crest[0], 0)).toBe(true);
-    const small = computeProfile(design({ cutter: 1, follower: 0.2 }), { step: P / 1000 }).warnings;
+    const small = computeProfile(design({ cutter: 1, follower: 0.2 }), { step: P / 2000 }).warnings;
     expect(small.map((w) => w.code).sort()).toEqual(['detail-lost-cutter', 'detail-lost-follower', 'follower-radius']);
     expect(spansPhase(small.find((w) => w.code === 'detail-lost-cutter')!, 0.5)).toBe(true);
     // a follower as large as the cutter reads those valleys back exactly
-    expect(computeProfile(design({ cutter: 0.25, follower: 0.25 }), { step: P / 1000 }).warnings).toEqual([]);
+    expect(computeProfile(design({ cutter: 0.25, follower: 0.25 }), { step: P / 2000 }).warnings).toEqual([]);
   });
 
   it('round trip: with rf = rc the valleys come back exactly and a sharp crest of flank angle β loses r·(sec β − 1)', () => {
     // Pointed wave, point rubber: r is linear in θ, so the cutter path is an exact triangle wave.
     const r = 2.38125;
     const tanBeta = 1.5 / (P / 2);
-    const s = computeBarSamples(design({ wave: { shape: 'pointed' }, cutter: r }), { step: P / 1000 });
+    const s = computeBarSamples(design({ wave: { shape: 'pointed' }, cutter: r }), { step: P / 2000 });
     const m = s.grid.perPeriod;
     for (let k = 2; k < 30; k++) {
       const valley = k * m + m / 2;

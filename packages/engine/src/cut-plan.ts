@@ -3,6 +3,7 @@ import { cutPlanWarnings } from './cut-plan-warnings';
 import { placementText } from './cutter-placement';
 import { SAFETY_CAUTIONS, setUpReminders } from './cut-plan-notes';
 import { formatLength } from './length-format';
+import { assertFinite, assertFiniteWarnings } from './finite-output';
 import { cuttingFigures } from './materials';
 import { computeProfile } from './profile';
 import { feedPerMinute, spindleRpm } from './spindle-speed';
@@ -84,7 +85,7 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
     topOfEdge: show(mm.plan.cleanup),
     placement: placementText(mm, peakToValley(path.cutterPath), design.units),
   });
-  return {
+  const plan: CutPlan = {
     material: design.bar.material,
     surfaceSpeed: figures.surfaceSpeed,
     depth,
@@ -100,6 +101,11 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
     cautions: [...SAFETY_CAUTIONS],
     ...(figures.preset.heatTreatment ? { heatTreatment: [...figures.preset.heatTreatment] } : {}),
   };
+  const { surfaceSpeed, totalMinutes, feedPerMinute: feed, chipLoad } = plan;
+  const figuresOut = { surfaceSpeed, depth, passes, minutesPerPass, totalMinutes, rpm, feedPerMinute: feed, chipLoad, stepOver };
+  for (const [what, value] of Object.entries(figuresOut)) assertFinite(`cut plan's ${what}`, [value]);
+  assertFiniteWarnings(warnings);
+  return plan;
 }
 
 /** Peak-to-valley of a path's heights, mm (0 for an empty path). */

@@ -37,8 +37,9 @@ export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
   const { lineSpacing: spacing, lines: count, schedule, vAngle, depth } = mm.study;
   const length = mm.bar.length;
   const lines = Array.from({ length: count }, (_, index) => {
-    const phase = linePhase(schedule, index);
-    return { index, phase: reducedPhase(phase), points: layLine(template, phase * template.period, index * spacing, length) };
+    // Reduced before use: a phase of 1e20 periods would leave the walk below without a step to take.
+    const phase = reducedPhase(linePhase(schedule, index));
+    return { index, phase, points: layLine(template, phase * template.period, index * spacing, length) };
   });
   return { spacing, width: vGrooveWidth(depth, vAngle), length, lines };
 }

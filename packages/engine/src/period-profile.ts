@@ -1,6 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import { barEdge, cutterHeights } from './bar';
-import { barGrid, type BarGrid } from './bar-grid';
+import { barGrid, defaultPeriodStep, type BarGrid } from './bar-grid';
 import { followerPath } from './follower';
 import { trackRubber } from './rubber-track';
 import { toMm } from './units';
@@ -21,7 +21,7 @@ export interface PeriodProfile {
 
 export function periodProfile(design: Design, step?: number): PeriodProfile {
   const mm = design.units === 'mm' ? design : toMm(design);
-  const grid = barGrid(mm, step);
+  const grid = barGrid(mm, step ?? defaultPeriodStep(mm));
   const m = grid.perPeriod;
   const track = trackRubber(mm, grid, 0, m - 1, design.units);
   let sMin = Infinity;

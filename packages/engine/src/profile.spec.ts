@@ -71,18 +71,24 @@ describe('computeProfile', () => {
           motion: { travelPerRev: 100, leverRatio: 1.7 },
         };
         const ys = computeBarSamples(design).cutter;
-        const height = Math.max(...ys) - Math.min(...ys);
+        const height = ys.reduce((m, y) => Math.max(m, y), -Infinity) - ys.reduce((m, y) => Math.min(m, y), Infinity);
         expect(Math.abs(height / (1.7 * 1.5) - 1)).toBeLessThan(1e-3);
       }
     }
   });
 
-  it('says when a bar of many periods is sampled more coarsely than 0.1 % needs, and by how much', () => {
+  it('says when a bar of many fine features is sampled more coarsely than 0.1 % needs, and by how much', () => {
     const many: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 1000 }, rosette: { baseRadius: 50, layers: [{ lobes: 72, amplitude: 1.5, phase: 0, wave: { shape: 'sine' } }] } };
     const [coarse] = computeProfile(many).warnings.filter((w) => w.code === 'other');
-    expect(coarse.message).toMatch(/holds 720 periods.*off by up to 0\.96 % of the amplitude.*a step of 0\.00069 mm keeps it within 0\.1 %/);
-    expect(computeProfile(many, { step: 0.01 }).warnings.filter((w) => w.code === 'other')).toEqual([]);
+    expect(coarse.message).toMatch(/holds 720 of its finest features.*off by up to 0\.96 % of the amplitude.*a step of 0\.00069 mm keeps it within 0\.1 %/);
     expect(computeProfile(EXAMPLE_DESIGN).warnings.filter((w) => w.code === 'other')).toEqual([]);
+  });
+
+  it('says when a caller\'s step is coarser than the design needs, and not when it is fine enough', () => {
+    const short: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 10 }, rosette: { baseRadius: 50, layers: [{ lobes: 72, amplitude: 1.5, phase: 0, wave: { shape: 'sine' } }] } };
+    const [coarse] = computeProfile(short, { step: 0.01 }).warnings.filter((w) => w.code === 'other');
+    expect(coarse.message).toMatch(/step of 0\.01 mm is coarser than this design needs.*every 1\.3889 mm, 139 points each.*off by up to 1\.4 %.*a step of 0\.00069 mm/);
+    expect(computeProfile(short, { step: 0.00069 }).warnings.filter((w) => w.code === 'other')).toEqual([]);
   });
 
   it('is fast enough to be called often (a 150 mm bar at 0.01 mm well under 50 ms even on a busy machine)', () => {

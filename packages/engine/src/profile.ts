@@ -5,6 +5,7 @@ import { crestCurvature, type CrestCurvature } from './crest-curvature';
 import { cutterPlacement, placeCutter, placementMargin } from './cutter-placement';
 import { detailLossWarnings } from './detail-loss';
 import { followerRadiusWarnings } from './engraving-check';
+import { assertFinite, assertFiniteWarnings } from './finite-output';
 import { followerAt, followerPath } from './follower';
 import { rubberAt, trackRubber } from './rubber-track';
 import type { EngineWarning, Point, Profile } from './types';
@@ -119,13 +120,15 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
     ...{ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to },
     ...{ period: grid.period, units: design.units },
   });
-  const coarse = options.step === undefined ? coarseSamplingWarning(grid, design.units) : undefined;
+  const coarse = coarseSamplingWarning(d, grid, design.units, options.step);
   const engraving = followerRadiusWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period, units: design.units });
   const summary = { height: maxOf(cutter) - minOf(cutter), period: grid.period, periodic: lastNode >= grid.perPeriod, length: grid.length, units: design.units };
   const warnings = summarizeWarnings([...(coarse ? [coarse] : []), ...track.warnings, ...loss, ...engraving], summary);
   if (opposite) turnOver(cutter, bar, follower);
   const onePeriod = track.s.subarray(-track.first, -track.first + Math.min(grid.perPeriod, lastNode + 1));
   const crest = crestCurvature({ design: d, s: onePeriod, dTheta: grid.dTheta, step: h, inverted: options.companion !== undefined && options.companion !== 'counter-phase' });
+  for (const [what, values] of [['x', x], ['cutter path', cutter], ['bar edge', bar], ['follower path', follower]] as const) assertFinite(what, values);
+  assertFiniteWarnings(warnings); // the smallest crest radius may be Infinity: a straight bar
   return { grid, x, cutter, bar, follower, minRadiusOfCurvature: crest.radius, crest, warnings };
 }
 

@@ -1,9 +1,10 @@
 import { layerPeakToValley, type Design } from '@barwright/contracts';
+import { reducedPhase } from './phase-schedule';
 import { layerWave, type WaveFn } from './waves';
 
 type Rosette = Design['rosette'];
 
-/** One prepared layer: r gains (A/2)·w(N·θ + 2π·phase). */
+/** One prepared layer: r gains (A/2)·w(N·θ + 2π·phase), the phase taken modulo 1 first (exact for any double). */
 interface PreparedLayer {
   lobes: number;
   half: number;
@@ -59,7 +60,7 @@ export function rosetteMinRadius(rosette: Rosette): number {
 function prepare(rosette: Rosette): PreparedLayer[] {
   return rosette.layers
     .filter((l) => layerPeakToValley(l) > 0)
-    .map((l) => ({ lobes: l.lobes, half: layerPeakToValley(l) / 2, phase: 2 * Math.PI * l.phase, wave: layerWave(l, rosette.baseRadius) }));
+    .map((l) => ({ lobes: l.lobes, half: layerPeakToValley(l) / 2, phase: 2 * Math.PI * reducedPhase(l.phase), wave: layerWave(l, rosette.baseRadius) }));
 }
 
 function gcd(a: number, b: number): number {

@@ -1,6 +1,6 @@
 import type { Design, Units } from '@barwright/contracts';
 import type { BarGrid } from './bar-grid';
-import { rosetteMinRadius, sampleRosette, sampleRosetteAround } from './rosette';
+import { rosetteMinRadius, rosetteRadius, sampleRosette, sampleRosetteAround } from './rosette';
 import { readRubber, rubberReach, type RubberReading } from './rubber';
 import { rubberWarnings } from './rubber-warnings';
 import type { EngineWarning } from './types';
@@ -24,7 +24,8 @@ export function trackRubber(design: Design, grid: BarGrid, first: number, last: 
   const span = periodic ? grid.perPeriod : count;
   const pad = Math.max(1, rubberReach(design.rubber, rosetteMinRadius(design.rosette), grid.dTheta));
   const radii = sampleRosette(design.rosette, start - pad, span + 2 * pad, grid.dTheta);
-  const reading = readRubber(radii, pad, design.rubber, grid.dTheta);
+  const radius = rosetteRadius(design.rosette);
+  const reading = readRubber(radii, pad, design.rubber, grid.dTheta, (j) => radius((start - pad + j) * grid.dTheta));
   const warnings = rubberWarnings({
     radii,
     pad,
@@ -52,7 +53,8 @@ export function trackRubber(design: Design, grid: BarGrid, first: number, last: 
 export function rubberAt(design: Design, grid: BarGrid, theta: number): number {
   const pad = Math.max(1, rubberReach(design.rubber, rosetteMinRadius(design.rosette), grid.dTheta));
   const radii = sampleRosetteAround(design.rosette, theta, pad, 1, grid.dTheta);
-  return readRubber(radii, pad, design.rubber, grid.dTheta).s[0];
+  const radius = rosetteRadius(design.rosette);
+  return readRubber(radii, pad, design.rubber, grid.dTheta, (j) => radius(theta + (j - pad) * grid.dTheta)).s[0];
 }
 
 export type { RubberReading };

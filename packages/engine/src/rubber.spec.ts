@@ -1,7 +1,7 @@
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { computeProfile } from './profile';
-import { rosetteMinRadius, sampleRosette } from './rosette';
+import { rosetteMinRadius, rosetteRadius, sampleRosette } from './rosette';
 import { readRubber, rubberReach } from './rubber';
 
 type Rosette = Design['rosette'];
@@ -15,7 +15,8 @@ function read(rosette: Rosette, rubber: Design['rubber'], count = SAMPLES, sampl
   const dTheta = (2 * Math.PI) / samples;
   const pad = rubberReach(rubber, rosetteMinRadius(rosette), dTheta);
   const radii = sampleRosette(rosette, -pad, count + 2 * pad, dTheta);
-  return { radii: radii.subarray(pad, pad + count), ...readRubber(radii, pad, rubber, dTheta) };
+  const radius = rosetteRadius(rosette);
+  return { radii: radii.subarray(pad, pad + count), ...readRubber(radii, pad, rubber, dTheta, (j) => radius((j - pad) * dTheta)) };
 }
 
 /** Support function of the convex hull of points, by Andrew's monotone chain (independent of the rubber code). */

@@ -31,9 +31,11 @@ export function rubberReach(rubber: Rubber, minRadius: number, dTheta: number): 
 
 /**
  * Reads the rubber at ψ_i for i = 0 … count−1 where `radii[pad + i]` is r(ψ_i), `radii` holding `pad`
- * extra samples on each side (pad ≥ rubberReach) at the same angular step `dTheta`.
+ * extra samples on each side (pad ≥ rubberReach) at the same angular step `dTheta`. `radiusAt`, when
+ * given, is the rosette itself at a fractional index into `radii` (index j is r at ψ_0 + (j − pad)·dTheta):
+ * the refinement between samples then reads the true geometry and can never overshoot.
  */
-export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTheta: number): RubberReading {
+export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTheta: number, radiusAt?: (index: number) => number): RubberReading {
   const count = radii.length - 2 * pad;
   const reach = Math.min(pad, rubberReach(rubber, Math.max(1e-12, minOf(radii)), dTheta));
   const s = new Float64Array(count);
@@ -51,7 +53,7 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
     const centre = pad + i;
     const k = scan(radii, centre, reach, cos, sin, half);
     const best = touch.at(radii[centre + k], cos[Math.abs(k)], sin[Math.abs(k)]);
-    s[i] = refineMax(best, k, centre, radii, reach, cos, sin, touch);
+    s[i] = refineMax(best, k, centre, radii, reach, cos, sin, touch, dTheta, radiusAt);
     contact[i] = k;
   }
   return { s, contact };
@@ -137,9 +139,26 @@ function flatTouch(halfWidth: number): Touch {
   return { lift: 0, at: (r, c, s) => (r * s <= halfWidth ? r * c : -Infinity) };
 }
 
-/** Parabolic refinement through the winner and its two neighbours (exact for smooth maxima to O(h³), never above a sharp one). */
-function refineMax(best: number, k: number, centre: number, radii: Float64Array, reach: number, cos: Float64Array, sin: Float64Array, touch: Touch): number {
-  if (Math.abs(k) + 1 > reach) return best;
+/**
+ * Refines the winner between its neighbours: the vertex of the parabola through the three samples
+ * says where the true maximum lies. With the rosette itself (`radiusAt`) the rubber is placed there
+ * exactly and kept only if it beats the best sample, so the result is always a real resting place:
+ * never above the true maximum, exact to O(h³) at a smooth one. Without it the best sample stands:
+ * the parabola's own value overshoots at a kink, such as the edge of a clipped wave's flat top.
+ */
+function refineMax(
+  best: number,
+  k: number,
+  centre: number,
+  radii: Float64Array,
+  reach: number,
+  cos: Float64Array,
+  sin: Float64Array,
+  touch: Touch,
+  dTheta: number,
+  radiusAt: ((index: number) => number) | undefined,
+): number {
+  if (!radiusAt || Math.abs(k) + 1 > reach) return best;
   const value = (offset: number) => {
     const a = Math.abs(offset);
     return touch.at(radii[centre + offset], cos[a], sin[a]);
@@ -149,7 +168,10 @@ function refineMax(best: number, k: number, centre: number, radii: Float64Array,
   const curvature = before - 2 * best + after;
   if (!(curvature < 0) || !Number.isFinite(before) || !Number.isFinite(after)) return best;
   const p = (0.5 * (before - after)) / curvature;
-  return Math.abs(p) <= 0.5 ? best - 0.25 * (before - after) * p : best;
+  if (!(Math.abs(p) <= 0.5)) return best;
+  const angle = Math.abs(k + p) * dTheta;
+  const exact = touch.at(radiusAt(centre + k + p), Math.cos(angle), Math.sin(angle));
+  return exact > best ? exact : best;
 }
 
 function minOf(values: Float64Array): number {

@@ -100,6 +100,8 @@ export function layerWave(layer: RosetteLayer, baseRadius: number): WaveFn {
 function normalised(raw: WaveFn, lo: number, hi: number): WaveFn {
   const mid = (lo + hi) / 2;
   const half = (hi - lo) / 2;
+  // The design file bounds coefficients and readings, so this is a guard, never a straight bar in silence.
+  if (!Number.isFinite(half)) throw new RangeError(`the wave's range is not finite (${lo} to ${hi})`);
   if (!(half > 0)) return () => 0;
   return (t) => Math.max(-1, Math.min(1, (raw(t) - mid) / half));
 }
