@@ -3,9 +3,15 @@ import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('../../../../', import.meta.url));
 
-/** Runs the real server (main.ts) as a child process on a data directory, for restart and kill tests. */
-export async function startServerProcess(env: Record<string, string>): Promise<{ child: ChildProcess; baseUrl: string; output: () => string }> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/server/src/main.ts'], {
+/** The compiled server `npm run build` leaves (plain JavaScript, run by node alone). */
+export const COMPILED_MAIN = 'dist/server/main.js';
+
+/**
+ * Runs the real server as a child process on a data directory, for restart and kill tests: main.ts
+ * through tsx, or with `compiled` the build in dist/server.
+ */
+export async function startServerProcess(env: Record<string, string>, { compiled = false } = {}): Promise<{ child: ChildProcess; baseUrl: string; output: () => string }> {
+  const child = spawn(process.execPath, compiled ? [COMPILED_MAIN] : ['--import', 'tsx', 'apps/server/src/main.ts'], {
     cwd: root,
     env: { ...process.env, HOST: '127.0.0.1', DEMO_DATA: 'false', NODE_ENV: 'test', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
