@@ -14,6 +14,9 @@ export interface CutCheckInput {
   /** Steepest slope |dy/dx| of the cutter path; the feed along the path is travel·√(1 + slope²). */
   maxSlope: number;
   leverRatio: number;
+  /** The cutter's offset from the spindle centre line (mm) and its effect in words (`placementText`), if set. */
+  cutterOffset?: number;
+  placement?: string;
   cutterDiameter: number;
   barThickness: number;
   /** Formats a length in mm in the design's units, for messages. */
@@ -71,6 +74,15 @@ const offCentre: Check = (c) => {
   };
 };
 
+const offsetSet: Check = (c) => {
+  if (!c.cutterOffset || !c.placement) return undefined;
+  return {
+    code: 'cutter-off-centre',
+    message: `the cutter is set ${c.placement}; the rule is to keep it on the spindle centre line, so set 0 unless the offset is meant.`,
+    amount: Math.abs(c.cutterOffset),
+  };
+};
+
 const tooManyPasses: Check = (c) => {
   const max = c.preset.maxStepOver;
   if (max === undefined || c.passes <= 2 || c.stepOver * 4 > max) return undefined;
@@ -96,7 +108,7 @@ const longReach: Check = (c) =>
         message: `the bar (${c.show(c.barThickness)} thick) is more than ${LONG_REACH_DIAMETERS} cutter diameters; a long-reach cutter deflects, so take lighter passes and a final spring pass.`,
       };
 
-const CHECKS: readonly Check[] = [passTooDeep, rubbing, overload, offCentre, tooManyPasses, highRpm, longReach];
+const CHECKS: readonly Check[] = [passTooDeep, rubbing, overload, offCentre, offsetSet, tooManyPasses, highRpm, longReach];
 
 /** The cut plan's warnings, in a fixed order. */
 export function cutPlanWarnings(input: CutCheckInput): EngineWarning[] {

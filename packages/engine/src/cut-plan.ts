@@ -64,6 +64,7 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
 
   const rpm = spindleRpm(figures.surfaceSpeed, mm.cutter.diameter);
   const show = (v: number) => formatLength(v, design.units);
+  const placement = placementText(mm, peakToValley(path.cutterPath), design.units);
   const warnings = cutPlanWarnings({
     preset: figures.preset,
     stepOver,
@@ -74,6 +75,8 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
     travelSpeed,
     maxSlope: steepestSlope(path.cutterPath),
     leverRatio: mm.motion.leverRatio,
+    cutterOffset: mm.cutter.offset,
+    placement,
     cutterDiameter: mm.cutter.diameter,
     barThickness: mm.bar.thickness,
     show,
@@ -83,7 +86,7 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
     stepOver: show(stepOver),
     thickness: show(mm.bar.thickness),
     topOfEdge: show(mm.plan.cleanup),
-    placement: placementText(mm, peakToValley(path.cutterPath), design.units),
+    placement,
   });
   const plan: CutPlan = {
     material: design.bar.material,

@@ -118,6 +118,10 @@ describe('cutter placement in words', () => {
     const [first] = planCut(design).reminders;
     expect(first).toContain('The profile models the cutter 0.5 mm off the centre line');
     expect(first).toContain('never the cross slide');
+    const warning = planCut(design).warnings.find((w) => w.code === 'cutter-off-centre');
+    expect(warning?.message).toContain('the cutter is set 0.5 mm off the centre line, rocking 150 mm from its axis');
+    expect(warning?.amount).toBe(0.5);
+    expect(planCut(sineBar({ pivot: 150 })).warnings.filter((w) => w.code === 'cutter-off-centre')).toEqual([]); // on the line, only rocking
     expect(planCut(sineBar()).reminders[0]).toMatch(/^Set the end mill's centre on the spindle centre line.*never the cross slide/);
   });
 });
