@@ -35,6 +35,9 @@ export interface BarSamples {
   minRadiusOfCurvature: number;
   crest: CrestCurvature;
   warnings: EngineWarning[];
+  /** The cutter path within one cutter radius beyond each end (mm), where its cut still reaches the bar; not for companions. */
+  leadIn?: Point[];
+  leadOut?: Point[];
 }
 
 /** Cutter path, bar edge and follower path of a validated design: numbers in mm whatever the file's units, warning messages in the file's units. */
@@ -54,6 +57,7 @@ export function computeProfile(design: Design, options: ProfileOptions = {}): Pr
     followerPath: points(follower),
     minRadiusOfCurvature: samples.minRadiusOfCurvature,
     crest: samples.crest,
+    ...(samples.leadIn ? { leadIn: samples.leadIn, leadOut: samples.leadOut } : {}),
     warnings: samples.warnings,
   };
 }
@@ -101,6 +105,7 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
     yEnd = yMax - yEnd;
   }
   const edgeExt = barEdge(yExt, h, rc);
+  const leads = options.companion === undefined ? leadPaths(yExt, margin, grid, rc) : {};
   const count = lastNode + 1 + (offGrid ? 1 : 0);
   const x = new Float64Array(count);
   for (let i = 0; i < count; i++) x[i] = i > lastNode ? grid.length : nodeX(grid, i);
@@ -129,7 +134,7 @@ export function computeBarSamples(design: Design, options: ProfileOptions = {}):
   const crest = crestCurvature({ design: d, s: onePeriod, dTheta: grid.dTheta, step: h, inverted: options.companion !== undefined && options.companion !== 'counter-phase' });
   for (const [what, values] of [['x', x], ['cutter path', cutter], ['bar edge', bar], ['follower path', follower]] as const) assertFinite(what, values);
   assertFiniteWarnings(warnings); // the smallest crest radius may be Infinity: a straight bar
-  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: crest.radius, crest, warnings };
+  return { grid, x, cutter, bar, follower, minRadiusOfCurvature: crest.radius, crest, warnings, ...leads };
 }
 
 /**
@@ -148,6 +153,21 @@ function addEndToEdge(bar: Float64Array, yExt: Float64Array, margin: number, gri
     if (i >= 0 && i <= lastNode) bar[i] = Math.min(bar[i], yEnd - Math.sqrt(reach));
   }
   return edge;
+}
+
+/**
+ * The cutter path beyond the bar's ends, within one cutter radius: the rosette carries the cutter on
+ * there, and the bar edge near the ends is cut by those positions too, so an export that runs in and
+ * out along them cuts the ends as the profile shows them.
+ */
+function leadPaths(yExt: Float64Array, margin: number, grid: BarGrid, rc: number): { leadIn: Point[]; leadOut: Point[] } {
+  const h = grid.step;
+  const reach = Math.min(margin - 1, Math.ceil(rc / h));
+  const leadIn: Point[] = [];
+  for (let i = -reach; i < 0; i++) leadIn.push([i * h, yExt[margin + i]]);
+  const leadOut: Point[] = [];
+  for (let i = grid.lastNode + 1; i <= grid.lastNode + 1 + reach && margin + i < yExt.length; i++) leadOut.push([i * h, yExt[margin + i]]);
+  return { leadIn, leadOut };
 }
 
 /** The follower over the bar's own points, the end point (if off the grid) included by brute force. */

@@ -49,5 +49,11 @@ export interface Profile {
   minRadiusOfCurvature: number;
   /** The same with where it is, whether it is a sharp corner, and the cutter path's own figure (exact geometry). */
   crest?: CrestCurvature;
+  /**
+   * The cutter path within one cutter radius beyond the bar's start and end (x < 0, x > length; mm):
+   * the bar edge near the ends is cut by these positions too. Exports run in and out along them.
+   */
+  leadIn?: Point[];
+  leadOut?: Point[];
   warnings: EngineWarning[];
 }

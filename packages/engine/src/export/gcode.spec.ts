@@ -1,6 +1,8 @@
 import { parseStringSync } from 'gcode-parser';
 import { describe, expect, it } from 'vitest';
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { planCut } from '../cut-plan';
+import { computeProfile } from '../profile';
 import { demoDesign, demoInInches, demoProfile, largestGap, yAt } from '../testing/export-fixtures';
 import { passOffset, SAFE_HEIGHT_MM } from './gcode';
 import { exportDesign, GCODE_TOLERANCE_MM } from './index';
@@ -75,7 +77,7 @@ describe('G-code export', () => {
       expect(onBar[0].x).toBe(0);
       expect(onBar.at(-1)!.x).toBe(150);
       for (const move of onBar) {
-        expect(move.feed).toBe(100);
+        expect(move.feed).toBeCloseTo(plan.feedPerMinute, 3); // the plan's feed (rpm × flutes × chip load), not the slide's travel
         expect(Math.abs(move.y - offset - yAt(demoProfile.cutterPath, move.x))).toBeLessThan(1e-4);
       }
     });
@@ -107,6 +109,31 @@ describe('G-code export', () => {
     for (const move of final) {
       expect(Math.abs(move.y - yAt(demoProfile.cutterPath, move.x * 25.4) / 25.4)).toBeLessThan(1e-5);
     }
-    expect(final[0].feed).toBeCloseTo(100 / 25.4, 4);
+    expect(final[0].feed).toBeCloseTo(planCut(demoInInches(), demoProfile).feedPerMinute / 25.4, 4);
+  });
+
+  it('runs in and out along the pattern, so the ends are cut as the profile shows them', async () => {
+    // A 6 mm cutter and a phase that puts a flank at each end: straight leads used to leave up to 0.76 mm there.
+    const design: Design = { ...EXAMPLE_DESIGN, rosette: { ...EXAMPLE_DESIGN.rosette, layers: [{ ...EXAMPLE_DESIGN.rosette.layers[0], phase: 0.13 }] }, cutter: { diameter: 6, flutes: 2 } };
+    const profile = computeProfile(design);
+    const file = await exportDesign(design, 'gcode', { profile });
+    const final = passes(replay(file.content as string).moves).at(-1)!;
+    const rc = 3;
+    const centres: [number, number][] = [];
+    const nearEnd = (x: number) => x < 2 * rc || x > design.bar.length - 2 * rc;
+    for (let i = 1; i < final.length; i++) {
+      const [a, b] = [final[i - 1], final[i]];
+      if (!nearEnd(a.x) && !nearEnd(b.x)) continue;
+      const steps = Math.max(1, Math.ceil(Math.abs(b.x - a.x) / 0.002));
+      for (let k = 0; k <= steps; k++) centres.push([a.x + ((b.x - a.x) * k) / steps, a.y + ((b.y - a.y) * k) / steps]);
+    }
+    let worst = 0;
+    for (const [x, edge] of profile.barEdge.filter((_, i) => i % 4 === 0)) {
+      if (x > rc && x < design.bar.length - rc) continue;
+      let cut = Infinity;
+      for (const [cx, cy] of centres) if (Math.abs(x - cx) <= rc) cut = Math.min(cut, cy - Math.sqrt(rc * rc - (x - cx) ** 2));
+      worst = Math.max(worst, Math.abs(cut - edge));
+    }
+    expect(worst).toBeLessThan(GCODE_TOLERANCE_MM + 0.001); // the chord tolerance, and the replay's own 2 µm steps
   });
 });

@@ -11,7 +11,12 @@ export interface GcodeJob {
   /** Final cutter-centre path, x from 0 to the bar length, lowest point at y = 0. */
   cutterPath: readonly Point[];
   plan: CutPlan;
-  travelSpeed: number;
+  /**
+   * The cutter path within one cutter radius beyond each end (x < 0, x > length): the pattern carried
+   * on, so the ends are cut as the profile shows them. Without them the lead-in and lead-out are straight.
+   */
+  leadIn?: readonly Point[];
+  leadOut?: readonly Point[];
   cutterDiameter: number;
   flutes: number;
   barLength: number;
@@ -44,8 +49,14 @@ export function barGcode(job: GcodeJob): string {
   const startX = -(radius + GCODE_CLEARANCE_MM);
   const endX = job.barLength + radius + GCODE_CLEARANCE_MM;
   const cutZ = -(job.barThickness + Z_OVERCUT_MM);
-  const first = job.cutterPath[0];
-  const last = job.cutterPath[job.cutterPath.length - 1];
+  // Feed per minute from the cut plan (rpm × flutes × chip load), not the slide's travel setting.
+  const feed = plan.feedPerMinute;
+  const path = [...(job.leadIn ?? []), ...job.cutterPath, ...(job.leadOut ?? [])];
+  const first = path[0];
+  const last = path[path.length - 1];
+  const ends = job.leadIn && job.leadOut
+    ? '(In and out: straight to within one cutter radius of the bar, then along the pattern, so the ends are cut as drawn.)'
+    : '(In and out: straight at the height of the path at the ends; within one cutter radius of each end the edge is left higher than drawn.)';
   const lines = [
     '%',
     `(Barwright pattern bar: ${comment(job.title)})`,
@@ -54,6 +65,8 @@ export function barGcode(job: GcodeJob): string {
     `(Cutter: ${n(job.cutterDiameter)} ${job.units} end mill, ${job.flutes} flutes; tool-centre path, no cutter compensation.)`,
     `(The tip goes ${n(Z_OVERCUT_MM)} ${job.units} below the bar: support the bar on a spoil board or parallels clear of the cut.)`,
     `(${plan.passes} passes of ${n(plan.stepOver)} ${job.units}, depth ${n(plan.depth)} ${job.units}, about ${plan.totalMinutes.toFixed(1)} min.)`,
+    `(Feed ${n(feed)} ${job.units}/min from the cut plan: ${Math.round(plan.rpm)} rpm x ${job.flutes} flutes x ${n(plan.chipLoad)} ${job.units} a tooth; plunge at half.)`,
+    ends,
     job.units === 'in' ? 'G20 (inches)' : 'G21 (millimetres)',
     'G90 G17 G94 (absolute, XY plane, feed per minute)',
     `G0 Z${n(SAFE_HEIGHT_MM)}`,
@@ -64,11 +77,11 @@ export function barGcode(job: GcodeJob): string {
     lines.push(
       `(pass ${k} of ${plan.passes}, ${n(offset)} ${job.units} above the final path)`,
       `G0 X${n(startX)} Y${n(first[1] + offset)}`,
-      `G1 Z${n(cutZ)} F${n(job.travelSpeed / 2)}`,
-      `G1 X${n(first[0])} Y${n(first[1] + offset)} F${n(job.travelSpeed)}`,
+      `G1 Z${n(cutZ)} F${n(feed / 2)}`,
+      `G1 X${n(first[0])} Y${n(first[1] + offset)} F${n(feed)}`,
     );
     // A loop, not a spread: a spread passes every point as an argument and overflows the stack on a long path.
-    for (let i = 1; i < job.cutterPath.length; i++) lines.push(`X${n(job.cutterPath[i][0])} Y${n(job.cutterPath[i][1] + offset)}`);
+    for (let i = 1; i < path.length; i++) lines.push(`X${n(path[i][0])} Y${n(path[i][1] + offset)}`);
     lines.push(
       `X${n(endX)} Y${n(last[1] + offset)}`,
       `G0 Z${n(SAFE_HEIGHT_MM)}`,

@@ -75,7 +75,9 @@ function gcodeFor(design: Design, mm: Design, profile: Profile, title: string): 
     units: design.units,
     cutterPath: simplifyPolyline(within, GCODE_TOLERANCE_MM),
     plan: planCut(design, profile),
-    travelSpeed: mm.plan.travelSpeed,
+    ...(profile.leadIn && profile.leadOut
+      ? { leadIn: simplifyPolyline(profile.leadIn, GCODE_TOLERANCE_MM), leadOut: simplifyPolyline(profile.leadOut, GCODE_TOLERANCE_MM) }
+      : {}),
     cutterDiameter: mm.cutter.diameter,
     flutes: mm.cutter.flutes,
     barLength: mm.bar.length,

@@ -1,6 +1,8 @@
 import { PDFParse } from 'pdf-parse';
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { planCut } from '../cut-plan';
+import { computeProfile } from '../profile';
 import { demoDesign, demoInInches, demoProfile } from '../testing/export-fixtures';
 import { handMadeProfile } from '../testing/hand-made-profile';
 import { exportDesign } from './index';
@@ -86,5 +88,43 @@ describe('PDF template', () => {
     expect(text).toContain('Tile 3 of 3');
     expect(text).toContain('tile 2 starts here');
     expect(pages).toBeGreaterThanOrEqual(4);
+  });
+
+  // A lever of 10 on a 10 mm rosette: an edge about 82 mm deep, a drawing about 115 mm high on a 210 mm page.
+  const deep = (amplitude: number): Design => ({
+    ...EXAMPLE_DESIGN,
+    rosette: { baseRadius: 60, layers: [{ lobes: 6, amplitude, phase: 0, wave: { shape: 'sine' } }] },
+    motion: { travelPerRev: 100, leverRatio: 10 },
+  });
+  /** Below the heading's four lines, above the calibration square and its note (points). */
+  const heading = 210 * PT_PER_MM - PAGE_MARGIN_MM * PT_PER_MM - 54;
+  const foot = PAGE_MARGIN_MM * PT_PER_MM + 4 + 10 * PT_PER_MM;
+
+  it('keeps a deep bar on the page, clear of the heading and the calibration square', async () => {
+    const design = deep(10);
+    const bytes = await pdfOf(design, computeProfile(design));
+    const { boxes } = await pathBoxes(bytes, 1);
+    const bar = boxes.filter((b) => Math.abs(b.width - 150 * PT_PER_MM) < 0.5 && b.height < 200 * PT_PER_MM);
+    expect(bar.length).toBeGreaterThan(0);
+    for (const b of bar) {
+      expect(b.y0).toBeGreaterThan(foot);
+      expect(b.y0 + b.height).toBeLessThan(heading);
+    }
+  });
+
+  it('tiles a bar deeper than the page into overlapping rows at 1:1 instead of clipping it', async () => {
+    const design = deep(30);
+    const bytes = await pdfOf(design, computeProfile(design));
+    const { text, pages } = await textOf(bytes);
+    expect(text).toContain('Tile 1 of 1, row 1 of 3');
+    expect(text).toContain('row 3 of 3');
+    expect(text).toContain('row 2 starts here');
+    expect(pages).toBeGreaterThanOrEqual(4);
+    for (let page = 1; page <= 3; page++) {
+      // The band each row is clipped to (the full-width rectangle) lies between the square and the heading.
+      const band = (await pathBoxes(bytes, page)).boxes.find((b) => b.width > 290 * PT_PER_MM)!;
+      expect(band.y0).toBeGreaterThan(foot);
+      expect(band.y0 + band.height).toBeLessThan(heading);
+    }
   });
 });

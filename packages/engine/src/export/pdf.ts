@@ -28,7 +28,7 @@ import type { Point } from '../types';
 import type { BarDrawing } from './bar-drawing';
 import { addPlanPages } from './pdf-plan-pages';
 import { winAnsiText } from './pdf-text';
-import { PAGE_MARGIN_MM, PAPER_POINTS, PT_PER_MM, tileRanges, type Paper, type Tile } from './pdf-tiles';
+import { PAGE_MARGIN_MM, PAPER_POINTS, PT_PER_MM, TILE_OVERLAP_MM, tileRanges, type Paper, type Tile } from './pdf-tiles';
 
 export interface PdfJob {
   title: string;
@@ -57,29 +57,68 @@ export async function barPdf(job: PdfJob): Promise<Uint8Array> {
   const size = PAPER_POINTS[job.paper ?? (job.units === 'in' ? 'letter' : 'a4')];
   const usableMm = size[0] / PT_PER_MM - 2 * PAGE_MARGIN_MM;
   const tiles = tileRanges(job.drawing.length, usableMm);
-  for (const tile of tiles) drawTilePage(doc.addPage([size[0], size[1]]), job, tile, tiles, fonts);
+  const band = drawingBand(size[1], job.units);
+  const content = contentSpan(job.drawing);
+  const rows = tileRanges(content.top - content.bottom, band.heightMm).map((r) => ({ ...r, count: 0 }));
+  rows.forEach((r) => (r.count = rows.length));
+  for (const row of rows) for (const tile of tiles) drawTilePage(doc.addPage([size[0], size[1]]), { job, tile, tiles, row, band, content }, fonts);
   addPlanPages(doc, size, fonts, job);
   return doc.save();
 }
 
-function drawTilePage(page: PDFPage, job: PdfJob, tile: Tile, tiles: readonly Tile[], fonts: { regular: PDFFont; bold: PDFFont }): void {
+/** One page: a tile along the bar, and a row of its height when the drawing is deeper than the page. */
+interface PageTile {
+  job: PdfJob;
+  tile: Tile;
+  tiles: readonly Tile[];
+  row: Tile & { count: number };
+  band: Band;
+  content: { bottom: number; top: number };
+}
+
+/** The strip of the page the drawing may use, between the calibration square and the heading (points and mm). */
+interface Band {
+  bottomPt: number;
+  heightMm: number;
+}
+
+/** Room kept below the drawing for the calibration square and its note, and above it for the four heading lines (points). */
+function drawingBand(pageHeight: number, units: Units): Band {
+  const bottomPt = PAGE_MARGIN_MM * PT_PER_MM + 4 + calibrationSideMm(units) * PT_PER_MM + 6;
+  const topPt = pageHeight - PAGE_MARGIN_MM * PT_PER_MM - 62;
+  return { bottomPt, heightMm: (topPt - bottomPt) / PT_PER_MM };
+}
+
+/** Heights (mm) the drawing reaches: the seam marks and tick labels below the back, the seam labels above the top. */
+function contentSpan(drawing: BarDrawing): { bottom: number; top: number } {
+  return { bottom: drawing.backY - 8, top: Math.max(drawing.topY, drawing.blankEdgeY) + 10 };
+}
+
+function drawTilePage(page: PDFPage, where: PageTile, fonts: { regular: PDFFont; bold: PDFFont }): void {
+  const { job, tile, tiles, row, band, content } = where;
   const { drawing } = job;
   const k = PT_PER_MM;
   const margin = PAGE_MARGIN_MM * k;
   const { height } = page.getSize();
   const unit = job.units;
-  const toPt = ([x, y]: Point): Point => [margin + (x - tile.xFrom) * k, height / 2 + (y - drawing.backY) * k];
+  // One row: the drawing centred in the band; several: each row's stretch of height from the band's foot.
+  const spare = Math.max(0, band.heightMm - (content.top - content.bottom));
+  const foot = content.bottom + row.xFrom - (row.count === 1 ? spare / 2 : 0);
+  const toPt = ([x, y]: Point): Point => [margin + (x - tile.xFrom) * k, band.bottomPt + (y - foot) * k];
   const text = (s: string, x: number, y: number, size = 9, font = fonts.regular) => page.drawText(winAnsiText(s), { x, y, size, font });
 
   text(job.title, margin, height - margin - 12, 13, fonts.bold);
   const span = `x ${fmt(tile.xFrom, unit)} to ${fmt(tile.xTo, unit)} ${unit}`;
-  text(`Tile ${tile.index + 1} of ${tiles.length}: ${span}. Print at 100 % (actual size), not "fit to page".`, margin, height - margin - 28);
+  const rowNote = row.count > 1 ? `, row ${row.index + 1} of ${row.count} counted up from the back of the bar (rows overlap by ${fmt(TILE_OVERLAP_MM, unit)} ${unit})` : '';
+  text(`Tile ${tile.index + 1} of ${tiles.length}${rowNote}: ${span}. Print at 100 % (actual size), not "fit to page".`, margin, height - margin - 28);
   text('Grey: the bar, cut edge on top. Dashed red: the cutter-centre path. Thin line: the blank before cutting.', margin, height - margin - 41);
   const { plan } = job;
   const summary = `Cut plan: ${plan.passes} passes of ${formatLength(plan.stepOver, unit)}, about ${plan.totalMinutes.toFixed(1)} min at ${Math.round(plan.rpm)} rpm. The full plan and the cautions are on the last pages.`;
   text(summary, margin, height - margin - 54);
 
   const clipWidth = (tile.xTo - tile.xFrom) * k;
+  const bandHeight = Math.min(band.heightMm, row.xTo - row.xFrom) * k;
+  page.pushOperators(pushGraphicsState(), rectangle(0, band.bottomPt, page.getSize().width, bandHeight), clip(), endPath());
   page.pushOperators(pushGraphicsState(), rectangle(margin, 0, clipWidth, height), clip(), endPath());
   // Each page gets only the stretch of the paths it shows (the clip trims the rest): a page per tile of the whole path made long bars slow.
   const edge = onTile(drawing.edge, tile);
@@ -92,6 +131,8 @@ function drawTilePage(page: PDFPage, job: PdfJob, tile: Tile, tiles: readonly Ti
 
   drawTicks(page, job, tile, toPt, text);
   drawSeams(page, tile, tiles, toPt, drawing, text);
+  if (row.count > 1) drawRowSeams(page, row, band, margin, clipWidth, text);
+  page.pushOperators(popGraphicsState());
   drawCalibrationSquare(page, unit, margin, text);
   text(`CAUTION: ${SHORT_CAUTION}`, margin, margin - 14, 7.5);
 }
@@ -124,6 +165,18 @@ function drawSeams(page: PDFPage, tile: Tile, tiles: readonly Tile[], toPt: (p: 
     const [, high] = toPt([xMm, drawing.blankEdgeY + 6]);
     page.pushOperators(pushGraphicsState(), setLineWidth(0.4), setDashPattern([4, 2], 0), moveTo(x, low), lineTo(x, high), stroke(), popGraphicsState());
     text(label, x + 2, high + 2, 7);
+  }
+}
+
+/** Dashed lines across the tile where the rows above and below end and start, for lining the sheets up. */
+function drawRowSeams(page: PDFPage, row: Tile & { count: number }, band: Band, margin: number, width: number, text: TextFn): void {
+  const marks: Array<[number, string]> = [];
+  if (row.index + 1 < row.count) marks.push([row.xTo - TILE_OVERLAP_MM, `row ${row.index + 2} starts here`]);
+  if (row.index > 0) marks.push([row.xFrom + TILE_OVERLAP_MM, `row ${row.index} ends here`]);
+  for (const [mm, label] of marks) {
+    const y = band.bottomPt + (mm - row.xFrom) * PT_PER_MM;
+    page.pushOperators(pushGraphicsState(), setLineWidth(0.4), setDashPattern([4, 2], 0), moveTo(margin, y), lineTo(margin + width, y), stroke(), popGraphicsState());
+    text(label, margin + 2, y + 2, 7);
   }
 }
 
