@@ -125,3 +125,17 @@ describe('cutter placement in words', () => {
     expect(planCut(sineBar()).reminders[0]).toMatch(/^Set the end mill's centre on the spindle centre line.*never the cross slide/);
   });
 });
+
+describe('cutter placement on an endless bar', () => {
+  it('moves one period as it moves the bar (the line study reads the same engraved line)', async () => {
+    const { periodProfile } = await import('./period-profile');
+    const design = sineBar({ offset: 1.25, pivot: 40 });
+    const step = 10 / 2000;
+    const period = periodProfile(design, step);
+    const bar = computeProfile(design, { step });
+    // x = i·h on both; the bar is periodic away from its ends
+    for (let i = 0; i < period.grid.perPeriod; i += 97) {
+      expect(period.cutter[i]).toBeCloseTo(bar.cutterPath[i + 2 * period.grid.perPeriod][1], 9);
+    }
+  });
+});

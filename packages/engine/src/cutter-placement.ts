@@ -80,9 +80,40 @@ export function placeCutter(p: CutterPlacement, y: Float64Array, margin: number,
     lo = Math.min(lo, y[i]);
     hi = Math.max(hi, y[i]);
   }
-  const mid = (lo + hi) / 2;
+  const out = displace(p, y, margin, h, (lo + hi) / 2);
   const count = y.length;
-  const out = new Float64Array(count).fill(Infinity);
+  const end = grid.length / h + margin; // fractional index of the bar's end in `out`
+  const j = Math.min(count - 2, Math.floor(end));
+  const yEnd = out[j] + (end - j) * (out[j + 1] - out[j]);
+  let min = grid.endOnGrid ? Infinity : yEnd;
+  for (let i = margin; i <= margin + lastNode; i++) min = Math.min(min, out[i]);
+  for (let i = 0; i < count; i++) out[i] -= min;
+  return { y: out, yEnd: yEnd - min };
+}
+
+/**
+ * One period of an endless bar's cutter path (nodes 0 … m−1, heights from its lowest point) moved to
+ * its true places: the period is wrapped `margin` nodes round each end, displaced and read back.
+ */
+export function placePeriod(p: CutterPlacement, y: Float64Array, step: number, margin: number): Float64Array {
+  const m = y.length;
+  const wrapped = new Float64Array(m + 2 * margin);
+  for (let i = 0; i < wrapped.length; i++) wrapped[i] = y[(((i - margin) % m) + m) % m];
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of y) {
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
+  const out = displace(p, wrapped, margin, step, (lo + hi) / 2).slice(margin, margin + m);
+  let min = Infinity;
+  for (const v of out) min = Math.min(min, v);
+  return out.map((v) => v - min);
+}
+
+/** Heights y at nodes −margin … moved by the placement (d measured from `mid`) and read back at the same nodes. */
+function displace(p: CutterPlacement, y: Float64Array, margin: number, h: number, mid: number): Float64Array {
+  const out = new Float64Array(y.length).fill(Infinity);
   let xPrev = NaN;
   let yPrev = NaN;
   for (let i = 0; i < y.length; i++) {
@@ -94,13 +125,7 @@ export function placeCutter(p: CutterPlacement, y: Float64Array, margin: number,
     yPrev = yy;
   }
   fillGaps(out);
-  const end = grid.length / h + margin; // fractional index of the bar's end in `out`
-  const j = Math.min(count - 2, Math.floor(end));
-  const yEnd = out[j] + (end - j) * (out[j + 1] - out[j]);
-  let min = grid.endOnGrid ? Infinity : yEnd;
-  for (let i = margin; i <= margin + lastNode; i++) min = Math.min(min, out[i]);
-  for (let i = 0; i < count; i++) out[i] -= min;
-  return { y: out, yEnd: yEnd - min };
+  return out;
 }
 
 /** Lowers `out` (nodes first, first + 1, … at step h) to the segment (x0, y0)–(x1, y1) where it lies over them. */

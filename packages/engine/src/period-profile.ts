@@ -1,6 +1,7 @@
 import type { Design } from '@barwright/contracts';
 import { barEdge, cutterHeights } from './bar';
 import { barGrid, defaultPeriodStep, type BarGrid } from './bar-grid';
+import { cutterPlacement, placementMargin, placePeriod } from './cutter-placement';
 import { followerPath } from './follower';
 import { trackRubber } from './rubber-track';
 import { toMm } from './units';
@@ -26,7 +27,9 @@ export function periodProfile(design: Design, step?: number): PeriodProfile {
   const track = trackRubber(mm, grid, 0, m - 1, design.units);
   let sMin = Infinity;
   for (const v of track.s) sMin = Math.min(sMin, v);
-  const cutter = cutterHeights(track.s, mm.motion.leverRatio, sMin);
+  const nominal = cutterHeights(track.s, mm.motion.leverRatio, sMin);
+  const placement = cutterPlacement(mm);
+  const cutter = placement ? placePeriod(placement, nominal, grid.step, placementMargin(placement, mm, grid.step)) : nominal;
   const rc = mm.cutter.diameter / 2;
   const rf = mm.follower.radius;
   const bar = periodicEnvelope(cutter, Math.ceil(rc / grid.step) + 1, (y) => barEdge(y, grid.step, rc));
