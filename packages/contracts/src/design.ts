@@ -169,7 +169,7 @@ export const LENGTH_LIMITS_MM = {
 } as const satisfies Record<string, readonly [number, number]>;
 
 /** Limits on a layer's lengths in millimetres (the base radius's own bound), checked after conversion. */
-export const LAYER_LIMITS_MM = { amplitude: 500, measuredRadius: 1000 } as const;
+export const LAYER_LIMITS_MM = { amplitude: 500, measuredRadius: 1000, measuredSpread: 0.001 } as const;
 
 function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
   const toMm = d.units === 'in' ? MM_PER_INCH : 1;
@@ -212,6 +212,14 @@ function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
     }
     if (layer.amplitude * toMm > LAYER_LIMITS_MM.amplitude) {
       ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'amplitude'], message: `must be at most ${show(LAYER_LIMITS_MM.amplitude)}` });
+    }
+    if (wave.shape === 'measured' && wave.scale !== 'as-read' && layer.amplitude > 0) {
+      const radii = wave.points.map((p) => p[1]);
+      const spread = (Math.max(...radii) - Math.min(...radii)) * toMm;
+      if (!(spread >= LAYER_LIMITS_MM.measuredSpread)) {
+        const message = `readings must rise and fall by at least ${show(LAYER_LIMITS_MM.measuredSpread)} (a dial indicator's resolution) to be stretched to the amplitude`;
+        ctx.addIssue({ code: 'custom', path: ['rosette', 'layers', i, 'wave', 'points'], message });
+      }
     }
     if (wave.shape === 'measured') {
       const j = wave.points.findIndex((p) => p[1] * toMm > LAYER_LIMITS_MM.measuredRadius);

@@ -37,7 +37,8 @@ export function rubberReach(rubber: Rubber, minRadius: number, dTheta: number): 
  */
 export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTheta: number, radiusAt?: (index: number) => number): RubberReading {
   const count = radii.length - 2 * pad;
-  const reach = Math.min(pad, rubberReach(rubber, Math.max(1e-12, minOf(radii)), dTheta));
+  const rMin = Math.max(1e-12, minOf(radii));
+  const reach = Math.min(pad, rubberReach(rubber, rMin, dTheta));
   const s = new Float64Array(count);
   const contact = new Int32Array(count);
   if (reach === 0) {
@@ -47,11 +48,12 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
   const cos = Float64Array.from({ length: reach + 1 }, (_, k) => Math.cos(k * dTheta));
   const sin = Float64Array.from({ length: reach + 1 }, (_, k) => Math.sin(k * dTheta));
   const touch = rubber.shape === 'round' ? roundTouch(rubber.radius) : flatTouch(rubber.width / 2);
-  const scan = rubber.shape === 'round' ? scanRound : scanFlat;
-  const half = rubber.shape === 'round' ? rubber.radius : rubber.width / 2;
+  const blocks = blockMaxima(radii);
+  // The most a point at offset k can add to r·cos: √(ρ² − (r_min·sin)²) for a round rubber (r ≥ r_min), 0 for a flat face.
+  const lift = Float64Array.from(sin, (sn) => (rubber.shape === 'round' ? Math.sqrt(Math.max(0, rubber.radius ** 2 - (rMin * sn) ** 2)) : 0));
   for (let i = 0; i < count; i++) {
     const centre = pad + i;
-    const k = scan(radii, centre, reach, cos, sin, half);
+    const k = scan(radii, blocks, centre, reach, cos, sin, lift, touch);
     const best = touch.at(radii[centre + k], cos[Math.abs(k)], sin[Math.abs(k)]);
     s[i] = refineMax(best, k, centre, radii, reach, cos, sin, touch, dTheta, radiusAt);
     contact[i] = k;
@@ -59,66 +61,52 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
   return { s, contact };
 }
 
-/** Offset of the point a round rubber rests on; points that cannot beat the best (r·cos + ρ ≤ best) skip the root. */
-function scanRound(radii: Float64Array, centre: number, reach: number, cos: Float64Array, sin: Float64Array, rho: number): number {
-  const rho2 = rho * rho;
-  let best = radii[centre] + rho;
-  let bestK = 0;
-  for (let k = 1; k <= reach; k++) {
-    const c = cos[k];
-    const sn = sin[k];
-    let r = radii[centre - k];
-    if (r * c + rho > best) {
-      const q = r * sn;
-      const d = rho2 - q * q;
-      if (d >= 0) {
-        const v = r * c + Math.sqrt(d);
-        if (v > best) {
-          best = v;
-          bestK = -k;
-        }
-      }
-    }
-    r = radii[centre + k];
-    if (r * c + rho > best) {
-      const q = r * sn;
-      const d = rho2 - q * q;
-      if (d >= 0) {
-        const v = r * c + Math.sqrt(d);
-        if (v > best) {
-          best = v;
-          bestK = k;
-        }
-      }
-    }
+/** Blocks of this many samples are skipped whole when their largest radius cannot beat the best. */
+const BLOCK = 16;
+
+/** The largest radius of each block of BLOCK samples (block b holds indices b·BLOCK …). */
+function blockMaxima(radii: Float64Array): Float64Array {
+  const out = new Float64Array(Math.ceil(radii.length / BLOCK)).fill(-Infinity);
+  for (let j = 0; j < radii.length; j++) {
+    const b = (j / BLOCK) | 0;
+    if (radii[j] > out[b]) out[b] = radii[j];
   }
-  return bestK;
+  return out;
 }
 
-/** Offset of the point a flat face of half-width `half` rests on. */
-function scanFlat(radii: Float64Array, centre: number, reach: number, cos: Float64Array, sin: Float64Array, half: number): number {
-  let best = radii[centre];
+/**
+ * Offset of the point the rubber rests on, scanning outward on each side. A point can win only if
+ * r·cos + lift[k] beats the best so far (the root is skipped otherwise), and a whole block only if its
+ * largest radius times the cosine of its nearest offset does: a wide rubber on a finely sampled
+ * rosette looks at its few candidate crests, not at every sample within reach.
+ */
+function scan(radii: Float64Array, blocks: Float64Array, centre: number, reach: number, cos: Float64Array, sin: Float64Array, lift: Float64Array, touch: Touch): number {
+  let best = touch.at(radii[centre], 1, 0);
   let bestK = 0;
-  for (let k = 1; k <= reach; k++) {
-    const c = cos[k];
-    const sn = sin[k];
-    let r = radii[centre - k];
-    if (r * c > best && r * sn <= half) {
-      best = r * c;
-      bestK = -k;
-    }
-    r = radii[centre + k];
-    if (r * c > best && r * sn <= half) {
-      best = r * c;
-      bestK = k;
+  for (let dir = 1; dir >= -1; dir -= 2) {
+    let k = 1;
+    while (k <= reach) {
+      const b = ((centre + dir * k) / BLOCK) | 0;
+      const kEnd = Math.min(reach, dir > 0 ? (b + 1) * BLOCK - 1 - centre : centre - b * BLOCK);
+      if (blocks[b] * cos[k] + lift[k] <= best) {
+        k = kEnd + 1;
+        continue;
+      }
+      for (; k <= kEnd; k++) {
+        const r = radii[centre + dir * k];
+        if (r * cos[k] + lift[k] <= best) continue;
+        const v = touch.at(r, cos[k], sin[k]);
+        if (v > best) {
+          best = v;
+          bestK = dir * k;
+        }
+      }
     }
   }
   return bestK;
 }
 
 interface Touch {
-  /** Upper bound of at(r, c, ·) − r·c, to skip points that cannot win. */
-  lift: number;
   /** Centre position along the ray touching a point at radius r and angle offset with cos c, sin s; −∞ out of reach. */
   at(r: number, c: number, s: number): number;
 }
@@ -126,7 +114,6 @@ interface Touch {
 function roundTouch(rho: number): Touch {
   const rho2 = rho * rho;
   return {
-    lift: rho,
     at(r, c, s) {
       const q = r * s;
       const d = rho2 - q * q;
@@ -136,7 +123,7 @@ function roundTouch(rho: number): Touch {
 }
 
 function flatTouch(halfWidth: number): Touch {
-  return { lift: 0, at: (r, c, s) => (r * s <= halfWidth ? r * c : -Infinity) };
+  return { at: (r, c, s) => (r * s <= halfWidth ? r * c : -Infinity) };
 }
 
 /**

@@ -30,7 +30,9 @@ export function bruteForceProfile(design: Design, perCycle = 3000): ReferencePro
   const L = design.bar.length;
   const rc = design.cutter.diameter / 2;
   const rf = design.follower.radius;
-  const h = T / finestCyclesPerRev(design) / perCycle;
+  // Path samples on x = i·h, h dividing the bar's length: i = −cupReach … n + cupReach (the cutter runs past the ends).
+  const n = Math.ceil((L * finestCyclesPerRev(design) * perCycle) / T);
+  const h = L / n;
   const dPhi = (TAU * h) / T;
   const radius = referenceRadius(design);
   const rMin = design.rosette.baseRadius - design.rosette.layers.reduce((s, l) => s + peakToValley(l) / 2, 0);
@@ -38,21 +40,19 @@ export function bruteForceProfile(design: Design, perCycle = 3000): ReferencePro
   const reachAngle = rubberHalf <= 0 ? 0 : rubberHalf >= rMin ? Math.PI / 2 : Math.asin(rubberHalf / rMin);
   const reach = Math.ceil(reachAngle / dPhi) + 1;
   const cupReach = Math.ceil(rc / h) + 1;
-  // Path samples: i = −cupReach … n + cupReach on x = i·h (the cutter runs past the ends).
-  const n = Math.ceil(L / h);
   const first = -cupReach;
   const count = n + 1 + 2 * cupReach;
   const radii = Float64Array.from({ length: count + 2 * reach }, (_, j) => radius((first - reach + j) * dPhi));
   const s = new Float64Array(count);
   for (let i = 0; i < count; i++) s[i] = rubberAt(radii, i + reach, reach, dPhi, design.rubber);
   let sMin = Infinity;
-  for (let i = cupReach; i <= cupReach + n; i++) if ((i + first) * h <= L + 1e-12) sMin = Math.min(sMin, s[i]);
+  for (let i = cupReach; i <= cupReach + n; i++) sMin = Math.min(sMin, s[i]);
   const y = s.map((v) => design.motion.leverRatio * (v - sMin));
   const edgeAll = envelope(y, h, rc, -1);
   const edge = edgeAll.slice(cupReach, cupReach + n + 1);
   const follower = envelope(edge, h, rf, 1);
   return {
-    x: Float64Array.from({ length: n + 1 }, (_, i) => Math.min(i * h, L)),
+    x: Float64Array.from({ length: n + 1 }, (_, i) => (i === n ? L : i * h)),
     cutter: y.slice(cupReach, cupReach + n + 1),
     bar: edge,
     follower,
