@@ -1,17 +1,21 @@
 import { and, asc, count, desc, eq, gte, inArray, isNotNull, lt, type SQL } from 'drizzle-orm';
-import type { AuditEntry, AuditPage, AuditQuery, PersonRef } from '@barwright/contracts';
+import { LATEST_INSTANT_MS, type AuditEntry, type AuditPage, type AuditQuery, type PersonRef } from '@barwright/contracts';
 import { auditLog } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { toAuditEntry } from './audit-log';
 
 const DAY_MS = 86_400_000;
 
-/** A bare date means the start of that UTC day; `to` as a bare date takes in the whole day. */
+/**
+ * A bare date means the start of that UTC day; `to` as a bare date takes in the whole day. A `to` at
+ * the end of the range needs no bound (its day after would be year 10000, which the database refuses).
+ */
 function bounds(q: Pick<AuditQuery, 'from' | 'to'>): { from?: Date; before?: Date } {
   const isDay = (v: string) => v.length === 10;
+  const before = q.to ? (isDay(q.to) ? Date.parse(`${q.to}T00:00:00Z`) + DAY_MS : Date.parse(q.to) + 1) : undefined;
   return {
     from: q.from ? new Date(isDay(q.from) ? `${q.from}T00:00:00Z` : q.from) : undefined,
-    before: q.to ? new Date(isDay(q.to) ? Date.parse(`${q.to}T00:00:00Z`) + DAY_MS : Date.parse(q.to) + 1) : undefined,
+    before: before !== undefined && before <= LATEST_INSTANT_MS ? new Date(before) : undefined,
   };
 }
 

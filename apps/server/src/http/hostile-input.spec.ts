@@ -122,6 +122,12 @@ describe.each(drivers)('hostile input on %s', (driver) => {
     expect((await maren.client.get(`/api/notifications?before=${encodeURIComponent('2024-02-01T00:00:00Z')}`)).status).toBe(200);
   });
 
+  it('takes the last day of the range in the audit query (its day after is past what the database keeps)', async () => {
+    for (const to of ['9999-12-31', '9999-12-31T23:59:59.999Z']) {
+      expect((await mod.get(`/api/moderation/audit?to=${encodeURIComponent(to)}`)).status, to).toBe(200);
+    }
+  });
+
   it('answers 404 for malformed ids in every path', async () => {
     const token = await xsrfOf(maren.client);
     for (const bad of LOOSE_IDS) {

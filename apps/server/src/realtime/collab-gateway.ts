@@ -15,7 +15,7 @@ import { originAllowed } from './allowed-origins';
 import { DesignDocStore } from './design-doc-store';
 import type { CloseMatch, ControlMessage, RedisRelay } from './redis-relay';
 import { CLIENT_IDS_PER_SOCKET, stampPresence } from './presence-stamp';
-import { DEFAULT_REALTIME_LIMITS, TokenBucket, type RealtimeLimits } from './realtime-limits';
+import { AccountBuckets, DEFAULT_REALTIME_LIMITS, type RealtimeLimits, type TokenBucket } from './realtime-limits';
 import { UpdateCheck } from './update-check';
 
 const MESSAGE_SYNC = 0;
@@ -90,6 +90,7 @@ const awarenessMessage = (update: Uint8Array) => {
 export class CollabGateway {
   readonly store: DesignDocStore;
   private readonly limits: RealtimeLimits;
+  private readonly buckets: AccountBuckets;
   private readonly wss: WebSocketServer;
   private readonly connections = new Set<Connection>();
   private readonly checks = new WeakMap<Y.Doc, UpdateCheck>();
@@ -99,6 +100,7 @@ export class CollabGateway {
 
   constructor(private readonly deps: CollabGatewayDeps) {
     this.limits = { ...DEFAULT_REALTIME_LIMITS, ...deps.limits };
+    this.buckets = new AccountBuckets(this.limits);
     this.wss = new WebSocketServer({ noServer: true, maxPayload: this.limits.maxFrameBytes });
     this.store = deps.store ?? new DesignDocStore(deps.db, (message) => this.log(new Error(message)));
     const store = this.store;
@@ -112,7 +114,7 @@ export class CollabGateway {
           const { update, lastSeq } = await store.loadAfter(designId, 0);
           Y.applyUpdate(doc, update, 'storage');
           relay?.loaded(designId, doc, lastSeq);
-          this.checks.set(doc, new UpdateCheck(doc));
+          this.checks.set(doc, new UpdateCheck(doc, this.limits));
         })();
         doc.whenInitialized = loaded;
         loaded.catch((error) => {
@@ -168,7 +170,7 @@ export class CollabGateway {
     this.wss.handleUpgrade(req, socket, head, (ws) =>
       this.connect(ws, req, {
         ws, userId: user.id, sessionId: session.sessionId, displayName: user.displayName, boardId: design.boardId, designId, role,
-        updates: new TokenBucket(this.limits.updates), awareness: new TokenBucket(this.limits.awareness), clientIds: new Set(),
+        ...this.buckets.of(user.id), clientIds: new Set(),
       }),
     );
   }

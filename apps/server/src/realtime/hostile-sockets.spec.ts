@@ -137,13 +137,48 @@ describe('hostile collab sockets', () => {
     const doc = new Y.Doc();
     const messages: Uint8Array[] = [];
     doc.on('update', (u: Uint8Array) => messages.push(updateMessage(u)));
-    for (let i = 0; i < 5000; i++) doc.getMap('burst').set(`k${i}`, i);
+    for (let i = 0; i < 5000; i++) doc.getText('notes').insert(0, 'x');
     for (const m of messages) ws.send(m);
     expect((await closed).code).toBe(CLOSE_CODES.rateLimited);
     const stored = await server.collab.store.rowCount(designId);
     // The burst, plus what the bucket refilled while they were stored (a fraction of a second).
     expect(stored).toBeLessThan(DEFAULT_REALTIME_LIMITS.updates.burst + DEFAULT_REALTIME_LIMITS.updates.perSecond * 3);
     expect(await healthy()).toBe(true);
+  });
+
+  it('shares the update allowance among all the sockets of one account, so opening more sockets buys no more', async () => {
+    const sockets = await Promise.all([open(), open(), open(), open()]);
+    const closes = sockets.map((ws) => closeOf(ws).then((c) => c.code));
+    const perSocket = Math.ceil((DEFAULT_REALTIME_LIMITS.updates.burst * 1.5) / sockets.length); // each under the burst alone
+    for (const ws of sockets) {
+      const doc = new Y.Doc();
+      doc.on('update', (u: Uint8Array) => ws.readyState === WebSocket.OPEN && ws.send(updateMessage(u)));
+      for (let i = 0; i < perSocket; i++) doc.getText('notes').insert(0, 'y');
+    }
+    expect(await Promise.race([...closes, wait(3000).then(() => 0)])).toBe(CLOSE_CODES.rateLimited);
+    expect(await server.collab.store.rowCount(designId)).toBeLessThan(DEFAULT_REALTIME_LIMITS.updates.burst + DEFAULT_REALTIME_LIMITS.updates.perSecond * 3);
+  });
+
+  it('refuses updates that would make the document too big to open: a new top-level type, a design or notes over the limit', async () => {
+    const send = async (change: (doc: Y.Doc) => void) => {
+      const ws = await open();
+      const closed = closeOf(ws);
+      const doc = new Y.Doc();
+      const updates: Uint8Array[] = [];
+      doc.on('update', (u: Uint8Array) => updates.push(u));
+      change(doc);
+      ws.send(updateMessage(Y.mergeUpdates(updates)));
+      return Promise.race([closed.then((c) => c.code), wait(1500).then(() => 0)]);
+    };
+    const rows = await server.collab.store.rowCount(designId);
+    expect(await send((doc) => doc.getMap('junk').set('s', 'a'.repeat(1000)))).toBe(CLOSE_CODES.invalidUpdate);
+    const big = 'a'.repeat(DEFAULT_REALTIME_LIMITS.maxDesignJsonBytes);
+    expect(await send((doc) => doc.getMap('design').set('padding', big))).toBe(CLOSE_CODES.invalidUpdate);
+    expect(await send((doc) => doc.getText('notes').insert(0, 'n'.repeat(DEFAULT_REALTIME_LIMITS.maxNotesChars + 1)))).toBe(CLOSE_CODES.invalidUpdate);
+    expect(await server.collab.store.rowCount(designId)).toBe(rows);
+    // A design under the limits is still accepted.
+    expect(await send((doc) => doc.getText('notes').insert(0, 'a fair note'))).toBe(0);
+    await eventually(async () => (await server.collab.store.rowCount(designId)) === rows + 1, 3000, 'the fair note stored');
   });
 
   it('refuses one socket more than a session may open (4429)', async () => {

@@ -10,15 +10,26 @@ export interface RealtimeLimits {
    * 1 MiB fits that state and its notes; ws's default (100 MiB) let one message hold 8 GB.
    */
   maxFrameBytes: number;
-  /** Document updates per socket: a token bucket of `burst` tokens refilled at `perSecond`; past it the socket is closed (rateLimited). */
+  /**
+   * Document updates per account, over all its sockets and sessions (a bucket per socket would grow
+   * with every socket opened): a token bucket of `burst` tokens refilled at `perSecond`; past it the
+   * socket that sent the update is closed (rateLimited). The bucket outlives a reconnect.
+   */
   updates: { burst: number; perSecond: number };
-  /** Presence (awareness) messages per socket: past the bucket they are dropped (presence is superseded by the next one anyway). */
+  /** Presence (awareness) messages per account: past the bucket they are dropped (presence is superseded by the next one anyway). */
   awareness: { burst: number; perSecond: number };
   /** Largest awareness message relayed (bytes); a presence state is about 150 bytes. Larger ones are dropped. */
   maxAwarenessBytes: number;
   /** Open collab sockets per session, and per user over all their sessions; one more is refused (tooManySockets). */
   socketsPerSession: number;
   socketsPerUser: number;
+  /**
+   * Largest design a document may hold, as the JSON of its design map (bytes), and the longest notes
+   * (characters). The largest valid design (8 layers × 3600 measured readings) is about 400 KiB of
+   * JSON; without a bound, updates each under the frame size add up to a document too big to open.
+   */
+  maxDesignJsonBytes: number;
+  maxNotesChars: number;
   /** Bytes queued for one socket above which it is dropped as a slow consumer (it reconnects and syncs afresh). */
   slowConsumerBytes: number;
   /** socket.io: largest message a client may send (bytes; clients only send the handshake and pings). */
@@ -39,6 +50,8 @@ export const DEFAULT_REALTIME_LIMITS: RealtimeLimits = {
   socketsPerUser: 48,
   // Four full states of the largest design.
   slowConsumerBytes: 4 * 1024 * 1024,
+  maxDesignJsonBytes: 768 * 1024,
+  maxNotesChars: 50_000,
   notifyMaxMessageBytes: 16 * 1024,
   notifySocketsPerSession: 16,
   notifySocketsPerUser: 48,
@@ -60,5 +73,32 @@ export class TokenBucket {
     if (this.tokens < 1) return false;
     this.tokens -= 1;
     return true;
+  }
+
+  /** True once the bucket has refilled completely: forgetting it then gives nobody a larger allowance. */
+  full(): boolean {
+    return this.tokens + ((performance.now() - this.last) / 1000) * this.rate.perSecond >= this.rate.burst;
+  }
+}
+
+/** The update and presence buckets of each account, shared by all its sockets and kept until they refill. */
+export class AccountBuckets {
+  private readonly buckets = new Map<string, { updates: TokenBucket; awareness: TokenBucket }>();
+
+  constructor(private readonly limits: Pick<RealtimeLimits, 'updates' | 'awareness'>) {}
+
+  of(userId: string): { updates: TokenBucket; awareness: TokenBucket } {
+    let found = this.buckets.get(userId);
+    if (!found) {
+      this.sweep();
+      found = { updates: new TokenBucket(this.limits.updates), awareness: new TokenBucket(this.limits.awareness) };
+      this.buckets.set(userId, found);
+    }
+    return found;
+  }
+
+  /** Drops the buckets that have refilled (their accounts went quiet), so the map stays as small as the active accounts. */
+  sweep(): void {
+    for (const [userId, b] of this.buckets) if (b.updates.full() && b.awareness.full()) this.buckets.delete(userId);
   }
 }

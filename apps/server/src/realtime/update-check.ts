@@ -1,6 +1,10 @@
 import * as Y from 'yjs';
 import { parseDesign } from '@barwright/contracts';
-import { DESIGN_MAP, readDesign } from '@barwright/contracts/design-doc';
+import { DESIGN_MAP, NOTES_TEXT, readDesign } from '@barwright/contracts/design-doc';
+import type { RealtimeLimits } from './realtime-limits';
+
+/** The only top-level types a design document has; an update that adds another is refused. */
+const TOP_LEVEL = new Set([DESIGN_MAP, NOTES_TEXT]);
 
 /**
  * Deepest nesting of Yjs types allowed in the design map. A valid design nests 5 levels
@@ -17,6 +21,10 @@ export const MAX_DESIGN_DEPTH = 16;
 export class UpdateCheck {
   private shadow!: Y.Doc;
   private designTouched = false;
+  private notesTouched = false;
+  /** Size of the design's JSON as last checked: a stored design already over the limit may shrink, not grow. */
+  private designBytes = 0;
+  private notesChars = 0;
   private readonly follow = (update: Uint8Array) => {
     try {
       Y.applyUpdate(this.shadow, update);
@@ -25,7 +33,10 @@ export class UpdateCheck {
     }
   };
 
-  constructor(private readonly live: Y.Doc) {
+  constructor(
+    private readonly live: Y.Doc,
+    private readonly limits: Pick<RealtimeLimits, 'maxDesignJsonBytes' | 'maxNotesChars'>,
+  ) {
     this.reset();
     live.on('update', this.follow);
   }
@@ -33,14 +44,29 @@ export class UpdateCheck {
   /** Why the update must be refused, or undefined when it applies and leaves the design readable. */
   refusal(update: Uint8Array): string | undefined {
     this.designTouched = false;
+    this.notesTouched = false;
     try {
+      const namesBefore = new Set(this.shadow.share.keys());
       Y.applyUpdate(this.shadow, update, 'check');
+      // Only names this update adds: a document stored before the check may hold others, and must stay editable.
+      for (const name of this.shadow.share.keys()) {
+        if (!TOP_LEVEL.has(name) && !namesBefore.has(name)) throw new Error(`a top-level type "${name.slice(0, 40)}" that a design does not have`);
+      }
       if (this.designTouched) {
         const map = this.shadow.getMap(DESIGN_MAP);
         if (depthOf(map) > MAX_DESIGN_DEPTH) throw new Error(`the design nests deeper than ${MAX_DESIGN_DEPTH} levels`);
+        const design = readDesign(this.shadow);
+        const bytes = Buffer.byteLength(JSON.stringify(design));
+        if (bytes > this.limits.maxDesignJsonBytes && bytes > this.designBytes) throw new Error(`the design is larger than ${this.limits.maxDesignJsonBytes} bytes`);
+        this.designBytes = bytes;
         // An invalid value (a field being typed) is allowed: the editor flags it and reads refuse it with 422.
-        parseDesign(readDesign(this.shadow));
+        parseDesign(design);
       }
+      const notes = this.shadow.getText(NOTES_TEXT).length;
+      if (this.notesTouched && notes > this.limits.maxNotesChars && notes > this.notesChars) {
+        throw new Error(`the notes are longer than ${this.limits.maxNotesChars} characters`);
+      }
+      this.notesChars = notes;
       return undefined;
     } catch (error) {
       this.reset(); // the shadow may hold half of the refused update
@@ -53,7 +79,14 @@ export class UpdateCheck {
     this.shadow?.destroy();
     this.shadow = new Y.Doc();
     Y.applyUpdate(this.shadow, Y.encodeStateAsUpdate(this.live));
+    try {
+      this.designBytes = Buffer.byteLength(JSON.stringify(readDesign(this.shadow)));
+    } catch {
+      this.designBytes = Infinity; // a stored design too deep to read: it may only shrink
+    }
+    this.notesChars = this.shadow.getText(NOTES_TEXT).length;
     this.shadow.getMap(DESIGN_MAP).observeDeep(() => (this.designTouched = true));
+    this.shadow.getText(NOTES_TEXT).observe(() => (this.notesTouched = true));
   }
 
   dispose(): void {
