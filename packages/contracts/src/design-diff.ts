@@ -118,6 +118,8 @@ function studyChanges(list: ChangeList, a: Design, b: Design) {
   }
   list.plain('study.vAngle', 'V-cutter included angle', (d) => d.study.vAngle, (v) => `${formatNumber(v)}°`);
   list.length('study.depth', 'Engraving depth', (d) => d.study.depth);
+  const direction = (d: Design) => (d.study.direction === 'as-bar' ? 'as the bar' : 'mirror of the bar');
+  list.plain('study.direction', 'Engraved line', direction, (v) => v);
 }
 
 /**

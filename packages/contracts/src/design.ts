@@ -89,6 +89,10 @@ const scheduleSchema = z.discriminatedUnion('kind', [
 export type PhaseSchedule = z.infer<typeof scheduleSchema>;
 export type ScheduleKind = PhaseSchedule['kind'];
 
+/** How the engraved line relates to the bar: its mirror (the default) or the same way round. */
+export const STUDY_DIRECTIONS = ['mirrored', 'as-bar'] as const;
+export type StudyDirection = (typeof STUDY_DIRECTIONS)[number];
+
 const pivotSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('linear') }),
   /** `distance`: from the rocking axis to the spindle centre line, a length. */
@@ -132,6 +136,12 @@ export const designSchema = z
       /** Included angle of the V-cutter, degrees. */
       vAngle: finite.gt(0, 'must be greater than 0°').lt(180, 'must be less than 180°'),
       depth: nonNegative,
+      /**
+       * Which way the engraved line runs against the bar: `mirrored` (the default, and what files without
+       * the field mean), Y_j(x) = j·p + F(Δ_j − x), the work moving against the bar; `as-bar`,
+       * Y_j(x) = j·p + F(x + Δ_j), for a machine that runs the other way.
+       */
+      direction: z.enum(STUDY_DIRECTIONS, { error: 'must be "mirrored" or "as-bar"' }).optional(),
     }),
     plan: z.strictObject({
       /** Depth taken in one pass, a length. */

@@ -135,3 +135,42 @@ describe('computeLineStudy from a profile', () => {
     expect(differs).toBe(true);
   });
 });
+
+describe('which way the engraved line runs', () => {
+  // A lopsided lobe (a Fourier wave with a sine term), so that a line and its mirror differ.
+  const lopsided: Design = {
+    ...EXAMPLE_DESIGN,
+    rosette: { baseRadius: 50, layers: [{ lobes: 12, amplitude: 1.5, phase: 0, wave: { shape: 'fourier', terms: [{ k: 1, a: 1, b: 0 }, { k: 2, a: 0, b: 0.4 }] } }] },
+    study: { ...EXAMPLE_DESIGN.study, lines: 2, schedule: { kind: 'alternate' } },
+  };
+  const profile = computeProfile(lopsided);
+  const P = profile.period;
+  const low = Math.min(...profile.followerPath.slice(1000, 10000).map((p) => p[1]));
+  /** The follower path F(u) − its lowest point, read clear of the bar's ends (u taken modulo the period). */
+  const F = (u: number) => {
+    const local = u - Math.floor(u / P) * P + 10 * P;
+    const i = Math.round(local / profile.step);
+    return profile.followerPath[i][1] - low;
+  };
+  const tolerance = 0.02 * 1.5 + 1e-3; // the template is decimated to 2 % of its height
+
+  it('is the mirror of the bar by default: Y_j(x) = j·p + F(Δ_j − x)', () => {
+    const study = computeLineStudy(lopsided, profile);
+    for (const line of study.lines) {
+      for (const [x, y] of line.points.filter((_, i) => i % 7 === 0)) expect(Math.abs(y - line.index * study.spacing - F(line.phase * P - x))).toBeLessThan(tolerance);
+    }
+  });
+
+  it('runs as the bar when the design says so: Y_j(x) = j·p + F(x + Δ_j)', () => {
+    const study = computeLineStudy({ ...lopsided, study: { ...lopsided.study, direction: 'as-bar' } }, profile);
+    let apart = 0;
+    for (const line of study.lines) {
+      for (const [x, y] of line.points.filter((_, i) => i % 7 === 0)) {
+        const height = y - line.index * study.spacing;
+        expect(Math.abs(height - F(x + line.phase * P))).toBeLessThan(tolerance);
+        apart = Math.max(apart, Math.abs(height - F(line.phase * P - x)));
+      }
+    }
+    expect(apart).toBeGreaterThan(0.1); // a lopsided lobe reads differently the other way round
+  });
+});

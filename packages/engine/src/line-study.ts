@@ -25,7 +25,8 @@ interface Template {
 
 /**
  * Line j is Y_j(x) = j·p + F(Δ_j − x): the follower path F (relative to its lowest point) mirrored,
- * as the work moves against the bar, and shifted by the schedule's phase Δ_j. F is one period of an
+ * as the work moves against the bar, and shifted by the schedule's phase Δ_j. With
+ * `study.direction: 'as-bar'` (a machine that runs the other way) it is Y_j(x) = j·p + F(x + Δ_j). F is one period of an
  * endless bar (no end effects), decimated once to an error of 2 % of its height (at most 0.02 mm,
  * a tenth of a pixel on a whole-bar view and well inside the groove's stroke; at least 0.5 µm),
  * so each line is that template laid end to end. A given profile (in mm, as computeProfile returns
@@ -33,13 +34,17 @@ interface Template {
  */
 export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
   const mm = design.units === 'mm' ? design : toMm(design);
-  const template = lineTemplate(mm, profile);
+  const mirrored = lineTemplate(mm, profile);
+  // F(x + Δ) = G(−Δ − x) with G(u) = F(−u): the same walk over the template read backwards.
+  const asBar = mm.study.direction === 'as-bar';
+  const template = asBar ? reversed(mirrored) : mirrored;
   const { lineSpacing: spacing, lines: count, schedule, vAngle, depth } = mm.study;
   const length = mm.bar.length;
   const lines = Array.from({ length: count }, (_, index) => {
     // Reduced before use: a phase of 1e20 periods would leave the walk below without a step to take.
     const phase = reducedPhase(linePhase(schedule, index));
-    return { index, phase, points: layLine(template, phase * template.period, index * spacing, length) };
+    const shift = (asBar ? 1 - phase : phase) * template.period; // −Δ taken as 1 − Δ, so the walk starts from a non-negative shift
+    return { index, phase, points: layLine(template, shift, index * spacing, length) };
   });
   return { spacing, width: vGrooveWidth(depth, vAngle), length, lines };
 }
@@ -93,6 +98,16 @@ function periodFromProfile(design: Design, profile: Profile): PeriodLine | undef
   let low = Infinity;
   for (const v of line) low = Math.min(low, v);
   return { line: line.map((v) => v - low), step: profile.step };
+}
+
+/** G(u) = F(−u): vertices at P − u in reverse order (u[last] = P repeats u[0] = 0 either way). */
+function reversed(t: Template): Template {
+  const n = t.u.length;
+  return {
+    period: t.period,
+    u: Float64Array.from({ length: n }, (_, i) => t.period - t.u[n - 1 - i]),
+    v: Float64Array.from({ length: n }, (_, i) => t.v[n - 1 - i]),
+  };
 }
 
 /** The template's height at u (mm, any real), linear between its vertices like the drawn polyline. */

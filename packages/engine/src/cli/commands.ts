@@ -31,7 +31,7 @@ const profileCommand: Command = {
   summary: 'the cutter path, bar edge and follower path as JSON',
   usage: 'barwright profile FILE [--step S] [--companion counter-phase|inverted|opposite]',
   details: [
-    'Prints { units, period, cutterPath, barEdge, followerPath, minRadiusOfCurvature, warnings }.',
+    'Prints { units, period, cutterPath, barEdge, followerPath, minRadiusOfCurvature, crest, warnings }: minRadiusOfCurvature is 0 at a sharp corner, and crest says so in words ("sharp corner at x …").',
     'Paths are [[x, y], ...]: x along the bar, y the height, 0 at the cutter path\'s lowest point.',
     '  --step S   sampling interval along x, in the file\'s units, at least 0.001 mm (default: 1/2000 of the period,',
     '             within 0.1 % of the amplitude at sharp crests, at most 0.02 mm and 150 000 points; a warning',

@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input, signal } from '@an
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import type { Design } from '@barwright/contracts';
 import type { StudyData } from '../../studio/compute/design-views';
+import { studyDirectionNote } from '../../studio/views/study-direction-note';
 import { studyDrawing, type StudyWindow } from '../../studio/views/study-drawing';
 import { lengthText } from './length-text';
 import { LitPlate } from './lit-plate';
@@ -28,7 +29,7 @@ import { LitPlate } from './lit-plate';
             @for (line of d.lines; track $index) { <polyline [attr.points]="line" /> }
           </g>
         </svg>
-        <p id="entry-study-caption" class="caption">{{ summary() }}. True scale, from {{ d.from.toFixed(1) }} to {{ d.to.toFixed(1) }} mm along the bar.</p>
+        <p id="entry-study-caption" class="caption">{{ summary() }}. {{ direction() }}. True scale, from {{ d.from.toFixed(1) }} to {{ d.to.toFixed(1) }} mm along the bar.</p>
         <h3 class="sub">Lit</h3>
         <bw-lit-plate [study]="study()!" [window]="window()" [depthMm]="depthMm()" [vAngle]="design().study.vAngle" />
       } @else {
@@ -55,6 +56,8 @@ export class EntryLineStudy {
     const len = (mm: number) => lengthText(mm, design.units);
     return `${study.lines.length} lines ${len(study.spacing)} apart, grooves ${len(study.width)} wide (a ${design.study.vAngle}° V-cutter ${len(this.depthMm())} deep)`;
   });
+
+  protected readonly direction = computed(() => studyDirectionNote(this.design().study.direction));
 
   protected setWindow(value: string): void {
     this.window.set(value === 'whole' ? 'whole' : (Number(value) as StudyWindow));

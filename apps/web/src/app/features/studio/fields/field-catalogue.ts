@@ -1,4 +1,4 @@
-import type { MaterialId, ScheduleKind, WaveShape } from '@barwright/contracts';
+import type { MaterialId, ScheduleKind, StudyDirection, WaveShape } from '@barwright/contracts';
 
 /**
  * What a field of the design file measures, so the editor can show its unit and compare it in the
@@ -52,6 +52,7 @@ export const FIELDS: Readonly<Record<string, FieldInfo>> = {
   'study.schedule.phases': { label: 'Phase list', kind: 'list' },
   'study.vAngle': { label: 'V-cutter included angle', kind: 'angle', slider: [30, 170] },
   'study.depth': { label: 'Groove depth', kind: 'length', slider: [0, 1] },
+  'study.direction': { label: 'Engraved line', kind: 'choice' },
   'plan.stepOver': { label: 'Step-over per pass', kind: 'length', slider: [0.01, 2] },
   'plan.cleanup': { label: 'Clean-up depth', kind: 'length', slider: [0, 2] },
   'plan.travelSpeed': { label: 'Travel speed', kind: 'speed', slider: [10, 2000] },
@@ -88,6 +89,11 @@ export const MATERIAL_LABELS: Readonly<Record<MaterialId, string>> = {
 export const PIVOT_LABELS: Readonly<Record<'linear' | 'rocking', string>> = {
   linear: 'Straight line (pumping)',
   rocking: 'Rocking about an axis',
+};
+
+export const STUDY_DIRECTION_LABELS: Readonly<Record<StudyDirection, string>> = {
+  mirrored: 'Mirror of the bar (the work moves against it)',
+  'as-bar': 'Same way as the bar (the machine runs the other way)',
 };
 
 export const MEASURED_SCALE_LABELS: Readonly<Record<'as-read' | 'to-amplitude', string>> = {

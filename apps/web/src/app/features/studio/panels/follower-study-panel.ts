@@ -3,7 +3,7 @@ import type { ScheduleKind } from '@barwright/contracts';
 import { CollabSession } from '../collab/collab-session';
 import { ChoiceField, choicesOf } from '../fields/choice-field/choice-field';
 import { valueAt } from '../fields/design-values';
-import { SCHEDULE_LABELS } from '../fields/field-catalogue';
+import { SCHEDULE_LABELS, STUDY_DIRECTION_LABELS } from '../fields/field-catalogue';
 import { NumberField } from '../fields/number-field/number-field';
 import { PhaseList } from './phase-list';
 import { scheduleFor } from './shape-defaults';
@@ -31,6 +31,8 @@ import { scheduleFor } from './shape-defaults';
         }
         <bw-number-field path="study.vAngle" />
         <bw-number-field path="study.depth" hint="Depth of the V-groove; its width follows from the angle" />
+        <bw-choice-field path="study.direction" [options]="directionChoices" fallback="mirrored" (choose)="setDirection($event)"
+                         hint="The engraved line is the bar's mirror when the work moves against the bar; flip it if your machine runs the other way" />
       </fieldset>
     </div>
   `,
@@ -41,6 +43,12 @@ export class FollowerStudyPanel {
   private readonly session = inject(CollabSession);
   protected readonly scheduleChoices = choicesOf(SCHEDULE_LABELS);
   protected readonly kind = computed(() => valueAt(this.session.design(), 'study.schedule.kind'));
+
+  protected readonly directionChoices = choicesOf(STUDY_DIRECTION_LABELS);
+
+  protected setDirection(direction: string): void {
+    this.session.setField(['study', 'direction'], direction);
+  }
 
   protected setKind(kind: string): void {
     this.session.setField(['study', 'schedule'], scheduleFor(kind as ScheduleKind));

@@ -5,6 +5,7 @@ import { DesignCompute } from '../../compute/design-compute';
 import { displayNumber } from '../../units/field-units';
 import { LitStudy } from '../lit-study/lit-study';
 import { PointerArea } from '../pointer-area/pointer-area';
+import { studyDirectionNote } from '../study-direction-note';
 import { studyDrawing, type StudyWindow } from '../study-drawing';
 
 /** The line study: what the bar engraves on the straight-line machine, drawn flat and lit. */
@@ -34,6 +35,8 @@ export class LineStudyView {
     const len = (mm: number) => `${displayNumber('length', units === 'in' ? mm / 25.4 : mm, units)} ${units}`;
     return `${study.lines.length} lines ${len(study.spacing)} apart, grooves ${len(study.width)} wide (a ${study.vAngle}° V-cutter ${len(study.depth)} deep)`;
   });
+
+  protected readonly direction = computed(() => studyDirectionNote(this.session.lastValid()?.study.direction));
 
   protected setWindow(value: string): void {
     this.window.set(value === 'whole' ? 'whole' : (Number(value) as StudyWindow));
