@@ -175,6 +175,19 @@ describe('hostile collab sockets', () => {
     const big = 'a'.repeat(DEFAULT_REALTIME_LIMITS.maxDesignJsonBytes);
     expect(await send((doc) => doc.getMap('design').set('padding', big))).toBe(CLOSE_CODES.invalidUpdate);
     expect(await send((doc) => doc.getText('notes').insert(0, 'n'.repeat(DEFAULT_REALTIME_LIMITS.maxNotesChars + 1)))).toBe(CLOSE_CODES.invalidUpdate);
+    // The refused edit's successor from the same client waits for it forever: refused too, not stored as pending bytes.
+    const refusedFirst = new Y.Doc();
+    refusedFirst.getMap('design').set('padding', big);
+    const successor = (() => {
+      const updates: Uint8Array[] = [];
+      refusedFirst.on('update', (u: Uint8Array) => updates.push(u));
+      refusedFirst.getMap('design').set('padding', 'small again');
+      return updates[0];
+    })();
+    const ws = await open();
+    const closed = closeOf(ws);
+    ws.send(updateMessage(successor));
+    expect(await Promise.race([closed.then((c) => c.code), wait(1500).then(() => 0)])).toBe(CLOSE_CODES.invalidUpdate);
     expect(await server.collab.store.rowCount(designId)).toBe(rows);
     // A design under the limits is still accepted.
     expect(await send((doc) => doc.getText('notes').insert(0, 'a fair note'))).toBe(0);

@@ -47,7 +47,11 @@ export class UpdateCheck {
     this.notesTouched = false;
     try {
       const namesBefore = new Set(this.shadow.share.keys());
+      const pendingBefore = pendingBytes(this.shadow);
       Y.applyUpdate(this.shadow, update, 'check');
+      // An update that waits for one the server never had (the client's refused or lost edit) would be
+      // stored, and sent to everyone, whole and unread; no check here can see inside it.
+      if (pendingBytes(this.shadow) > pendingBefore) throw new Error('an update that depends on edits the server does not have');
       // Only names this update adds: a document stored before the check may hold others, and must stay editable.
       for (const name of this.shadow.share.keys()) {
         if (!TOP_LEVEL.has(name) && !namesBefore.has(name)) throw new Error(`a top-level type "${name.slice(0, 40)}" that a design does not have`);
@@ -93,6 +97,11 @@ export class UpdateCheck {
     this.live.off('update', this.follow);
     this.shadow.destroy();
   }
+}
+
+/** Bytes of updates a document holds back because what they build on has not arrived. */
+function pendingBytes(doc: Y.Doc): number {
+  return (doc.store.pendingStructs?.update.length ?? 0) + (doc.store.pendingDs?.length ?? 0);
 }
 
 /** Nesting depth of Yjs types under `root`, without recursion. */
