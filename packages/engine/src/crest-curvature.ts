@@ -48,8 +48,8 @@ export function crestText(crest: CrestCurvature, units: Units): string {
 /** Polar slope and bend of the rubber's track at one angle, or why there is none. */
 type Reading = { ok: true; s: number; s1: number; s2: number } | { ok: false };
 
-/** Nodes examined at most; beyond, every k-th node, then the smallest is refined on the exact geometry. */
-const MAX_EXAMINED = 200_000;
+/** Nodes examined per feature of the period (a lobe, times its highest harmonic or its readings), at least; the smallest is then refined on the exact geometry. */
+const EXAMINED_PER_FEATURE = 48;
 
 /**
  * The smallest radius of curvature of the crests of the cutter path y(x) = k·(s(ψ) − sMin), ψ = 2π·x/T,
@@ -77,7 +77,7 @@ export function crestCurvature(input: CrestInput): CrestCurvature {
     const y2 = sign * k * omega * omega * read.s2;
     return y2 < 0 ? (1 + y1 * y1) ** 1.5 / -y2 : Infinity;
   };
-  const stride = Math.max(1, Math.ceil(s.length / MAX_EXAMINED));
+  const stride = Math.max(1, Math.floor(s.length / (EXAMINED_PER_FEATURE * featuresPerPeriod(design))));
   let least = Infinity;
   let best = -1;
   let trimmed = -1;
@@ -86,12 +86,14 @@ export function crestCurvature(input: CrestInput): CrestCurvature {
     if (Number.isNaN(r)) trimmed = trimmed < 0 ? i : trimmed;
     else if (r < least) [least, best] = [r, i];
   }
-  if (best >= 0) least = refineMinimum(radiusAt, best * dTheta, stride * dTheta, least);
+  let at = best * dTheta;
+  if (best >= 0) [least, at] = refineMinimum(radiusAt, at, stride * dTheta, least);
   const corner = pathCorner(track.corners, input, trimmed);
   if (corner !== null) return { radius: 0, corner: true, x: corner, pathRadius: 0 };
   if (best < 0) return { radius: Infinity, corner: false, x: null, pathRadius: Infinity };
   const ridge = least <= rc;
-  return { radius: ridge ? 0 : least - rc, corner: ridge, x: best * step, pathRadius: least };
+  const x = Math.max(0, Math.min((s.length - 1) * step, (at / dTheta) * step));
+  return { radius: ridge ? 0 : least - rc, corner: ridge, x, pathRadius: least };
 }
 
 /** x (mm) of the first sharp crest of the path, or null: a convex rosette corner read by a point, or (inverted) any valley corner. */
@@ -111,7 +113,7 @@ function pathCorner(corners: Corner[], input: CrestInput, trimmed: number): numb
 }
 
 /** Golden-section search for the smallest radius within one examined interval each side of ψ. */
-function refineMinimum(radiusAt: (psi: number) => number, psi: number, width: number, found: number): number {
+function refineMinimum(radiusAt: (psi: number) => number, psi: number, width: number, found: number): [radius: number, psi: number] {
   const g = (Math.sqrt(5) - 1) / 2;
   const f = (p: number) => {
     const r = radiusAt(p);
@@ -134,7 +136,8 @@ function refineMinimum(radiusAt: (psi: number) => number, psi: number, width: nu
       fd = f(d);
     }
   }
-  return Math.min(found, fc, fd);
+  if (Math.min(fc, fd) >= found) return [found, psi];
+  return fc < fd ? [fc, c] : [fd, d];
 }
 
 interface TrackReader {
@@ -167,6 +170,7 @@ function trackReader(design: Design): TrackReader {
   const convex = corners.filter((c) => c.convex);
   const rho = rubber.shape === 'round' ? rubber.radius : 0;
   const halfWidth = rubber.shape === 'flat' ? rubber.width / 2 : 0;
+  const lead = { delta: 0 };
   const reach = Math.asin(Math.min(1, (rho + halfWidth) / Math.max(1e-9, rosetteMinRadius(design)))) + 1e-9;
   const read = (psi: number): Reading => {
     for (const c of nearCorners(convex, psi, reach, design)) {
@@ -174,9 +178,18 @@ function trackReader(design: Design): TrackReader {
       if (arc) return arc;
     }
     if (rubber.shape === 'flat') return flatRead(rosetteJet, psi, halfWidth);
-    return roundRead(rosetteJet, psi, rho);
+    return roundRead(rosetteJet, psi, rho, lead);
   };
   return { read, corners };
+}
+
+/** How many distinct features one period of the bar holds: Σ lobes × (highest harmonic, or readings) / G, at least 1. */
+function featuresPerPeriod(design: Design): number {
+  const moving = design.rosette.layers.filter((l) => layerPeakToValley(l) > 0);
+  const repeats = moving.reduce((g, l) => gcd(g, l.lobes), 0) || 1;
+  const detail = (l: (typeof moving)[number]) =>
+    l.wave.shape === 'fourier' ? Math.max(...l.wave.terms.map((t) => t.k)) : l.wave.shape === 'measured' ? l.wave.points.length : 1;
+  return Math.max(1, moving.reduce((sum, l) => sum + (l.lobes * detail(l)) / repeats, 0));
 }
 
 function rosetteMinRadius(design: Design): number {
@@ -268,8 +281,8 @@ function polarReading(s: number, along: number, across: number, kappa: number): 
 }
 
 /** The contact φ whose image lies on the ray ψ: Newton's method on g(φ) = angle − ψ from φ = ψ. */
-function solveContact(angleOf: (phi: number) => number, psi: number): number | undefined {
-  let phi = psi;
+function solveContact(angleOf: (phi: number) => number, psi: number, start = psi): number | undefined {
+  let phi = start;
   const d = 1e-7;
   for (let n = 0; n < 40; n++) {
     const g = angleOf(phi) - psi;
@@ -281,14 +294,16 @@ function solveContact(angleOf: (phi: number) => number, psi: number): number | u
   return Math.abs(angleOf(phi) - psi) < 1e-9 ? phi : undefined;
 }
 
-function roundRead(jet: (t: number) => [number, number, number], psi: number, rho: number): Reading {
+function roundRead(jet: (t: number) => [number, number, number], psi: number, rho: number, lead: { delta: number }): Reading {
   const centreAngle = (phi: number) => {
     const [r, r1] = jet(phi);
     const len = Math.hypot(r, r1);
     return phi + Math.atan2((-rho * r1) / len, r + (rho * r) / len);
   };
-  const phi = rho > 0 ? solveContact(centreAngle, psi) : psi;
+  // Started from the previous reading's lead of the contact over the ray: one or two steps then.
+  const phi = rho > 0 ? (solveContact(centreAngle, psi, psi + lead.delta) ?? solveContact(centreAngle, psi)) : psi;
   if (phi === undefined) return { ok: false };
+  lead.delta = phi - psi;
   const [r, r1, r2] = jet(phi);
   const len = Math.hypot(r, r1);
   const kappa = (r * r + 2 * r1 * r1 - r * r2) / len ** 3;
