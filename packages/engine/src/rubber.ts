@@ -56,6 +56,7 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
     const k = scan(radii, blocks, centre, reach, cos, sin, lift, touch);
     const best = touch.at(radii[centre + k], cos[Math.abs(k)], sin[Math.abs(k)]);
     s[i] = refineMax(best, k, centre, radii, reach, cos, sin, touch, dTheta, radiusAt);
+    if (rubber.shape === 'flat' && radiusAt) s[i] = refineFaceEdge(s[i], k, centre, dTheta, rubber.width / 2, radiusAt);
     contact[i] = k;
   }
   return { s, contact };
@@ -159,6 +160,30 @@ function refineMax(
   const angle = Math.abs(k + p) * dTheta;
   const exact = touch.at(radiusAt(centre + k + p), Math.cos(angle), Math.sin(angle));
   return exact > best ? exact : best;
+}
+
+/**
+ * A flat face often rests on its edge, on a flank steeper than the face: the best sample is then the
+ * last one under the face, up to a sample short of the edge (on a steep flank that is r′·dθ low).
+ * Where the next sample outward is beyond the edge, the edge's own resting place is found on the
+ * rosette itself (bisection on r(φ)·sin(φ − ψ) = w/2, kept on the inner side) and kept if higher.
+ */
+function refineFaceEdge(value: number, k: number, centre: number, dTheta: number, half: number, radiusAt: (index: number) => number): number {
+  let out = value;
+  for (const dir of k === 0 ? [1, -1] : [Math.sign(k)]) {
+    const inside = (u: number) => radiusAt(centre + dir * u) * Math.sin(u * dTheta) <= half;
+    let lo = Math.abs(k);
+    let hi = lo + 1;
+    if (inside(hi)) continue; // the face's edge is not next to the winner
+    for (let n = 0; n < 24; n++) {
+      const mid = (lo + hi) / 2;
+      if (inside(mid)) lo = mid;
+      else hi = mid;
+    }
+    const v = radiusAt(centre + dir * lo) * Math.cos(lo * dTheta);
+    if (v > out) out = v;
+  }
+  return out;
 }
 
 function minOf(values: Float64Array): number {

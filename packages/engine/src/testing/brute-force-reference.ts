@@ -33,18 +33,25 @@ export function bruteForceProfile(design: Design, perCycle = 3000): ReferencePro
   // Path samples on x = i·h, h dividing the bar's length: i = −cupReach … n + cupReach (the cutter runs past the ends).
   const n = Math.ceil((L * finestCyclesPerRev(design) * perCycle) / T);
   const h = L / n;
-  const dPhi = (TAU * h) / T;
   const radius = referenceRadius(design);
   const rMin = design.rosette.baseRadius - design.rosette.layers.reduce((s, l) => s + peakToValley(l) / 2, 0);
   const rubberHalf = design.rubber.shape === 'round' ? design.rubber.radius : design.rubber.width / 2;
   const reachAngle = rubberHalf <= 0 ? 0 : rubberHalf >= rMin ? Math.PI / 2 : Math.asin(rubberHalf / rMin);
+  // The rosette is read `fine` times more densely in angle than the path, so that even a small rubber spans 8 readings.
+  const dPsi = (TAU * h) / T;
+  const fine = rubberHalf > 0 ? Math.min(64, Math.max(1, Math.ceil((8 * dPsi) / reachAngle))) : 1;
+  const dPhi = dPsi / fine;
   const reach = Math.ceil(reachAngle / dPhi) + 1;
   const cupReach = Math.ceil(rc / h) + 1;
   const first = -cupReach;
   const count = n + 1 + 2 * cupReach;
-  const radii = Float64Array.from({ length: count + 2 * reach }, (_, j) => radius((first - reach + j) * dPhi));
+  const radii = Float64Array.from({ length: (count - 1) * fine + 1 + 2 * reach }, (_, j) => radius(first * dPsi + (j - reach) * dPhi));
   const s = new Float64Array(count);
-  for (let i = 0; i < count; i++) s[i] = rubberAt(radii, i + reach, reach, dPhi, design.rubber);
+  for (let i = 0; i < count; i++) s[i] = rubberAt(radii, i * fine + reach, reach, dPhi, design.rubber);
+  if (design.rubber.shape === 'flat') {
+    const half = design.rubber.width / 2;
+    for (let i = 0; i < count; i++) s[i] = Math.max(s[i], faceEdges(radius, (first + i) * dPsi, half, dPhi, reach));
+  }
   let sMin = Infinity;
   for (let i = cupReach; i <= cupReach + n; i++) sMin = Math.min(sMin, s[i]);
   const y = s.map((v) => design.motion.leverRatio * (v - sMin));
@@ -117,6 +124,27 @@ function rubberAt(radii: Float64Array, centre: number, reach: number, dPhi: numb
     } else if (Math.abs(across) <= rubber.width / 2) {
       best = Math.max(best, along);
     }
+  }
+  return best;
+}
+
+/**
+ * A flat face resting on its edge: on each side, the point where r(φ)·|sin(φ − ψ)| reaches w/2,
+ * found by bisection between the last grid angle under the face and the next, and its height r·cos.
+ */
+function faceEdges(radius: (theta: number) => number, psi: number, half: number, dPhi: number, reach: number): number {
+  const inside = (a: number) => Math.abs(radius(psi + a) * Math.sin(a)) <= half;
+  let best = -Infinity;
+  for (const dir of [1, -1]) {
+    let k = 0;
+    while (k < reach && inside(dir * (k + 1) * dPhi)) k++;
+    let [lo, hi] = [k * dPhi, (k + 1) * dPhi];
+    for (let n = 0; n < 50; n++) {
+      const mid = (lo + hi) / 2;
+      if (inside(dir * mid)) lo = mid;
+      else hi = mid;
+    }
+    best = Math.max(best, radius(psi + dir * lo) * Math.cos(lo));
   }
   return best;
 }
