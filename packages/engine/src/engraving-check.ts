@@ -35,7 +35,10 @@ export function followerRadiusWarnings(input: EngravingCheckInput): EngineWarnin
     yHigh = Math.max(yHigh, y[i]);
     fLow = Math.min(fLow, f[i]);
   }
-  const height = yHigh - yLow;
+  // The scale is the path's height along the whole bar: the examined stretch can be short of a period.
+  let [low, high] = [yLow, yHigh];
+  for (let i = 0; i < y.length; i++) [low, high] = [Math.min(low, y[i]), Math.max(high, y[i])];
+  const height = high - low;
   const threshold = Math.max(1e-4, 1e-3 * height);
   const zones: { from: number; to: number }[] = [];
   let worst = 0;
