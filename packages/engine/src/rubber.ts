@@ -48,12 +48,16 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
   const cos = Float64Array.from({ length: reach + 1 }, (_, k) => Math.cos(k * dTheta));
   const sin = Float64Array.from({ length: reach + 1 }, (_, k) => Math.sin(k * dTheta));
   const touch = rubber.shape === 'round' ? roundTouch(rubber.radius) : flatTouch(rubber.width / 2);
-  const blocks = blockMaxima(radii);
+  const blocks = blockMaxima(radii, BLOCK);
+  const supers = blockMaxima(radii, SUPER);
   // The most a point at offset k can add to r·cos: √(ρ² − (r_min·sin)²) for a round rubber (r ≥ r_min), 0 for a flat face.
   const lift = Float64Array.from(sin, (sn) => (rubber.shape === 'round' ? Math.sqrt(Math.max(0, rubber.radius ** 2 - (rMin * sn) ** 2)) : 0));
+  let previous = 0;
   for (let i = 0; i < count; i++) {
     const centre = pad + i;
-    const k = scan(radii, blocks, centre, reach, cos, sin, lift, touch);
+    // The contact moves little from one ψ to the next: the last one (one sample nearer now) is the first guess.
+    const k = scan(radii, blocks, supers, centre, reach, cos, sin, lift, touch, Math.max(-reach, Math.min(reach, previous - 1)));
+    previous = k;
     const best = touch.at(radii[centre + k], cos[Math.abs(k)], sin[Math.abs(k)]);
     s[i] = refineMax(best, k, centre, radii, reach, cos, sin, touch, dTheta, radiusAt);
     if (rubber.shape === 'flat' && radiusAt) s[i] = refineFaceEdge(s[i], k, centre, dTheta, rubber.width / 2, radiusAt);
@@ -62,31 +66,40 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
   return { s, contact };
 }
 
-/** Blocks of this many samples are skipped whole when their largest radius cannot beat the best. */
+/** Blocks of this many samples, and of 16 blocks, are skipped whole when their largest radius cannot beat the best. */
 const BLOCK = 16;
+const SUPER = 16 * BLOCK;
 
-/** The largest radius of each block of BLOCK samples (block b holds indices b·BLOCK …). */
-function blockMaxima(radii: Float64Array): Float64Array {
-  const out = new Float64Array(Math.ceil(radii.length / BLOCK)).fill(-Infinity);
+/** The largest radius of each block of `size` samples (block b holds indices b·size …). */
+function blockMaxima(radii: Float64Array, size: number): Float64Array {
+  const out = new Float64Array(Math.ceil(radii.length / size)).fill(-Infinity);
   for (let j = 0; j < radii.length; j++) {
-    const b = (j / BLOCK) | 0;
+    const b = (j / size) | 0;
     if (radii[j] > out[b]) out[b] = radii[j];
   }
   return out;
 }
 
 /**
- * Offset of the point the rubber rests on, scanning outward on each side. A point can win only if
+ * Offset of the point the rubber rests on, scanning outward on each side from a first guess. A point can win only if
  * r·cos + lift[k] beats the best so far (the root is skipped otherwise), and a whole block only if its
  * largest radius times the cosine of its nearest offset does: a wide rubber on a finely sampled
  * rosette looks at its few candidate crests, not at every sample within reach.
  */
-function scan(radii: Float64Array, blocks: Float64Array, centre: number, reach: number, cos: Float64Array, sin: Float64Array, lift: Float64Array, touch: Touch): number {
+function scan(radii: Float64Array, blocks: Float64Array, supers: Float64Array, centre: number, reach: number, cos: Float64Array, sin: Float64Array, lift: Float64Array, touch: Touch, guess: number): number {
   let best = touch.at(radii[centre], 1, 0);
   let bestK = 0;
+  const g = Math.abs(guess);
+  const atGuess = touch.at(radii[centre + guess], cos[g], sin[g]);
+  if (atGuess > best) [best, bestK] = [atGuess, guess];
   for (let dir = 1; dir >= -1; dir -= 2) {
     let k = 1;
     while (k <= reach) {
+      const sb = ((centre + dir * k) / SUPER) | 0;
+      if (supers[sb] * cos[k] + lift[k] <= best) {
+        k = Math.min(reach, dir > 0 ? (sb + 1) * SUPER - 1 - centre : centre - sb * SUPER) + 1;
+        continue;
+      }
       const b = ((centre + dir * k) / BLOCK) | 0;
       const kEnd = Math.min(reach, dir > 0 ? (b + 1) * BLOCK - 1 - centre : centre - b * BLOCK);
       if (blocks[b] * cos[k] + lift[k] <= best) {
