@@ -304,8 +304,9 @@ export class CollabGateway {
 
   /**
    * Shutdown, before close(): every socket is closed with `code` (a client reconnects, to another
-   * instance behind the balancer), and the updates already received are stored. A socket that does
-   * not finish the closing handshake within `timeoutMs` is cut.
+   * instance behind the balancer), and the update being stored when it closed is stored. Updates
+   * still on the wire are refused with the closed socket; the client keeps them and its next sync
+   * sends them again. A socket that does not finish the closing handshake within `timeoutMs` is cut.
    */
   async drain(code: number, reason: string, timeoutMs = 3_000): Promise<void> {
     await Promise.all(
