@@ -168,12 +168,13 @@ function trackReader(design: Design): TrackReader {
   };
   const corners = rosetteCorners(design, layers);
   const convex = corners.filter((c) => c.convex);
+  const period = (2 * Math.PI) / (layers.reduce((g, l) => gcd(g, l.lobes), 0) || 1);
   const rho = rubber.shape === 'round' ? rubber.radius : 0;
   const halfWidth = rubber.shape === 'flat' ? rubber.width / 2 : 0;
   const lead = { delta: 0 };
   const reach = Math.asin(Math.min(1, (rho + halfWidth) / Math.max(1e-9, rosetteMinRadius(design)))) + 1e-9;
   const read = (psi: number): Reading => {
-    for (const c of nearCorners(convex, psi, reach, design)) {
+    for (const c of nearCorners(convex, psi, reach, period)) {
       const arc = rubber.shape === 'round' ? roundOnCorner(rosetteJet, c, psi, rho) : flatOnCorner(rosetteJet, c, psi);
       if (arc) return arc;
     }
@@ -215,17 +216,36 @@ function rosetteCorners(design: Design, layers: Layer[]): Corner[] {
   return all.sort((a, b) => a.theta - b.theta);
 }
 
-/** The convex corners within `reach` (rad) of ψ, in the periodic sense. */
-function nearCorners(corners: Corner[], psi: number, reach: number, design: Design): Corner[] {
-  if (corners.length === 0) return [];
-  const repeats = design.rosette.layers.filter((l) => layerPeakToValley(l) > 0).reduce((g, l) => gcd(g, l.lobes), 0) || 1;
-  const period = (2 * Math.PI) / repeats;
+/** The convex corners within `reach` (rad) of ψ, in the periodic sense: a binary search in the sorted list, then its neighbours. */
+function nearCorners(corners: Corner[], psi: number, reach: number, period: number): Corner[] {
+  const n = corners.length;
+  if (n === 0) return [];
   const local = psi - Math.floor(psi / period) * period;
+  let lo = 0;
+  let hi = n;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (corners[mid].theta < local - reach) lo = mid + 1;
+    else hi = mid;
+  }
   const near: Corner[] = [];
-  for (const c of corners) {
+  // Walk forward from the first corner at or after local − reach, wrapping round the period once at most.
+  for (let k = 0; k < n; k++) {
+    const c = corners[(lo + k) % n];
     let d = c.theta - local;
     d -= Math.round(d / period) * period;
-    if (Math.abs(d) <= reach) near.push({ theta: psi + d, convex: true });
+    if (Math.abs(d) > reach) {
+      if (k > 0) break;
+      continue;
+    }
+    near.push({ theta: psi + d, convex: true });
+  }
+  // Corners just below the period's end seen from just above its start.
+  if (local - reach < 0) {
+    for (let k = n - 1; k >= 0 && corners[k].theta - period >= local - reach; k--) {
+      const d = corners[k].theta - period - local;
+      if (!near.some((c) => Math.abs(c.theta - (psi + d)) < 1e-12)) near.push({ theta: psi + d, convex: true });
+    }
   }
   return near;
 }
