@@ -107,7 +107,7 @@ export function coarseSamplingWarning(design: Design, grid: BarGrid, units: Unit
   const why =
     requested === undefined
       ? `The bar holds ${Math.round(grid.length / feature)} of its finest features (every ${formatLength(feature, units)}), so the default sampling (every ${formatLength(grid.step, units)}) stops at ${MAX_DEFAULT_SAMPLES} points`
-      : `The step of ${formatLength(grid.step, units)} is coarser than this design needs (its finest feature repeats every ${formatLength(feature, units)}, ${perFeature} points each)`;
+      : `The step of ${formatLength(requested, units)} is coarser than this design needs (its finest feature repeats every ${formatLength(feature, units)}, ${perFeature} points each)`;
   return {
     code: 'other',
     message: `${why}: heights at sharp crests and valleys may be off by up to ${+(100 * worst).toPrecision(2)} % of the amplitude. The error goes with the step: a step of ${fineEnoughStep(needed, units)} keeps it within 0.1 %.`,

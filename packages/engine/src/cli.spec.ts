@@ -100,6 +100,13 @@ describe('barwright CLI (spawned with node)', () => {
     expect(Math.max(...profile.cutterPath.map((p: number[]) => p[1]))).toBeCloseTo(1.5 / MM_PER_INCH, 3);
   });
 
+  it('says in the file\'s units when --step is coarser than the design needs, and the step that is fine enough', async () => {
+    const run = await barwright(['profile', EXAMPLE_IN, '--step', '0.002']);
+    const [coarse] = JSON.parse(run.stdout).warnings.filter((w: { code: string }) => w.code === 'other');
+    // the 24-lobe example's finest feature is its period, 100/24 mm; 1/2000 of it is 0.000082 in
+    expect(coarse.message).toMatch(/step of 0\.002 in is coarser than this design needs.*a step of 0\.000082 in keeps it within 0\.1 %/);
+  });
+
   it('writes warning messages in inches for an inch design, agreeing with the mm design (inch = 25.4 mm, NIST)', async () => {
     // Scalloped lobes meet in cusps that a 0.1 in rubber cannot reach, and the crests are narrower than the cutter.
     const inch = {

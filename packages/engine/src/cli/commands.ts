@@ -33,9 +33,10 @@ const profileCommand: Command = {
   details: [
     'Prints { units, period, cutterPath, barEdge, followerPath, minRadiusOfCurvature, crest, warnings }: minRadiusOfCurvature is 0 at a sharp corner, and crest says so in words ("sharp corner at x …").',
     'Paths are [[x, y], ...]: x along the bar, y the height, 0 at the cutter path\'s lowest point.',
-    '  --step S   sampling interval along x, in the file\'s units, at least 0.001 mm (default: 1/2000 of the period,',
-    '             within 0.1 % of the amplitude at sharp crests, at most 0.02 mm and 150 000 points; a warning',
-    '             says when a bar of more than 75 periods is sampled more coarsely)',
+    '  --step S   sampling interval along x, in the file\'s units, at least 0.001 mm (default: 1/2000 of the finest',
+    '             feature, lobes × harmonic per travel or a measured table\'s spacing, within 0.1 % of the amplitude',
+    '             at sharp crests, at most 0.02 mm and 150 000 points; a warning says when the step, yours or the',
+    '             default, is coarser than the design needs, by how much, and the step that is fine enough)',
     '  --companion C   a companion of the bar instead: counter-phase (shifted half a period), inverted (the cutter',
     '             path mirrored top to bottom, cut afresh) or opposite (the blank above the cutter in the same cut:',
     '             its edge is the upper envelope of the cutter, the follower rides under it; turned over it is the',
