@@ -92,8 +92,8 @@ export const PIVOT_LABELS: Readonly<Record<'linear' | 'rocking', string>> = {
 };
 
 export const STUDY_DIRECTION_LABELS: Readonly<Record<StudyDirection, string>> = {
-  mirrored: 'Mirror of the bar (the work moves against it)',
-  'as-bar': 'Same way as the bar (the machine runs the other way)',
+  mirrored: 'Mirror of the bar',
+  'as-bar': 'Same way as the bar',
 };
 
 export const MEASURED_SCALE_LABELS: Readonly<Record<'as-read' | 'to-amplitude', string>> = {
