@@ -6,6 +6,7 @@
  */
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { computeBarSamples, computeLineStudy, computeProfile, rosetteRepeats } from '../src/index';
+import { bruteForceProfile, referenceAt } from '../src/testing/brute-force-reference';
 import { clipperEnvelopes, topHeights } from '../src/testing/clipper-envelope';
 
 function median(runs: number, work: () => unknown): { median: number; best: number } {
@@ -46,6 +47,52 @@ function profileFigures(): void {
   }
   console.log(`  clipper-lib offsets  ${ms(clipperMs)} (one run)   → engine is ${(clipperMs / profile.median).toFixed(0)}× faster`);
   console.log(`  largest difference from clipper-lib (bar edge and follower, away from the ends): ${(worst * 1000).toFixed(3)} µm`);
+}
+
+/** A 3-layer coprime compound (24 + 7 + 11 lobes: one repeat a revolution) on the example's 150 mm bar. */
+const COMPOUND: Design = {
+  ...EXAMPLE_DESIGN,
+  rosette: {
+    baseRadius: 50,
+    layers: [
+      { lobes: 24, amplitude: 1.5, phase: 0, wave: { shape: 'sine' } },
+      { lobes: 7, amplitude: 1, phase: 0.3, wave: { shape: 'pointed' } },
+      { lobes: 11, amplitude: 0.8, phase: 0.6, wave: { shape: 'sine' } },
+    ],
+  },
+};
+
+/** Worst difference from the brute-force reference over the three paths, as a fraction of the cutter path's height. */
+function worstAgainstReference(design: Design, step?: number): number {
+  const ref = bruteForceProfile(design, 2500);
+  const engine = computeBarSamples(design, step === undefined ? {} : { step });
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of ref.cutter) [lo, hi] = [Math.min(lo, v), Math.max(hi, v)];
+  let worst = 0;
+  for (const key of ['cutter', 'bar', 'follower'] as const) {
+    let k = 0;
+    for (let j = 0; j < ref.x.length; j++) {
+      while (k < engine.x.length - 2 && engine.x[k + 1] < ref.x[j]) k++;
+      const w = (ref.x[j] - engine.x[k]) / (engine.x[k + 1] - engine.x[k]);
+      worst = Math.max(worst, Math.abs(engine[key][k] + w * (engine[key][k + 1] - engine[key][k]) - ref[key][j]));
+    }
+    for (let i = 0; i < engine.x.length; i++) worst = Math.max(worst, Math.abs(engine[key][i] - referenceAt(ref.x, ref[key], engine.x[i])));
+  }
+  return worst / (hi - lo);
+}
+
+function compoundFigures(): void {
+  const samples = computeBarSamples(COMPOUND);
+  const timing = median(40, () => computeProfile(COMPOUND));
+  const oldStep = COMPOUND.motion.travelPerRev / 2000; // 1/2000 of the common period, the default before the finest feature set it
+  const old = median(40, () => computeProfile(COMPOUND, { step: oldStep }));
+  const short: Design = { ...COMPOUND, bar: { ...COMPOUND.bar, length: 10 } }; // the reference is slow: 10 mm of it
+  const pct = (v: number) => `${(100 * v).toFixed(3)} %`;
+  console.log(`3-layer coprime compound (24 + 7 + 11 lobes), 150 mm bar at the default step (${samples.grid.step.toPrecision(3)} mm, ${samples.x.length} samples):`);
+  console.log(`  computeProfile       median ${ms(timing.median)}, best ${ms(timing.best)}`);
+  console.log(`  worst difference from the brute-force reference (first 10 mm, at and between points): ${pct(worstAgainstReference(short))} of the path's height (target ≤ 0.1 %)`);
+  console.log(`  at the old default step (${oldStep} mm, ${Math.round(150 / oldStep) + 1} samples): median ${ms(old.median)}, off by ${pct(worstAgainstReference(short, oldStep))}`);
 }
 
 function studyFigures(): void {
@@ -110,5 +157,6 @@ function sweepFigures(): void {
 }
 
 profileFigures();
+compoundFigures();
 studyFigures();
 sweepFigures();
