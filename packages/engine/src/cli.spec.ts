@@ -140,6 +140,9 @@ describe('barwright CLI (spawned with node)', () => {
       expect(inches[0]).toBeCloseTo(w.at.xFrom, 4);
       expect(inches[1]).toBeCloseTo(w.at.xTo, 4);
       expect(inches.some((v) => Math.abs(v - w.amount) < 1e-5)).toBe(true);
+      // The places of one kind are in the file's units too.
+      expect(w.first.xFrom * MM_PER_INCH).toBeCloseTo(mmWarnings[i].first.xFrom, 3);
+      w.zones.forEach((z: any, k: number) => expect(z.xTo * MM_PER_INCH).toBeCloseTo(mmWarnings[i].zones[k].xTo, 3));
     });
   });
 

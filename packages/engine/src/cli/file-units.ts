@@ -27,6 +27,8 @@ export function fileUnits(units: Units): FileUnits {
         ...w,
         ...(w.at ? { at: { xFrom: length(w.at.xFrom), xTo: length(w.at.xTo) } } : {}),
         ...(w.amount !== undefined ? { amount: length(w.amount) } : {}),
+        ...(w.first ? { first: { xFrom: length(w.first.xFrom), xTo: length(w.first.xTo) } } : {}),
+        ...(w.zones ? { zones: w.zones.map((z) => ({ xFrom: length(z.xFrom), xTo: length(z.xTo) })) } : {}),
       })),
   };
 }
