@@ -11,7 +11,8 @@ export { rosetteCurvatureRadius, graphCurvatureRadius, minCrestRadius } from './
 export { crestCurvature, crestText, type CrestCurvature, type CrestInput } from './crest-curvature';
 export { layerDerivatives, type LayerDerivatives, type WaveJet, type WaveCorner } from './wave-derivatives';
 export { type DetailLossInput, detailLossWarnings } from './detail-loss';
-export { type BarGrid, barGrid, defaultStep } from './bar-grid';
+export { type BarGrid, barGrid, defaultStep, finestFeature, neededStep } from './bar-grid';
+export { NonFiniteResultError } from './finite-output';
 export { type ProfileOptions, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';
 export { type Companion, COMPANIONS, oppositeProfile } from './profile';
 export { type CutterPlacement, type PlacementFigures, cutterPlacement, placementFigures, placementText, alongBarShift, acrossBarHeight } from './cutter-placement';
