@@ -1,8 +1,10 @@
 import { COMPLEXITY_LIMITS, designComplexity, EXAMPLE_DESIGN, parseDesign, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { planCut } from './cut-plan';
+import { NonFiniteResultError } from './finite-output';
 import { computeLineStudy } from './line-study';
 import { computeProfile } from './profile';
+import { fourierWave } from './waves';
 
 /** CPU time (user + system) of this process, ms. */
 function cpuMs(): number {
@@ -123,5 +125,32 @@ describe('beyond what a shop means: refused, naming the field and the limit', ()
   it('a chip load of 1e300 and a surface speed of 1e-300', () => {
     const plan = { ...EXAMPLE_DESIGN.plan, chipLoad: 1e300, surfaceSpeed: 1e-300 };
     expect(refused({ ...EXAMPLE_DESIGN, plan })).toEqual(['plan.surfaceSpeed: must be at least 0.1 m/min', 'plan.chipLoad: must be between 0.0001 mm and 2 mm']);
+  });
+});
+
+describe('the engine itself, handed values beyond the bounds (a caller that skips validation)', () => {
+  const heights = (phase: number) =>
+    computeProfile({ ...EXAMPLE_DESIGN, rosette: { baseRadius: 50, layers: [layer(24, { shape: 'pointed' }, phase)] }, bar: { ...EXAMPLE_DESIGN.bar, length: 20 } }).cutterPath.map((p) => p[1]);
+  const worstDifference = (a: number[], b: number[]) => a.reduce((m, v, i) => Math.max(m, Math.abs(v - b[i])), 0);
+
+  it('reduces a phase modulo 1 first: 1e15 + 0.375 draws the bar of 0.375, and 1e300 (a whole number) the bar of 0', () => {
+    expect(worstDifference(heights(1e15 + 0.375), heights(0.375))).toBeLessThan(1e-9);
+    expect(worstDifference(heights(1e300), heights(0))).toBeLessThan(1e-9);
+    expect(Math.max(...heights(1e300))).toBeGreaterThan(0.4); // a wave, not a straight bar
+  });
+
+  it('lays a line study with list phases of ±1e20 at once', () => {
+    const design: Design = { ...EXAMPLE_DESIGN, study: { ...EXAMPLE_DESIGN.study, lines: 4, schedule: { kind: 'list', phases: [1e20, -1e20, 0.25] } } };
+    const start = cpuMs();
+    const study = computeLineStudy(design);
+    expect(cpuMs() - start).toBeLessThan(2000);
+    expect(study.lines.map((l) => l.phase)).toEqual([0, 0, 0.25, 0]);
+  });
+
+  it('refuses a Fourier series whose range overflows rather than drawing a straight bar, and a plan whose feed overflows', () => {
+    expect(() => fourierWave([{ k: 1, a: 1e308, b: 1e308 }, { k: 3, a: 1e308, b: 0 }])).toThrow(/range is not finite/);
+    const design: Design = { ...EXAMPLE_DESIGN, cutter: { diameter: 4.7625, flutes: 8 }, bar: { ...EXAMPLE_DESIGN.bar, material: 'custom' }, plan: { ...EXAMPLE_DESIGN.plan, surfaceSpeed: 2000, chipLoad: 1e306 } };
+    expect(() => planCut(design, computeProfile(EXAMPLE_DESIGN, { step: 0.05 }))).toThrow(NonFiniteResultError);
+    expect(() => planCut(design, computeProfile(EXAMPLE_DESIGN, { step: 0.05 }))).toThrow(/finite cut plan's feedPerMinute/);
   });
 });
