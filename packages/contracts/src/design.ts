@@ -184,7 +184,9 @@ export const LAYER_LIMITS_MM = { amplitude: 500, measuredRadius: 1000, measuredS
 function checkDesignLimits(d: Omit<Design, never>, ctx: z.RefinementCtx): void {
   const toMm = d.units === 'in' ? MM_PER_INCH : 1;
   const unit = d.units;
-  const show = (mm: number) => (unit === 'in' ? `${+(mm / MM_PER_INCH).toFixed(4)} in` : `${mm} mm`);
+  // Inches to four decimals, or two significant figures below 0.001 in (0.0001 mm is 0.0000039 in, not 0 in).
+  const inches = (mm: number) => (mm === 0 || mm / MM_PER_INCH >= 0.001 ? +(mm / MM_PER_INCH).toFixed(4) : +(mm / MM_PER_INCH).toPrecision(2));
+  const show = (mm: number) => (unit === 'in' ? `${inches(mm)} in` : `${mm} mm`);
   const read = (path: string): number => path.split('.').reduce<any>((o, k) => o?.[k], d);
   for (const [path, [lo, hi]] of Object.entries(LENGTH_LIMITS_MM)) {
     const value = read(path);
