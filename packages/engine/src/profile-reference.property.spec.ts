@@ -2,7 +2,7 @@ import { EXAMPLE_DESIGN, parseDesign, type Design } from '@barwright/contracts';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { computeBarSamples } from './profile';
-import { bruteForceProfile, finestCyclesPerRev, referenceAt } from './testing/brute-force-reference';
+import { bruteForceProfile, finestCyclesPerRev, referenceAt, referenceDetailLoss } from './testing/brute-force-reference';
 
 type Layer = Design['rosette']['layers'][number];
 type Wave = Layer['wave'];
@@ -63,6 +63,23 @@ const compoundDesign: fc.Arbitrary<Design> = fc
     return design;
   })
   .filter((d) => parseDesign(d).ok);
+
+describe('the brute-force reference itself', () => {
+  it('with rf = rc loses r·(sec β − 1) at a sharp crest of flank angle β (derived geometry)', () => {
+    // Pointed wave read by a point rubber: an exact triangle wave of period P and height 1.5 mm.
+    const r = 2.38125;
+    const design: Design = {
+      ...EXAMPLE_DESIGN,
+      rosette: { baseRadius: 50, layers: [{ lobes: 24, amplitude: 1.5, phase: 0, wave: { shape: 'pointed' } }] },
+      rubber: { shape: 'round', radius: 0 },
+      bar: { ...EXAMPLE_DESIGN.bar, length: 20 },
+    };
+    const tanBeta = 1.5 / (100 / 24 / 2);
+    const loss = referenceDetailLoss(bruteForceProfile(design, 2000), design);
+    expect(loss.amount).toBeCloseTo(r * (Math.hypot(1, tanBeta) - 1), 6);
+    expect(Math.abs(loss.x / (100 / 24) - Math.round(loss.x / (100 / 24)))).toBeLessThan(1e-6); // at a crest
+  });
+});
 
 describe('the profile against a brute-force reference (fast-check)', () => {
   it('cutter path, bar edge and follower path within 0.1 % of the path height at every point, and between points', () => {

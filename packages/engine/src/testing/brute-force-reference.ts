@@ -66,6 +66,26 @@ export function bruteForceProfile(design: Design, perCycle = 3000): ReferencePro
   };
 }
 
+/**
+ * The reference's detail loss (mm): the largest departure of the follower path from the reading a
+ * flat bar would give, y + (rf − rc), over the bar clear of its ends by rc + rf (where the follower
+ * reads cuts the cutter made beyond the bar), with where it happens; 0 when nothing is lost.
+ */
+export function referenceDetailLoss(ref: ReferenceProfile, design: Design): { amount: number; x: number } {
+  const rc = design.cutter.diameter / 2;
+  const rf = design.follower.radius;
+  const clear = rc + rf;
+  const length = ref.x[ref.x.length - 1];
+  let amount = 0;
+  let at = NaN;
+  for (let i = 0; i < ref.x.length; i++) {
+    if (ref.x[i] < clear || ref.x[i] > length - clear) continue;
+    const departure = Math.abs(ref.follower[i] - (ref.cutter[i] + rf - rc));
+    if (departure > amount) [amount, at] = [departure, ref.x[i]];
+  }
+  return { amount, x: at };
+}
+
 /** The reference's value at x by linear interpolation between its dense samples. */
 export function referenceAt(x: Float64Array, values: Float64Array, at: number): number {
   const h = x[1] - x[0];
