@@ -1,21 +1,9 @@
-import type { Units } from '@barwright/contracts';
 import { formatLength, formatLengthRange } from './length-format';
+import type { DetailLossInput } from './detail-loss';
 import type { EngineWarning } from './types';
 
-export interface EngravingCheckInput {
-  /** Cutter-centre and follower-centre heights at the same nodes x = i·step (mm). */
-  cutter: ArrayLike<number>;
-  follower: ArrayLike<number>;
-  step: number;
-  cutterRadius: number;
-  followerRadius: number;
-  /** Nodes to compare (clear of the bar's ends). */
-  from: number;
-  to: number;
-  /** Period on the bar (mm). */
-  period: number;
-  units: Units;
-}
+/** The same nodes and radii the detail-loss check reads. */
+export type EngravingCheckInput = DetailLossInput;
 
 /**
  * The engraved line is the follower path (from its lowest point); the pattern the rosette asked for
