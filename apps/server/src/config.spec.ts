@@ -49,6 +49,8 @@ describe('configuration', () => {
     expect(loadConfig({ TRUST_PROXY: 'true' }).trustProxy).toBe(true);
     expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8' }).trustProxy).toBe('loopback, 10.0.0.0/8');
     expect(() => loadConfig({ TRUST_PROXY: 'a;b' })).toThrow(/TRUST_PROXY/);
+    expect(loadConfig({}).redisPrefix).toBe('barwright');
+    expect(() => loadConfig({ REDIS_PREFIX: 'a b' })).toThrow(/REDIS_PREFIX/);
   });
 
   it('takes PUBLIC_URL without a trailing slash', () => {

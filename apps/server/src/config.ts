@@ -31,6 +31,8 @@ const envSchema = z.object({
   S3_PATH_STYLE: bool.default(true),
   // Several instances: Redis carries socket.io rooms, the co-editing relay and the rate-limit counters.
   REDIS_URL: z.url().refine((u) => /^rediss?:/.test(u), 'must be a redis:// or rediss:// URL').optional(),
+  // Prefix of every Redis key and channel, so deployments (or test runs) can share one Redis.
+  REDIS_PREFIX: z.string().regex(/^[\w.-]{1,64}$/, 'must be 1–64 letters, digits, _ . -').default('barwright'),
   // Express's 'trust proxy': true/false, a hop count, or comma-separated addresses/subnets (e.g. loopback, 10.0.0.0/8).
   TRUST_PROXY: z.string().optional().transform((v, ctx) => {
     if (v === undefined || v === '' || v === 'false') return false;
@@ -60,6 +62,8 @@ export interface Config {
   s3?: S3Settings;
   /** Set: several instances share Redis (socket.io adapter, co-editing relay, rate limits). */
   redisUrl?: string;
+  /** Prefix of the Redis keys and channels (REDIS_PREFIX, default barwright). */
+  redisPrefix: string;
   /** Express's `trust proxy` setting (false: the socket's own address is the client's). */
   trustProxy: boolean | number | string;
 }
@@ -103,6 +107,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, { serving = tru
     demoData: e.DEMO_DATA ?? e.NODE_ENV !== 'production',
     webDist: path.resolve(e.WEB_DIST ?? 'dist/web/browser'),
     redisUrl: e.REDIS_URL,
+    redisPrefix: e.REDIS_PREFIX,
     trustProxy: e.TRUST_PROXY,
   };
 }

@@ -37,7 +37,7 @@ async function main() {
   for (const line of configWarnings(config)) console.warn(`[barwright] ${line}`);
   const photoStorage = await openPhotoStorage(config);
   const { database, release, fresh } = await openConfiguredDatabase(config, log);
-  const redis = config.redisUrl ? await openRedis(config.redisUrl, log) : undefined;
+  const redis = config.redisUrl ? await openRedis(config.redisUrl, log, { prefix: config.redisPrefix }) : undefined;
   // One store for the app and the gateway: each stored update is published to the other instances.
   const designDocStore = new DesignDocStore(database.db, undefined, (designId, seq, update) => relay?.published(designId, seq, update));
   const relay = redis && new RedisRelay(redis, designDocStore, console.error);
@@ -86,12 +86,12 @@ async function main() {
     compute,
     designDocStore,
     trustProxy: config.trustProxy,
-    rateLimitStore: redis && redisRateLimitStores((args) => redis.client.sendCommand(args)),
+    rateLimitStore: redis && redisRateLimitStores(redis.prefix, (args) => redis.client.sendCommand(args)),
   });
   const server = http.createServer(app);
   gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins, store: designDocStore, relay });
   gateway.attach(server);
-  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins, adapter: redis && createAdapter(redis.client) });
+  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins, adapter: redis && createAdapter(redis.client, { streamName: `${redis.prefix}:socket.io`, channelPrefix: `${redis.prefix}:socket.io` }) });
   notify.attach(server);
   // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
   moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });

@@ -8,6 +8,8 @@ export type RedisClient = ReturnType<typeof connectTo>;
 
 /** The Redis connections of one instance: one for commands and PUBLISH, one subscribed. */
 export interface RedisConnection {
+  /** Prefix of every key and channel this instance uses (REDIS_PREFIX). */
+  prefix: string;
   client: RedisClient;
   /** In subscriber mode (it takes SUBSCRIBE/UNSUBSCRIBE only). */
   subscriber: RedisClient;
@@ -21,7 +23,9 @@ export interface RedisConnection {
  * commands meanwhile, so a PUBLISH during a Redis restart is sent late, not lost; node-redis
  * resubscribes before it reports the subscriber ready again. A first connection that fails stops the start.
  */
-export async function openRedis(url: string, log: (line: string) => void, name = `barwright-${process.pid}`): Promise<RedisConnection> {
+export async function openRedis(url: string, log: (line: string) => void, options: { prefix?: string; name?: string } = {}): Promise<RedisConnection> {
+  const prefix = options.prefix ?? 'barwright';
+  const name = options.name ?? `${prefix}-${process.pid}`;
   // Named (CLIENT LIST shows them), so an operator, or a test, can tell the connections apart.
   const client = connectTo(url, `${name}-commands`);
   const subscriber = connectTo(url, `${name}-subscriber`);
@@ -44,6 +48,7 @@ export async function openRedis(url: string, log: (line: string) => void, name =
   watch(subscriber, 'subscriber');
   await Promise.all([client.connect(), subscriber.connect()]);
   return {
+    prefix,
     client,
     subscriber,
     onResubscribed: (listener) => void listeners.push(listener),

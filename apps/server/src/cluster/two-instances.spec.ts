@@ -17,7 +17,7 @@ process.setMaxListeners(0); // every y-websocket client adds an exit listener
 const services = (await postgresAnswers()) && (await redisAnswers());
 if (!services) console.warn(`two-instance suite skipped: it needs PostgreSQL at ${TEST_POSTGRES_URL} and Redis at ${TEST_REDIS_URL}, and one of them does not answer.`);
 
-const lengthOf = (doc: Y.Doc) => readDesign(doc).bar.length;
+const lengthOf = (doc: Y.Doc) => (readDesign(doc) as { bar: { length: number } }).bar.length;
 const updateMessage = (update: Uint8Array) => {
   const encoder = encoding.createEncoder();
   encoding.writeVarUint(encoder, 0);

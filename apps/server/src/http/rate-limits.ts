@@ -48,8 +48,8 @@ const accountLocked: Options['handler'] = (req, res, _next, options) => {
 export type RateLimitStoreFactory = (prefix: string) => Store;
 
 /** Counters in Redis, shared by every instance (rate-limit-redis over the instance's command connection). */
-export function redisRateLimitStores(sendCommand: (args: string[]) => Promise<unknown>): RateLimitStoreFactory {
-  return (prefix) => new RedisStore({ prefix: `barwright:rate:${prefix}:`, sendCommand: (...args: string[]) => sendCommand(args) as Promise<RedisReply> });
+export function redisRateLimitStores(keyPrefix: string, sendCommand: (args: string[]) => Promise<unknown>): RateLimitStoreFactory {
+  return (prefix) => new RedisStore({ prefix: `${keyPrefix}:rate:${prefix}:`, sendCommand: (...args: string[]) => sendCommand(args) as Promise<RedisReply> });
 }
 
 export function createRateLimits(s: RateLimitSettings, storeFor?: RateLimitStoreFactory) {

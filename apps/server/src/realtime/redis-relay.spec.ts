@@ -32,7 +32,7 @@ describe.skipIf(!redisUp)('the co-editing relay between instances', () => {
     designId = (await createDesign(database.db, { boardId: board.id, title: 'Relayed', createdBy: owner.id })).id;
     instances = [];
     for (const name of names) {
-      const connection = await openRedis(TEST_REDIS_URL, quiet, name);
+      const connection = await openRedis(TEST_REDIS_URL, quiet, { prefix: `relay-spec-${process.pid}`, name });
       redis.push(connection);
       let relay: RedisRelay | undefined;
       const store = new DesignDocStore(database.db, quiet, (id, seq, update) => relay?.published(id, seq, update));

@@ -11,8 +11,6 @@ export const RELAY_ORIGIN = Symbol('relay');
 /** How long a sequence number must have been seen before catch-up may start from it (rows commit out of order). */
 const SETTLE_MS = 5000;
 
-const designChannel = (designId: string) => `barwright:design:${designId}`;
-const CONTROL_CHANNEL = 'barwright:collab-control';
 
 /** Which collab sockets to close: every field given must match. */
 export interface CloseMatch {
@@ -54,12 +52,16 @@ export class RedisRelay {
   private readonly followed = new Map<string, Followed>();
   private readonly timer: NodeJS.Timeout;
   private controlListener?: (message: string) => void;
+  private readonly controlChannel: string;
+  private readonly designChannel: (designId: string) => string;
 
   constructor(
     private readonly redis: RedisConnection,
     private readonly store: Pick<DesignDocStore, 'loadAfter'>,
     private readonly log: (error: unknown) => void,
   ) {
+    this.controlChannel = `${redis.prefix}:collab-control`;
+    this.designChannel = (designId) => `${redis.prefix}:design:${designId}`;
     redis.onResubscribed(() => void this.catchUp());
     this.timer = setInterval(() => this.settle(), SETTLE_MS);
     this.timer.unref();
@@ -71,11 +73,11 @@ export class RedisRelay {
       const { from, ...message } = JSON.parse(raw) as ControlMessage & { from: string };
       if (from !== this.instanceId) handle(message as ControlMessage);
     };
-    await this.redis.subscriber.subscribe(CONTROL_CHANNEL, this.controlListener);
+    await this.redis.subscriber.subscribe(this.controlChannel, this.controlListener);
   }
 
   publishControl(message: ControlMessage): void {
-    this.publish(CONTROL_CHANNEL, { from: this.instanceId, ...message });
+    this.publish(this.controlChannel, { from: this.instanceId, ...message });
   }
 
   /** Before a live document is loaded: subscribes to its channel (messages wait for `doc.whenInitialized`). */
@@ -90,12 +92,12 @@ export class RedisRelay {
         // Removals by this instance's outdated-state timer are not news to the instance that owns the client.
         if (origin === RELAY_ORIGIN || origin === 'timeout') return;
         const update = awarenessProtocol.encodeAwarenessUpdate(doc.awareness, added.concat(updated, removed));
-        this.publish(designChannel(designId), { from: this.instanceId, awareness: Buffer.from(update).toString('base64') });
+        this.publish(this.designChannel(designId), { from: this.instanceId, awareness: Buffer.from(update).toString('base64') });
       },
     };
     this.followed.set(designId, entry);
     doc.awareness.on('update', entry.onAwareness);
-    await this.redis.subscriber.subscribe(designChannel(designId), entry.listener);
+    await this.redis.subscriber.subscribe(this.designChannel(designId), entry.listener);
   }
 
   /** After the load: the highest sequence number it read. */
@@ -110,14 +112,14 @@ export class RedisRelay {
     if (entry?.doc !== doc) return;
     this.followed.delete(designId);
     doc.awareness.off('update', entry.onAwareness);
-    await this.redis.subscriber.unsubscribe(designChannel(designId), entry.listener).catch(this.log);
+    await this.redis.subscriber.unsubscribe(this.designChannel(designId), entry.listener).catch(this.log);
   }
 
   /** The store's append listener: publishes a stored update with its sequence number. */
   readonly published = (designId: string, seq: number, update: Uint8Array): void => {
     const entry = this.followed.get(designId);
     if (entry) this.saw(entry, seq);
-    this.publish(designChannel(designId), { from: this.instanceId, seq, update: Buffer.from(update).toString('base64') });
+    this.publish(this.designChannel(designId), { from: this.instanceId, seq, update: Buffer.from(update).toString('base64') });
   };
 
   private publish(channel: string, message: object) {
@@ -172,6 +174,6 @@ export class RedisRelay {
   async close(): Promise<void> {
     clearInterval(this.timer);
     for (const [designId, entry] of [...this.followed]) await this.unfollow(designId, entry.doc);
-    if (this.controlListener) await this.redis.subscriber.unsubscribe(CONTROL_CHANNEL, this.controlListener).catch(() => {});
+    if (this.controlListener) await this.redis.subscriber.unsubscribe(this.controlChannel, this.controlListener).catch(() => {});
   }
 }

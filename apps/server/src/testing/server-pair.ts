@@ -60,8 +60,10 @@ export async function startServerPair(env: Record<string, string> = {}): Promise
   const secret = randomBytes(32).toString('base64url');
   const dirs = [0, 1].map(() => fs.mkdtempSync(path.join(os.tmpdir(), 'bw-pair-')));
   const ports = [await freePort(), await freePort()];
+  // A Redis prefix of its own: rate-limit counters and socket.io streams of other runs stay apart.
+  const common = { DATABASE_URL: database.url, SESSION_SECRET: secret, REDIS_PREFIX: `barwright-test-${randomBytes(4).toString('hex')}`, ...env };
   const started = await Promise.allSettled(
-    dirs.map((dir, i) => startServerProcess({ PORT: String(ports[i]), DATA_DIR: dir, DATABASE_URL: database.url, SESSION_SECRET: secret, ...env })),
+    dirs.map((dir, i) => startServerProcess({ PORT: String(ports[i]), DATA_DIR: dir, ...common })),
   );
   const servers = started.flatMap((s) => (s.status === 'fulfilled' ? [s.value] : []));
   const cleanup = async () => {
