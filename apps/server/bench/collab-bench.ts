@@ -24,7 +24,8 @@ const database = await openTestDatabase('pglite');
 const accessEvents = new BoardAccessEvents();
 const server = await startTestServer(database, { accessEvents });
 const httpServer = http.createServer(server.app);
-const gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents });
+// One account opens all the benchmark's sockets and makes every edit: lift its socket caps and update allowance (the latency is measured, not the limits).
+const gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, limits: { socketsPerSession: 1000, socketsPerUser: 1000, updates: { burst: 100_000, perSecond: 100_000 } } });
 gateway.attach(httpServer);
 await new Promise<void>((r) => httpServer.listen(0, '127.0.0.1', r));
 const baseUrl = `http://127.0.0.1:${(httpServer.address() as AddressInfo).port}`;
@@ -109,7 +110,7 @@ for (const mode of ['pglite', 'postgres'] as const) {
   const path = await import('node:path');
   const { HttpSession, startServerProcess } = await import('../src/testing/server-process');
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-mem-'));
-  const proc = await startServerProcess({ PORT: String(3900 + Math.floor(Math.random() * 90)), DATA_DIR: dataDir, ...(databaseUrl ? { DATABASE_URL: databaseUrl } : {}) });
+  const proc = await startServerProcess({ PORT: String(3900 + Math.floor(Math.random() * 90)), DATA_DIR: dataDir, ...(databaseUrl ? { DATABASE_URL: databaseUrl, SESSION_SECRET: 'bench-'.padEnd(40, 'x') } : {}) });
   const rss = () => Number(fs.readFileSync(`/proc/${proc.child.pid}/status`, 'utf8').match(/VmRSS:\s+(\d+)/)![1]) / 1024;
   const s = new HttpSession(proc.baseUrl);
   const password = 'quiet-walnut-crosscut-49';
@@ -158,6 +159,9 @@ for (const mode of ['pglite', 'postgres'] as const) {
   const compacted = await time();
   console.log(`load with 10 000 stored updates: ${raw.toFixed(0)} ms uncompacted, ${compacted.toFixed(1)} ms compacted (target < 200 ms); compaction took ${compactMs.toFixed(0)} ms`);
 }
+
+// Several instances: 100 clients over two server processes on PostgreSQL and Redis against one, and memory per instance.
+await (await import('./instances-bench')).benchInstances();
 
 await gateway.close();
 httpServer.closeAllConnections();
