@@ -66,6 +66,9 @@ for (const n of [2, 20, 100]) {
   console.log(`edit-to-remote-apply, ${String(n).padStart(3)} clients: p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms (target p95 < 50 ms at 100)`);
 }
 
+// Several instances: 100 clients over two server processes on PostgreSQL and Redis against one, and memory per instance.
+await (await import('./instances-bench')).benchInstances();
+
 // Bytes stored per edit: one lobe change as the y-websocket client sends it.
 {
   const doc = new Y.Doc();
@@ -159,9 +162,6 @@ for (const mode of ['pglite', 'postgres'] as const) {
   const compacted = await time();
   console.log(`load with 10 000 stored updates: ${raw.toFixed(0)} ms uncompacted, ${compacted.toFixed(1)} ms compacted (target < 200 ms); compaction took ${compactMs.toFixed(0)} ms`);
 }
-
-// Several instances: 100 clients over two server processes on PostgreSQL and Redis against one, and memory per instance.
-await (await import('./instances-bench')).benchInstances();
 
 await gateway.close();
 httpServer.closeAllConnections();

@@ -95,6 +95,9 @@ export class RedisRelay {
         this.publish(this.designChannel(designId), { from: this.instanceId, awareness: Buffer.from(update).toString('base64') });
       },
     };
+    // A document let go while a new one of the same design opened: its unfollow will find it replaced, so release it here.
+    const previous = this.followed.get(designId);
+    if (previous) await this.release(designId, previous);
     this.followed.set(designId, entry);
     doc.awareness.on('update', entry.onAwareness);
     await this.redis.subscriber.subscribe(this.designChannel(designId), entry.listener);
@@ -111,7 +114,11 @@ export class RedisRelay {
     const entry = this.followed.get(designId);
     if (entry?.doc !== doc) return;
     this.followed.delete(designId);
-    doc.awareness.off('update', entry.onAwareness);
+    await this.release(designId, entry);
+  }
+
+  private async release(designId: string, entry: Followed) {
+    entry.doc.awareness.off('update', entry.onAwareness);
     await this.redis.subscriber.unsubscribe(this.designChannel(designId), entry.listener).catch(this.log);
   }
 
