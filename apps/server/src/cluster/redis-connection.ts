@@ -4,6 +4,9 @@ import { createClient } from 'redis';
 const connectTo = (url: string, name?: string) =>
   createClient({ url, name, socket: { reconnectStrategy: (retries: number) => Math.min(100 * 2 ** retries, 2000), connectTimeout: 5000 } });
 
+/** How long the start waits for Redis before it gives up, naming REDIS_URL. */
+const START_TIMEOUT_MS = 10_000;
+
 export type RedisClient = ReturnType<typeof connectTo>;
 
 /** The Redis connections of one instance: one for commands and PUBLISH, one subscribed. */
@@ -21,7 +24,7 @@ export interface RedisConnection {
 /**
  * Connects to REDIS_URL. Both connections reconnect on their own (backing off to 2 s) and queue
  * commands meanwhile, so a PUBLISH during a Redis restart is sent late, not lost; node-redis
- * resubscribes before it reports the subscriber ready again. A first connection that fails stops the start.
+ * resubscribes before it reports the subscriber ready again. No answer within 10 s at the start stops the start.
  */
 export async function openRedis(url: string, log: (line: string) => void, options: { prefix?: string; name?: string } = {}): Promise<RedisConnection> {
   const prefix = options.prefix ?? 'barwright';
@@ -46,7 +49,21 @@ export async function openRedis(url: string, log: (line: string) => void, option
   };
   watch(client, 'commands');
   watch(subscriber, 'subscriber');
-  await Promise.all([client.connect(), subscriber.connect()]);
+  const connected = Promise.all([client.connect(), subscriber.connect()]);
+  connected.catch(() => {}); // after a timeout below, its rejection is not news
+  let timer: NodeJS.Timeout | undefined;
+  const late = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => reject(new Error(`Redis at ${new URL(url).host} (REDIS_URL) did not answer within ${START_TIMEOUT_MS / 1000} s`)), START_TIMEOUT_MS);
+  });
+  try {
+    await Promise.race([connected, late]);
+  } catch (error) {
+    client.destroy();
+    subscriber.destroy();
+    throw error;
+  } finally {
+    clearTimeout(timer);
+  }
   return {
     prefix,
     client,
