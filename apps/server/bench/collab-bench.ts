@@ -122,8 +122,26 @@ for (const mode of ['pglite', 'postgres'] as const) {
   const board = (await s.request('POST', '/api/boards', { name: 'Memory' })).body.id;
   const ids: string[] = [];
   for (let i = 0; i < 10; i++) ids.push((await s.request('POST', `/api/boards/${board}/designs`, { title: `M${i}` })).body.id);
+  // A session may open 16 collab sockets and an account 48 (realtime-limits.ts): 3 members, 4 sessions each.
+  const cookies: string[] = [];
+  for (const who of ['mem', 'mem2', 'mem3']) {
+    const email = `${who}@example.test`;
+    if (who !== 'mem') {
+      const invitee = new HttpSession(proc.baseUrl);
+      await invitee.request('POST', '/api/auth/sign-up', { email, password, displayName: who });
+      await s.request('POST', `/api/boards/${board}/invitations`, { email, role: 'editor' });
+      const mail = ((await s.request('GET', '/api/dev/mailbox')).body as { to: string[]; text: string }[]).find((m) => m.to.includes(email) && /invitations\/accept\?token=/.test(m.text))!;
+      await invitee.request('POST', '/api/auth/sign-in', { email, password });
+      await invitee.request('POST', '/api/invitations/accept', { token: mail.text.match(/accept\?token=([A-Za-z0-9_-]+)/)![1] });
+    }
+    for (let i = 0; i < 4; i++) {
+      const session = new HttpSession(proc.baseUrl);
+      await session.request('POST', '/api/auth/sign-in', { email, password });
+      cookies.push(session.cookieHeader);
+    }
+  }
   const idle = rss();
-  const peers = ids.flatMap((id) => Array.from({ length: 10 }, () => collabClient(proc.baseUrl, id, s.cookieHeader)));
+  const peers = ids.flatMap((id, d) => Array.from({ length: 10 }, (_, i) => collabClient(proc.baseUrl, id, cookies[(d * 10 + i) % cookies.length])));
   await Promise.all(peers.map((p) => p.synced()));
   for (const [i, p] of peers.entries()) setDesignField(p.doc, ['bar', 'length'], 100 + i);
   await new Promise((r) => setTimeout(r, 1000));
