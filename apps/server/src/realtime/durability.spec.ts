@@ -17,10 +17,15 @@ const burstEdits = (doc: Y.Doc) => [...doc.getMap('design').keys()].filter((k) =
 describe('durability of edits', () => {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-kill-'));
   const port = String(3600 + Math.floor(Math.random() * 300));
-  afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
+  const started: { kill: () => void }[] = [];
+  afterAll(() => {
+    for (const s of started) s.kill(); // a server left by a failed run would hold its port and data directory
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  });
 
   it('keeps every edit sent before a SIGKILL, and the killed server\'s lock does not block the restart', async () => {
     let server = await startServerProcess({ PORT: port, DATA_DIR: dataDir });
+    started.push({ kill: () => server.child.kill('SIGKILL') });
     const http = new HttpSession(server.baseUrl);
     const password = 'quiet-walnut-crosscut-49';
     expect((await http.request('POST', '/api/auth/sign-up', { email: 'kill@example.test', password, displayName: 'Kit' })).status).toBe(201);
