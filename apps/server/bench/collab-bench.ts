@@ -15,10 +15,10 @@ import { CollabGateway } from '../src/realtime/collab-gateway';
 import { openTestDatabase } from '../src/testing/test-database';
 import { Client, makeUser, sidOf, startTestServer } from '../src/testing/test-app';
 import { collabClient } from '../src/testing/collab-client';
+import { percentile, timeLobeEdit } from './edit-latency';
 
 process.setMaxListeners(0); // every y-websocket client adds an exit listener
 
-const percentile = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))];
 
 const database = await openTestDatabase('pglite');
 const accessEvents = new BoardAccessEvents();
@@ -42,20 +42,7 @@ async function latency(clients: number, edits: number) {
   const samples: number[] = [];
   const watcher = peers[peers.length - 1];
   for (let i = 0; i < edits; i++) {
-    const writer = peers[i % (peers.length - 1)];
-    const lobes = () => (watcher.doc.getMap('design').get('rosette') as Y.Map<any>).get('layers').get(0).get('lobes');
-    const target = 2 + (i % 300) === lobes() ? 3 + (i % 300) : 2 + (i % 300);
-    const arrived = new Promise<number>((resolve) => {
-      const onUpdate = () => {
-        if (lobes() !== target) return;
-        watcher.doc.off('update', onUpdate);
-        resolve(performance.now());
-      };
-      watcher.doc.on('update', onUpdate);
-    });
-    const started = performance.now();
-    setDesignField(writer.doc, ['rosette', 'layers', 0, 'lobes'], target);
-    samples.push((await arrived) - started);
+    samples.push(await timeLobeEdit(peers[i % (peers.length - 1)], watcher, i));
   }
   for (const p of peers) p.destroy();
   return { p50: percentile(samples, 50), p95: percentile(samples, 95) };

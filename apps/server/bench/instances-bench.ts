@@ -10,9 +10,8 @@ import path from 'node:path';
 import { randomBytes } from 'node:crypto';
 import { fileURLToPath } from 'node:url';
 import pg from 'pg';
-import * as Y from 'yjs';
-import { setDesignField } from '@barwright/contracts/design-doc';
 import { collabClient } from '../src/testing/collab-client';
+import { percentile, timeLobeEdit } from './edit-latency';
 import { createTestDatabaseUrl, freePort, startServerPair, stopProcess } from '../src/testing/server-pair';
 import { startServerProcess } from '../src/testing/server-process';
 import { signedUpAccount } from '../src/testing/pair-accounts';
@@ -20,7 +19,6 @@ import { postgresAnswers } from '../src/testing/test-database';
 import { redisAnswers, TEST_REDIS_URL } from '../src/testing/test-redis';
 
 process.setMaxListeners(0);
-const percentile = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))];
 const rssMb = (pid: number) => Number(fs.readFileSync(`/proc/${pid}/status`, 'utf8').match(/VmRSS:\s+(\d+)/)![1]) / 1024;
 const CLIENTS = 100;
 const EDITS = 100;
@@ -31,21 +29,9 @@ async function latency(writerBase: string, watcherBase: string, designId: string
   await Promise.all(peers.map((p) => p.synced()));
   const writer = peers[0];
   const watcher = peers[1];
-  const lobes = () => (watcher.doc.getMap('design').get('rosette') as Y.Map<any>).get('layers').get(0).get('lobes');
   const samples: number[] = [];
   for (let i = 0; i < EDITS; i++) {
-    const target = 2 + (i % 300) === lobes() ? 3 + (i % 300) : 2 + (i % 300);
-    const arrived = new Promise<number>((resolve) => {
-      const onUpdate = () => {
-        if (lobes() !== target) return;
-        watcher.doc.off('update', onUpdate);
-        resolve(performance.now());
-      };
-      watcher.doc.on('update', onUpdate);
-    });
-    const started = performance.now();
-    setDesignField(writer.doc, ['rosette', 'layers', 0, 'lobes'], target);
-    samples.push((await arrived) - started);
+    samples.push(await timeLobeEdit(writer, watcher, i));
   }
   for (const p of peers) p.destroy();
   return { p50: percentile(samples, 50), p95: percentile(samples, 95) };
