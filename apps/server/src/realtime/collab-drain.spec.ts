@@ -1,13 +1,9 @@
-import http from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CLOSE_CODES } from '@barwright/contracts';
-import type { AppLocals } from '../app';
-import { BoardAccessEvents } from '../boards/board-access';
 import { openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, makeUser, sidOf, startTestServer, type TestServer } from '../testing/test-app';
+import { Client, makeUser, sidOf } from '../testing/test-app';
 import { collabClient } from '../testing/collab-client';
-import { CollabGateway } from './collab-gateway';
+import { startRealtimeTestServer } from '../testing/realtime-test-server';
 
 /**
  * Shutdown (main.ts on SIGTERM): sockets close with 1001 going away. What the server had taken is
@@ -16,23 +12,13 @@ import { CollabGateway } from './collab-gateway';
  */
 describe('collaboration gateway: draining', () => {
   let database: TestDatabase;
-  let server: TestServer;
-  let httpServer: http.Server;
-  let gateway: CollabGateway;
+  let server: Awaited<ReturnType<typeof startRealtimeTestServer>>;
 
   beforeAll(async () => {
     database = await openTestDatabase('pglite');
-    const accessEvents = new BoardAccessEvents();
-    server = await startTestServer(database, { accessEvents });
-    httpServer = http.createServer(server.app);
-    gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, log: () => {} });
-    gateway.attach(httpServer);
-    await new Promise<void>((r) => httpServer.listen(0, '127.0.0.1', r));
+    server = await startRealtimeTestServer(database);
   });
   afterAll(async () => {
-    await gateway.close();
-    httpServer.closeAllConnections();
-    await new Promise((r) => httpServer.close(r));
     await server.close();
     await database.close();
   });
@@ -43,20 +29,20 @@ describe('collaboration gateway: draining', () => {
     const cookie = sidOf(await owner.signIn('owner@example.test'))!;
     const boardId = (await owner.post('/api/boards', { name: 'Drain' })).body.id;
     const designId = (await owner.post(`/api/boards/${boardId}/designs`, { title: 'Drained' })).body.id;
-    const client = collabClient(`http://127.0.0.1:${(httpServer.address() as AddressInfo).port}`, designId, cookie);
+    const client = collabClient(server.baseUrl, designId, cookie);
     await client.synced();
     const closed = client.closed();
     const notes = client.doc.getText('notes');
     for (let i = 0; i < 200; i++) notes.insert(notes.length, `${i} `); // 200 updates on the wire as the drain begins
 
-    await gateway.drain(CLOSE_CODES.goingAway, 'server going away');
+    await server.collab.drain(CLOSE_CODES.goingAway, 'server going away');
     expect(await closed).toEqual({ code: CLOSE_CODES.goingAway, reason: 'server going away' });
     expect(client.provider.shouldConnect).toBe(true); // not final for y-websocket (44xx would be)
     await client.synced(); // reconnected: the sync sends the server what it lacks
     let stored = '';
     for (let tries = 0; tries < 50 && stored !== notes.toString(); tries++) {
       if (tries) await new Promise((r) => setTimeout(r, 100));
-      stored = (await gateway.store.loadDoc(designId)).getText('notes').toString();
+      stored = (await server.collab.store.loadDoc(designId)).getText('notes').toString();
     }
     expect(stored).toBe(notes.toString());
     client.destroy();

@@ -1,23 +1,16 @@
-import http from 'node:http';
-import type { AddressInfo } from 'node:net';
 import * as Y from 'yjs';
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { CLOSE_CODES } from '@barwright/contracts';
 import { DESIGN_MAP, readDesign, setDesignField } from '@barwright/contracts/design-doc';
 import { designUpdates } from '../../../../db/schema';
-import type { AppLocals } from '../app';
-import { BoardAccessEvents } from '../boards/board-access';
 import { openTestDatabase, type TestDatabase } from '../testing/test-database';
-import { Client, makeUser, sidOf, startTestServer, type TestServer } from '../testing/test-app';
+import { Client, makeUser, sidOf } from '../testing/test-app';
 import { collabClient, eventually } from '../testing/collab-client';
-import { CollabGateway } from './collab-gateway';
+import { startRealtimeTestServer } from '../testing/realtime-test-server';
 
 describe('collaboration gateway', () => {
   let database: TestDatabase;
-  let server: TestServer;
-  let httpServer: http.Server;
-  let gateway: CollabGateway;
-  let baseUrl: string;
+  let server: Awaited<ReturnType<typeof startRealtimeTestServer>>;
   let owner: Client;
   let ownerCookie: string;
   let designId: string;
@@ -26,22 +19,10 @@ describe('collaboration gateway', () => {
 
   beforeAll(async () => {
     database = await openTestDatabase('pglite');
-    const accessEvents = new BoardAccessEvents();
-    server = await startTestServer(database, {
-      accessEvents,
-      closeUserSockets: (userId) => gateway.closeWhere((c) => c.userId === userId, CLOSE_CODES.unauthorized, 'account suspended'),
-    });
-    httpServer = http.createServer(server.app);
     // The convergence test opens 20 sockets with one session, more than a session may by default.
-    gateway = new CollabGateway({ db: database.db, sessionParser: (server.app.locals as AppLocals).sessionParser, accessEvents, log: () => {}, limits: { socketsPerSession: 32 } });
-    gateway.attach(httpServer);
-    await new Promise<void>((r) => httpServer.listen(0, '127.0.0.1', r));
-    baseUrl = `http://127.0.0.1:${(httpServer.address() as AddressInfo).port}`;
+    server = await startRealtimeTestServer(database, { limits: { socketsPerSession: 32 } });
   });
   afterAll(async () => {
-    await gateway.close();
-    httpServer.closeAllConnections();
-    await new Promise((r) => httpServer.close(r));
     await server.close();
     await database.close();
   });
@@ -65,7 +46,7 @@ describe('collaboration gateway', () => {
     return { user, cookie: sidOf(await c.signIn(email))! };
   }
   const open = (cookie: string) => {
-    const c = collabClient(baseUrl, designId, cookie);
+    const c = collabClient(server.baseUrl, designId, cookie);
     clients.push(c);
     return c;
   };
@@ -89,7 +70,7 @@ describe('collaboration gateway', () => {
     await eventually(() => lobes(b.doc) === 36, 2000, 'relayed edit');
     b.doc.getText('notes').insert(0, 'Cut in A2 next week.');
     await eventually(() => a.doc.getText('notes').toString() === 'Cut in A2 next week.');
-    const stored = await gateway.store.loadDoc(designId);
+    const stored = await server.collab.store.loadDoc(designId);
     expect(lobes(stored)).toBe(36);
   });
 
@@ -98,13 +79,13 @@ describe('collaboration gateway', () => {
     const a = open(ownerCookie);
     const v = open(cookie);
     await Promise.all([a.synced(), v.synced()]);
-    const rowsBefore = await gateway.store.rowCount(designId);
+    const rowsBefore = await server.collab.store.rowCount(designId);
     setDesignField(v.doc, ['rosette', 'layers', 0, 'lobes'], 99);
     setDesignField(a.doc, ['bar', 'length'], 140);
     await eventually(() => (readDesign(v.doc) as any).bar.length === 140);
     await new Promise((r) => setTimeout(r, 200));
     expect(lobes(a.doc)).toBe(24);
-    expect(await gateway.store.rowCount(designId)).toBe(rowsBefore + 1);
+    expect(await server.collab.store.rowCount(designId)).toBe(rowsBefore + 1);
   });
 
   it('applies a role change and a removal to open sockets at once', async () => {
@@ -154,7 +135,7 @@ describe('collaboration gateway', () => {
     for (const p of peers) p.provider.connect();
     const state = (d: Y.Doc) => JSON.stringify([d.getMap(DESIGN_MAP).toJSON(), d.getText('notes').toString()]);
     await eventually(() => peers.every((p) => p.provider.synced && state(p.doc) === state(peers[0].doc)), 15000, 'convergence');
-    const stored = await gateway.store.loadDoc(designId);
+    const stored = await server.collab.store.loadDoc(designId);
     expect(state(stored)).toBe(state(peers[0].doc));
     expect(peers[0].doc.getText('notes').length).toBeGreaterThan(0);
   });
@@ -165,11 +146,11 @@ describe('collaboration gateway', () => {
     for (let i = 1; i <= 30; i++) setDesignField(a.doc, ['rosette', 'layers', 0, 'lobes'], i);
     await eventually(() => true);
     await new Promise((r) => setTimeout(r, 300));
-    const before = await gateway.store.loadDoc(designId);
-    const { before: rows } = await gateway.store.compact(designId);
+    const before = await server.collab.store.loadDoc(designId);
+    const { before: rows } = await server.collab.store.compact(designId);
     expect(rows).toBeGreaterThan(10);
-    expect(await gateway.store.rowCount(designId)).toBe(1);
-    const after = await gateway.store.loadDoc(designId);
+    expect(await server.collab.store.rowCount(designId)).toBe(1);
+    const after = await server.collab.store.loadDoc(designId);
     expect(readDesign(after)).toEqual(readDesign(before));
     expect((await database.db.select().from(designUpdates))[0].merged).toBeGreaterThanOrEqual(rows);
   });
