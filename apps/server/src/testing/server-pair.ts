@@ -6,19 +6,9 @@ import { randomBytes } from 'node:crypto';
 import pg from 'pg';
 import { startServerProcess } from './server-process';
 import { startRoundRobinProxy } from './round-robin-proxy';
-import { TEST_POSTGRES_URL } from './test-database';
+import { createServerDatabase } from './test-database';
 
 type ServerProcess = Awaited<ReturnType<typeof startServerProcess>>;
-
-async function onServer(statement: string) {
-  const client = new pg.Client({ connectionString: TEST_POSTGRES_URL });
-  await client.connect();
-  try {
-    await client.query(statement);
-  } finally {
-    await client.end();
-  }
-}
 
 /** A free TCP port on loopback (released before the server takes it). */
 export function freePort(): Promise<number> {
@@ -33,13 +23,7 @@ export function freePort(): Promise<number> {
 }
 
 /** An empty database of its own on the test PostgreSQL server; `drop` removes it. */
-export async function createTestDatabaseUrl(): Promise<{ url: string; drop(): Promise<void> }> {
-  const name = `barwright_pair_${randomBytes(6).toString('hex')}`;
-  await onServer(`CREATE DATABASE "${name}"`);
-  const u = new URL(TEST_POSTGRES_URL);
-  u.pathname = `/${name}`;
-  return { url: u.toString(), drop: () => onServer(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`) };
-}
+export const createTestDatabaseUrl = () => createServerDatabase('barwright_pair');
 
 export interface ServerPair {
   a: ServerProcess;

@@ -38,17 +38,19 @@ async function onServer(statement: string) {
   }
 }
 
+/** An empty database of its own on the test PostgreSQL server, named `<prefix>_<random>`; `drop` removes it. */
+export async function createServerDatabase(prefix: string): Promise<{ url: string; drop(): Promise<void> }> {
+  const name = `${prefix}_${randomBytes(6).toString('hex')}`;
+  await onServer(`CREATE DATABASE "${name}"`);
+  const u = new URL(TEST_POSTGRES_URL);
+  u.pathname = `/${name}`;
+  return { url: u.toString(), drop: () => onServer(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`) };
+}
+
 /** An in-memory PGlite, or a database of its own on the PostgreSQL server (dropped on close), so test files never meet. */
 export async function openTestDatabase(driver: Driver): Promise<TestDatabase> {
-  let url: string | undefined;
-  let name: string | undefined;
-  if (driver === 'postgres') {
-    name = `barwright_test_${randomBytes(6).toString('hex')}`;
-    await onServer(`CREATE DATABASE "${name}"`);
-    const u = new URL(TEST_POSTGRES_URL);
-    u.pathname = `/${name}`;
-    url = u.toString();
-  }
+  const server = driver === 'postgres' ? await createServerDatabase('barwright_test') : undefined;
+  const url = server?.url;
   const database = await openDatabase(url ? { kind: 'postgres', url } : { kind: 'pglite' });
   return {
     ...database,
@@ -58,7 +60,7 @@ export async function openTestDatabase(driver: Driver): Promise<TestDatabase> {
     },
     close: async () => {
       await database.close();
-      if (name) await onServer(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+      await server?.drop();
     },
   };
 }
