@@ -3,7 +3,7 @@ import { COMMENT_EDIT_WINDOW_MS, type CommentNode, type CommentThread } from '@b
 import { comments, entries, users, type CommentRow, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { forbidden, HttpError, notFound } from '../http/http-error';
-import { isUuid } from '../publishing/entry-access';
+import { isUuid } from '../http/uuid';
 import { refreshCommentCount } from '../publishing/entry-counts';
 import { hiddenFields, seesHiddenItem } from '../moderation/hidden-visibility';
 

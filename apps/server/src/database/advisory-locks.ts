@@ -13,7 +13,14 @@ export const ADVISORY_LOCKS = {
   digest: 7402,
   /** With the design (hashtext of the design id): one compaction at a time per design. */
   compaction: 7403,
+  /** With the uploader (hashtext of the user id): the day's photo allowance is counted and used in one step. */
+  photoAllowance: 7301,
 } as const;
+
+/** Waits for the transaction-scoped lock (key, hashtext(id)); it is released when the transaction ends. */
+export async function advisoryXactLock(tx: Pick<Db, 'execute'>, key: number, id: string): Promise<void> {
+  await tx.execute(sql`select pg_advisory_xact_lock(${key}, hashtext(${id}))`);
+}
 
 /** Takes the transaction-scoped lock (key, hashtext(id)) if free; false when another transaction holds it. */
 export async function tryAdvisoryXactLock(tx: Pick<Db, 'execute'>, key: number, id: string): Promise<boolean> {

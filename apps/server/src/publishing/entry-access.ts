@@ -5,9 +5,6 @@ import type { Db } from '../database/database';
 import { HttpError, notFound } from '../http/http-error';
 import { isUuid } from '../http/uuid';
 
-/** Re-exported for the community's services, which check their ids here. */
-export { isUuid };
-
 /** The signed-in user, if any (entries are readable signed out). */
 export const viewerOf = (req: Request): UserRow | undefined => req.user ?? undefined;
 

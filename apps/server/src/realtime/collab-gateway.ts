@@ -253,10 +253,10 @@ export class CollabGateway {
   /** Presence: rate-limited and size-limited (excess dropped), stamped with the account, own client ids only. */
   private receivePresence(conn: Connection, doc: WSSharedDoc, update: Uint8Array, handOn?: (data: Uint8Array) => void) {
     if (update.length > this.limits.maxAwarenessBytes || !conn.awareness.take()) return;
-    const owners = [...this.connections].filter((c) => c !== conn && c.designId === conn.designId);
+    const ownedElsewhere = (clientId: number) => [...this.connections].some((c) => c !== conn && c.designId === conn.designId && c.clientIds.has(clientId));
     const owns = (clientId: number) => {
-      if (conn.clientIds.has(clientId)) return true;
-      if (conn.clientIds.size >= CLIENT_IDS_PER_SOCKET || owners.some((c) => c.clientIds.has(clientId)) || clientId === doc.clientID) return false;
+      if (conn.clientIds.has(clientId)) return true; // the usual case: no scan
+      if (conn.clientIds.size >= CLIENT_IDS_PER_SOCKET || clientId === doc.clientID || ownedElsewhere(clientId)) return false;
       conn.clientIds.add(clientId);
       return true;
     };

@@ -1,5 +1,5 @@
 import * as Y from 'yjs';
-import { parseDesign } from '@barwright/contracts';
+import { WebSocket } from 'ws';
 import { DESIGN_MAP, NOTES_TEXT, readDesign } from '@barwright/contracts/design-doc';
 import type { RealtimeLimits } from './realtime-limits';
 
@@ -25,7 +25,9 @@ export class UpdateCheck {
   /** Size of the design's JSON as last checked: a stored design already over the limit may shrink, not grow. */
   private designBytes = 0;
   private notesChars = 0;
-  private readonly follow = (update: Uint8Array) => {
+  private readonly follow = (update: Uint8Array, origin: unknown) => {
+    // A client socket's update was applied here by refusal() before the live document got it.
+    if (origin instanceof WebSocket) return;
     try {
       Y.applyUpdate(this.shadow, update);
     } catch {
@@ -63,8 +65,7 @@ export class UpdateCheck {
         const bytes = Buffer.byteLength(JSON.stringify(design));
         if (bytes > this.limits.maxDesignJsonBytes && bytes > this.designBytes) throw new Error(`the design is larger than ${this.limits.maxDesignJsonBytes} bytes`);
         this.designBytes = bytes;
-        // An invalid value (a field being typed) is allowed: the editor flags it and reads refuse it with 422.
-        parseDesign(design);
+        // An invalid value (a field being typed) is kept: the editor flags it and reads refuse it with 422.
       }
       const notes = this.shadow.getText(NOTES_TEXT).length;
       if (this.notesTouched && notes > this.limits.maxNotesChars && notes > this.notesChars) {

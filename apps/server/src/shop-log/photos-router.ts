@@ -8,7 +8,8 @@ import { requireUser } from '../auth/auth-router';
 import { requireDesignRole } from '../boards/board-access';
 import { forbidden, HttpError, notFound } from '../http/http-error';
 import { parseBody } from '../http/validate';
-import { isUuid, requireOpenEntry, requireVisibleEntry, viewerOf } from '../publishing/entry-access';
+import { requireUuid } from '../http/uuid';
+import { requireOpenEntry, requireVisibleEntry, viewerOf } from '../publishing/entry-access';
 import type { PhotoStorage } from './photo-storage';
 import { receiveFile } from './photo-upload';
 import { checkDailyAllowance, listPhotos, storePhoto, type PhotoLimits } from './photos-service';
@@ -25,7 +26,7 @@ type Target = { entryId: string } | { designId: string };
 
 /** May the viewer see this photo? Entry photos follow the entry; design photos the board. */
 async function requirePhotoAccess(db: Db, req: Request): Promise<PhotoRow> {
-  const [photo] = isUuid(req.params.id as string) ? await db.select().from(photos).where(eq(photos.id, req.params.id as string)) : [];
+  const [photo] = await db.select().from(photos).where(eq(photos.id, requireUuid(req.params.id as string, 'photo')));
   if (!photo) throw notFound('photo');
   // Hidden by moderation: its uploader and the moderators only.
   if (photo.hiddenAt && !seesHiddenItem(photo.uploaderId, viewerOf(req))) throw notFound('photo');
@@ -71,16 +72,14 @@ export function photosRouter(deps: PhotosRouterDeps): Router {
 
   const serve = (which: 'fileName' | 'thumbName'): RequestHandler => async (req, res) => {
     const photo = await requirePhotoAccess(db, req);
-    const stored = await deps.files?.read(photo[which]);
-    if (!stored) throw notFound('photo');
-    // A stored name never changes content, so it is the entity tag.
-    const etag = `"${photo[which]}"`;
-    res.set({ 'X-Content-Type-Options': 'nosniff', 'Content-Security-Policy': "default-src 'none'", 'Cache-Control': 'private, max-age=3600', ETag: etag });
-    if (req.headers['if-none-match'] === etag) {
-      stored.body.destroy();
+    // A stored name never changes content, so it is the entity tag; a fresh copy needs no read of the store.
+    res.set({ 'X-Content-Type-Options': 'nosniff', 'Content-Security-Policy': "default-src 'none'", 'Cache-Control': 'private, max-age=3600', ETag: `"${photo[which]}"` });
+    if (req.fresh) {
       res.status(304).end();
       return;
     }
+    const stored = await deps.files?.read(photo[which]);
+    if (!stored) throw notFound('photo');
     res.type(photo.mime).set('Content-Length', String(stored.bytes));
     // Headers are sent: a storage failure from here on can only cut the answer short.
     await pipeline(stored.body, res).catch(() => res.destroy());

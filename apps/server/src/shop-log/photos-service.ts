@@ -1,7 +1,8 @@
-import { and, count, desc, eq, gt, sql, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, gt, type SQL } from 'drizzle-orm';
 import type { Photo } from '@barwright/contracts';
 import { photos, users, type PhotoRow, type UserRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
+import { ADVISORY_LOCKS, advisoryXactLock } from '../database/advisory-locks';
 import { HttpError } from '../http/http-error';
 import type { PhotoStorage } from './photo-storage';
 import { processPhoto } from './photo-image';
@@ -33,9 +34,6 @@ export const toPhoto = (p: PhotoRow, uploaderName: string): Photo => ({
   ...hiddenFields(p),
 });
 
-/** First key of the advisory lock that serialises one member's uploads (the second is the member's). */
-const PHOTO_ALLOWANCE_LOCK = 7301;
-
 /**
  * 429 once the member has uploaded the day's allowance (a rolling 24 hours). Checked before the body is
  * read (cheap refusal) and again in the insert's transaction under the member's lock (the guarantee).
@@ -57,7 +55,7 @@ export async function storePhoto(
   try {
     const row = await db.transaction(async (tx) => {
       // The uploader's uploads queue here from count to insert, so concurrent ones cannot all pass the count.
-      await tx.execute(sql`select pg_advisory_xact_lock(${PHOTO_ALLOWANCE_LOCK}, hashtext(${input.uploader.id}))`);
+      await advisoryXactLock(tx, ADVISORY_LOCKS.photoAllowance, input.uploader.id);
       await checkDailyAllowance(tx, input.uploader.id, limits.perDay);
       const [inserted] = await tx
         .insert(photos)

@@ -5,7 +5,8 @@ import { entries, showcaseItems, users, type UserRow } from '../../../../db/sche
 import type { Db } from '../database/database';
 import { recordAudit } from '../audit/audit-log';
 import { HttpError, notFound } from '../http/http-error';
-import { findLiveEntry, isUuid } from '../publishing/entry-access';
+import { isUuid } from '../http/uuid';
+import { findLiveEntry } from '../publishing/entry-access';
 import { toEntryCard } from '../publishing/entry-views';
 
 const { search: _search, ...cardColumns } = getTableColumns(entries);
