@@ -1,6 +1,8 @@
 import { layerPeakToValley, type Design, type Units } from '@barwright/contracts';
 import { formatLength } from './length-format';
-import { layerDerivatives, type WaveJet } from './wave-derivatives';
+import { reducedPhase } from './phase-schedule';
+import { rosetteMinRadius, rosetteRepeats } from './rosette';
+import { layerDerivatives, type LayerDerivatives, type WaveJet } from './wave-derivatives';
 
 /** The smallest radius of curvature of the crests, from the exact geometry (mm). */
 export interface CrestCurvature {
@@ -31,6 +33,8 @@ interface Layer {
   half: number;
   phase: number;
   jet: WaveJet;
+  /** The wave's corners (t in one wave period), read once with the jet. */
+  corners: LayerDerivatives['corners'];
 }
 
 interface Corner {
@@ -151,8 +155,8 @@ function trackReader(design: Design): TrackReader {
   const layers: Layer[] = rosette.layers
     .filter((l) => layerPeakToValley(l) > 0)
     .map((l) => {
-      const { jet } = layerDerivatives(l, rosette.baseRadius);
-      return { lobes: l.lobes, half: layerPeakToValley(l) / 2, phase: 2 * Math.PI * (l.phase - Math.floor(l.phase)), jet };
+      const { jet, corners } = layerDerivatives(l, rosette.baseRadius);
+      return { lobes: l.lobes, half: layerPeakToValley(l) / 2, phase: 2 * Math.PI * reducedPhase(l.phase), jet, corners };
     });
   const rosetteJet = (theta: number): [number, number, number] => {
     let r = rosette.baseRadius;
@@ -166,13 +170,13 @@ function trackReader(design: Design): TrackReader {
     }
     return [r, r1, r2];
   };
-  const corners = rosetteCorners(design, layers);
+  const corners = rosetteCorners(rosetteRepeats(rosette), layers);
   const convex = corners.filter((c) => c.convex);
-  const period = (2 * Math.PI) / (layers.reduce((g, l) => gcd(g, l.lobes), 0) || 1);
+  const period = (2 * Math.PI) / rosetteRepeats(rosette);
   const rho = rubber.shape === 'round' ? rubber.radius : 0;
   const halfWidth = rubber.shape === 'flat' ? rubber.width / 2 : 0;
   const lead = { delta: 0 };
-  const reach = Math.asin(Math.min(1, (rho + halfWidth) / Math.max(1e-9, rosetteMinRadius(design)))) + 1e-9;
+  const reach = Math.asin(Math.min(1, (rho + halfWidth) / Math.max(1e-9, rosetteMinRadius(rosette)))) + 1e-9;
   const read = (psi: number): Reading => {
     for (const c of nearCorners(convex, psi, reach, period)) {
       const arc = rubber.shape === 'round' ? roundOnCorner(rosetteJet, c, psi, rho) : flatOnCorner(rosetteJet, c, psi);
@@ -187,32 +191,24 @@ function trackReader(design: Design): TrackReader {
 /** How many distinct features one period of the bar holds: Σ lobes × (highest harmonic, or readings) / G, at least 1. */
 function featuresPerPeriod(design: Design): number {
   const moving = design.rosette.layers.filter((l) => layerPeakToValley(l) > 0);
-  const repeats = moving.reduce((g, l) => gcd(g, l.lobes), 0) || 1;
+  const repeats = rosetteRepeats(design.rosette);
   const detail = (l: (typeof moving)[number]) =>
     l.wave.shape === 'fourier' ? Math.max(...l.wave.terms.map((t) => t.k)) : l.wave.shape === 'measured' ? l.wave.points.length : 1;
   return Math.max(1, moving.reduce((sum, l) => sum + (l.lobes * detail(l)) / repeats, 0));
 }
 
-function rosetteMinRadius(design: Design): number {
-  return design.rosette.baseRadius - design.rosette.layers.reduce((sum, l) => sum + layerPeakToValley(l) / 2, 0);
-}
-
 /** Corners of the rosette over one period of the bar (θ in [0, 2π/G)), sorted. */
-function rosetteCorners(design: Design, layers: Layer[]): Corner[] {
+function rosetteCorners(repeats: number, layers: Layer[]): Corner[] {
   const all: Corner[] = [];
-  const moving = design.rosette.layers.filter((l) => layerPeakToValley(l) > 0);
-  const repeats = moving.reduce((g, l) => gcd(g, l.lobes), 0) || 1;
   const period = (2 * Math.PI) / repeats;
-  moving.forEach((layer, i) => {
-    const { corners } = layerDerivatives(layer, design.rosette.baseRadius);
-    const { lobes, phase } = layers[i];
+  for (const { lobes, phase, corners } of layers) {
     for (const c of corners) {
       for (let m = 0; m < lobes / repeats; m++) {
         const theta = (c.t - phase + 2 * Math.PI * m) / lobes;
         all.push({ theta: theta - Math.floor(theta / period) * period, convex: c.convex });
       }
     }
-  });
+  }
   return all.sort((a, b) => a.theta - b.theta);
 }
 
@@ -347,9 +343,4 @@ function flatRead(jet: (t: number) => [number, number, number], psi: number, hal
   if (!(kappa > 0) || Math.abs(r * Math.sin(delta)) > halfWidth) return { ok: false };
   const s = r * Math.cos(delta);
   return { ok: true, s, s1: r * Math.sin(delta), s2: 1 / kappa - s };
-}
-
-function gcd(a: number, b: number): number {
-  while (b) [a, b] = [b, a % b];
-  return a;
 }

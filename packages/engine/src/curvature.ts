@@ -29,24 +29,3 @@ export function graphCurvatureRadius(y: ArrayLike<number>, i: number, step: numb
   const bend = (y[i + 1] - 2 * y[i] + y[i - 1]) / (step * step);
   return (1 + slope * slope) ** 1.5 / bend;
 }
-
-/**
- * The smallest radius of curvature of the crests (convex parts) of a sampled graph between samples
- * from and to: 0 when a crest is sharp at the stencil's resolution, Infinity when the graph has no
- * crest. The bend is taken over `span` samples each side: an envelope of discs is exact at its
- * samples but kinked between them, which a three-point stencil would read as noise of the order of
- * 1/(2·r·span²) in the curvature.
- */
-export function minCrestRadius(y: ArrayLike<number>, step: number, from = 1, to = y.length - 2, span = 1): number {
-  let least = Infinity;
-  const w = Math.max(1, Math.floor(span));
-  const h = w * step;
-  const flat = 1e-9; // bends below this (1/mm) are rounding noise on a straight stretch
-  for (let i = Math.max(w, from); i <= Math.min(to, y.length - 1 - w); i++) {
-    const bend = (y[i + w] - 2 * y[i] + y[i - w]) / (h * h);
-    if (bend >= -flat) continue;
-    const slope = (y[i + w] - y[i - w]) / (2 * h);
-    least = Math.min(least, (1 + slope * slope) ** 1.5 / -bend);
-  }
-  return least < 2 * h ? 0 : least;
-}

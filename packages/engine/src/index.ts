@@ -7,7 +7,7 @@ export { type RubberReading, readRubber, rubberReach } from './rubber';
 export { lowerDiscEnvelope, upperDiscEnvelope } from './disc-envelope';
 export { barEdge, cutterHeights, counterPhaseDesign, invertHeights } from './bar';
 export { followerPath } from './follower';
-export { rosetteCurvatureRadius, graphCurvatureRadius, minCrestRadius } from './curvature';
+export { rosetteCurvatureRadius, graphCurvatureRadius } from './curvature';
 export { crestCurvature, crestText, type CrestCurvature, type CrestInput } from './crest-curvature';
 export { layerDerivatives, type LayerDerivatives, type WaveJet, type WaveCorner } from './wave-derivatives';
 export { type DetailLossInput, detailLossWarnings } from './detail-loss';
