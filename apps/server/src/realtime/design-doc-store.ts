@@ -42,9 +42,8 @@ export class DesignDocStore {
       .from(designUpdates)
       .where(and(eq(designUpdates.designId, designId), gt(designUpdates.seq, after)))
       .orderBy(asc(designUpdates.seq));
-    const good = this.decodable(designId, rows);
     const lastSeq = rows.length ? rows[rows.length - 1].seq : after;
-    return { update: good.length === 1 ? good[0].update : Y.mergeUpdates(good.map((r) => r.update)), lastSeq };
+    return { update: this.decodable(designId, rows).update, lastSeq };
   }
 
   /** A fresh Y.Doc holding the stored state (for reads outside a live session). */
@@ -55,14 +54,22 @@ export class DesignDocStore {
   }
 
   /**
-   * The rows that apply on their own. A row that throws (stored before updates were checked, or
-   * damaged on disk) would fail the whole design, so it is left out and reported; it stays in the table.
+   * The rows that apply, and their merge. A row that throws (stored before updates were checked, or
+   * damaged on disk) would fail the whole design, so it is left out and reported; it stays in the
+   * table. The rows are tried one by one only when their merge does not apply.
    */
-  private decodable<R extends { seq: number; update: Uint8Array }>(designId: string, rows: R[]): R[] {
-    if (rows.length === 1 && this.applies(rows[0].update)) return rows;
+  private decodable<R extends { seq: number; update: Uint8Array }>(designId: string, rows: R[]): { good: R[]; update: Uint8Array } {
+    const merge = (rs: R[]) => (rs.length === 1 ? rs[0].update : Y.mergeUpdates(rs.map((r) => r.update)));
+    try {
+      const update = merge(rows);
+      if (this.applies(update)) return { good: rows, update };
+    } catch {
+      // a row does not decode: find it below
+    }
     const good = rows.filter((r) => this.applies(r.update));
-    for (const r of rows) if (!good.includes(r)) this.report(`design ${designId}: stored update ${r.seq} (${r.update.length} bytes) does not decode; skipped`);
-    return good;
+    const kept = new Set(good);
+    for (const r of rows) if (!kept.has(r)) this.report(`design ${designId}: stored update ${r.seq} (${r.update.length} bytes) does not decode; skipped`);
+    return { good, update: merge(good) };
   }
 
   private applies(update: Uint8Array): boolean {
@@ -95,8 +102,7 @@ export class DesignDocStore {
         .where(eq(designUpdates.designId, designId))
         .orderBy(asc(designUpdates.seq));
       if (rows.length < 2) return { before: rows.length, after: rows.length };
-      const good = this.decodable(designId, rows); // a row that does not decode stays as it is, for inspection
-      const merged = Y.mergeUpdates(good.map((r) => r.update));
+      const { good, update: merged } = this.decodable(designId, rows); // a row that does not decode stays as it is, for inspection
       const total = good.reduce((s, r) => s + r.merged, 0);
       // One array parameter, not one per row (PostgreSQL takes at most 65 535 bind parameters).
       const seqs = `{${good.map((r) => r.seq).join(',')}}`;
