@@ -3,7 +3,7 @@ import type { Namespace, Server } from 'socket.io';
 import { MODERATION_NAMESPACE, MODERATION_REFUSALS, userRoom, type ModerationClientEvents, type ModerationServerEvents } from '@barwright/contracts';
 import type { Db } from '../database/database';
 import { findUserById } from '../auth/users';
-import { overSocketCap, sessionIdOf, sessionRoom, sessionUser, TOO_MANY_SOCKETS } from '../notifications/notify-gateway';
+import { overSocketCap, sessionIdOf, sessionRoom, sessionUser, TOO_MANY_SOCKETS } from '../realtime/handshake-session';
 import { DEFAULT_REALTIME_LIMITS, type RealtimeLimits } from '../realtime/realtime-limits';
 import type { ModerationEvents } from './moderation-events';
 import { isModerator } from './moderation-rules';
@@ -33,12 +33,13 @@ export class ModerationGateway {
 
   constructor(private readonly deps: ModerationGatewayDeps) {
     this.namespace = deps.io.of(MODERATION_NAMESPACE);
+    const limits = { ...DEFAULT_REALTIME_LIMITS, ...deps.limits };
     this.namespace.use((socket, next) => {
       void this.admit(socket.request as never)
         .then((refusal) => {
           if (typeof refusal === 'string') return next(new Error(refusal));
           const sessionId = sessionIdOf(socket.request);
-          if (overSocketCap(this.namespace.sockets.values(), { userId: refusal.userId, sessionId }, { ...DEFAULT_REALTIME_LIMITS, ...deps.limits })) {
+          if (overSocketCap(this.namespace.sockets.values(), { userId: refusal.userId, sessionId }, limits)) {
             return next(new Error(TOO_MANY_SOCKETS));
           }
           socket.data.userId = refusal.userId;

@@ -1,6 +1,6 @@
 import type { IncomingMessage, Server } from 'node:http';
 import type { Duplex } from 'node:stream';
-import type { RequestHandler, Response } from 'express';
+import type { RequestHandler } from 'express';
 import { WebSocketServer, type WebSocket, type RawData } from 'ws';
 import * as Y from 'yjs';
 import * as decoding from 'lib0/decoding';
@@ -15,6 +15,7 @@ import { originAllowed } from './allowed-origins';
 import { DesignDocStore } from './design-doc-store';
 import type { CloseMatch, ControlMessage, RedisRelay } from './redis-relay';
 import { CLIENT_IDS_PER_SOCKET, stampPresence } from './presence-stamp';
+import { sessionIdOf, sessionUser } from './handshake-session';
 import { AccountBuckets, DEFAULT_REALTIME_LIMITS, type RealtimeLimits, type TokenBucket } from './realtime-limits';
 import { UpdateCheck } from './update-check';
 
@@ -175,15 +176,10 @@ export class CollabGateway {
     );
   }
 
-  private sessionOf(req: IncomingMessage): Promise<{ userId: string; sessionId: string } | undefined> {
-    return new Promise((resolve) => {
-      const res = { getHeader: () => undefined, setHeader: () => res, end: () => res } as unknown as Response;
-      this.deps.sessionParser(req as never, res, () => {
-        const r = req as unknown as { session?: { passport?: { user?: string } }; sessionID?: string };
-        const userId = r.session?.passport?.user;
-        resolve(userId && r.sessionID ? { userId, sessionId: r.sessionID } : undefined);
-      });
-    });
+  private async sessionOf(req: IncomingMessage): Promise<{ userId: string; sessionId: string } | undefined> {
+    const userId = await sessionUser(this.deps.sessionParser, req);
+    const sessionId = sessionIdOf(req);
+    return userId && sessionId ? { userId, sessionId } : undefined;
   }
 
   private connect(ws: WebSocket, req: IncomingMessage, conn: Connection) {
