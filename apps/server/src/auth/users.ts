@@ -5,6 +5,9 @@ import type { Db } from '../database/database';
 import { hashPassword } from './passwords';
 import { isUuid } from '../http/uuid';
 
+/** An e-mail address as accounts are stored and looked up: trimmed, lower-cased. */
+export const normalEmail = (email: string) => email.trim().toLowerCase();
+
 export const toMe = (u: UserRow): Me => ({
   id: u.id,
   email: u.email,
@@ -26,7 +29,7 @@ export const toAdminUser = (u: UserRow): AdminUser => ({
 });
 
 export async function findUserByEmail(db: Db, email: string): Promise<UserRow | undefined> {
-  const [row] = await db.select().from(users).where(eq(users.email, email.trim().toLowerCase()));
+  const [row] = await db.select().from(users).where(eq(users.email, normalEmail(email)));
   return row;
 }
 
@@ -50,7 +53,7 @@ export async function insertUser(db: Db, u: NewUser): Promise<UserRow | undefine
   const [row] = await db
     .insert(users)
     .values({
-      email: u.email.trim().toLowerCase(),
+      email: normalEmail(u.email),
       displayName: u.displayName,
       passwordHash: await hashPassword(u.password),
       role: u.role ?? 'member',

@@ -1,5 +1,6 @@
 import { rateLimit, type AugmentedRequest, type Options, type Store } from 'express-rate-limit';
 import { RedisStore, type RedisReply } from 'rate-limit-redis';
+import { normalEmail } from '../auth/users';
 import type { ApiErrorBody } from '@barwright/contracts';
 
 export interface RateLimitSettings {
@@ -26,7 +27,7 @@ const tooMany: Options['handler'] = (_req, res, _next, options) => {
 };
 
 /** The per-account counter's key: the e-mail as typed at sign-in, trimmed and lower-cased. */
-export const signInAccountKey = (email: unknown) => `account:${String(email ?? '').trim().toLowerCase()}`;
+export const signInAccountKey = (email: unknown) => `account:${normalEmail(String(email ?? ''))}`;
 
 /** Where a locked-out member chooses a new password (the web app's page). */
 export const FORGOT_PASSWORD_PATH = '/account/forgot-password';
