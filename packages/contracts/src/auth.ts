@@ -52,7 +52,7 @@ export const updateProfileBody = z
   .refine((b) => b.displayName !== undefined || b.units !== undefined, { message: 'give displayName or units' });
 export type UpdateProfileBody = z.input<typeof updateProfileBody>;
 
-/** `GET /api/auth/me`. */
+/** The signed-in account (`POST /api/auth/sign-in`, `PATCH /api/auth/me`). */
 export const meSchema = z.object({
   id: z.string(),
   email: z.string(),
@@ -62,6 +62,9 @@ export const meSchema = z.object({
   units: unitsSchema,
 });
 export type Me = z.infer<typeof meSchema>;
+/** `GET /api/auth/me`: 200 with the signed-in account, or 200 with null for a visitor (not an error). */
+export const meAnswerSchema = meSchema.nullable();
+export type MeAnswer = z.infer<typeof meAnswerSchema>;
 
 /** A row of `GET /api/admin/users`. */
 export const adminUserSchema = z.object({

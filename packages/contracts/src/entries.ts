@@ -5,7 +5,7 @@ import { MATERIALS, WAVE_SHAPES, type Design, type MaterialId, type WaveShape } 
  * Published entries: a bar design made public as a series of immutable revisions.
  * Routes (all under /api):
  *   POST /designs/:id/publish            PublishBody → 201 PublishResult   (editor or owner on the design's board)
- *   GET  /designs/:id/entry              → DesignEntryLink, or 404 when the design was never published (board members)
+ *   GET  /designs/:id/entry              → DesignEntryLink, or null when the design was never published (board members)
  *   GET  /entries                        ExploreQuery (query string) → ExplorePage   (anyone, signed in or not)
  *   GET  /entries/:id                    → EntryDetail
  *   GET  /entries/:id/revisions/:n       → EntryRevision
@@ -64,6 +64,9 @@ export const designEntryLinkSchema = z.object({
   latestRevision: z.number().int(),
 });
 export type DesignEntryLink = z.infer<typeof designEntryLinkSchema>;
+/** A design never published answers 200 with null: the usual case, not an error. */
+export const designEntryLinkAnswerSchema = designEntryLinkSchema.nullable();
+export type DesignEntryLinkAnswer = z.infer<typeof designEntryLinkAnswerSchema>;
 
 export interface PersonRef {
   id: string;

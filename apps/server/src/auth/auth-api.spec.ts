@@ -101,6 +101,13 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       expect((await c.get('/api/auth/me')).body.email).toBe('ada@example.test');
     });
 
+    it('answers a visitor 200 with null: being signed out is not an error', async () => {
+      const res = await new Client(server.app).get('/api/auth/me');
+      expect(res.status).toBe(200);
+      expect(res.type).toBe('application/json');
+      expect(res.text).toBe('null');
+    });
+
     it('destroys the session on the server at sign-out', async () => {
       await makeUser(database, 'bo@example.test');
       const c = new Client(server.app);
@@ -108,7 +115,8 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       const sid = sidOf(res)!;
       expect((await c.post('/api/auth/sign-out')).status).toBe(204);
       const replay = await new Client(server.app).agent.get('/api/auth/me').set('Cookie', sid);
-      expect(replay.status).toBe(401);
+      expect(replay.status).toBe(200);
+      expect(replay.body).toBeNull();
       expect((await database.db.select().from(sessions)).filter((s) => s.userId)).toHaveLength(0);
     });
 
@@ -178,7 +186,7 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       expect(weak.status).toBe(400);
       const newPassword = 'ember-gauge-tinplate-77';
       expect((await c.post('/api/auth/password-reset/confirm', { token, password: newPassword })).status).toBe(200);
-      expect((await old.get('/api/auth/me')).status).toBe(401);
+      expect((await old.get('/api/auth/me')).body).toBeNull(); // the session ended: a visitor now
       expect((await c.post('/api/auth/password-reset/confirm', { token, password: newPassword })).body.error.code).toBe('invalid_token');
       await c.signIn('gus@example.test', newPassword);
     });
@@ -206,7 +214,7 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       await admin.signIn('root@example.test');
       const res = await admin.patch(`/api/admin/users/${target.id}`, { suspended: true });
       expect(res.body.suspended).toBe(true);
-      expect((await ivy.get('/api/auth/me')).status).toBe(401);
+      expect((await ivy.get('/api/auth/me')).body).toBeNull();
       const again = await new Client(server.app).post('/api/auth/sign-in', { email: 'ivy@example.test', password: TEST_PASSWORD });
       expect(again.status).toBe(403);
       expect(again.body.error.code).toBe('suspended');
@@ -219,7 +227,7 @@ describe.each(drivers)('accounts API on %s', (driver) => {
       const c = new Client(server.app);
       await c.signIn('jo@example.test');
       await database.db.update(users).set({ suspendedAt: new Date() }).where(eq(users.id, u.id));
-      expect((await c.get('/api/auth/me')).status).toBe(401);
+      expect((await c.get('/api/auth/me')).body).toBeNull();
     });
   });
 });

@@ -1,6 +1,6 @@
 import { Router, type Request, type RequestHandler, type Response } from 'express';
 import { eq } from 'drizzle-orm';
-import { resetConfirmBody, resetRequestBody, signInBody, signUpBody, updateProfileBody, verifyBody } from '@barwright/contracts';
+import { resetConfirmBody, resetRequestBody, signInBody, signUpBody, updateProfileBody, verifyBody, type MeAnswer } from '@barwright/contracts';
 import { users, type UserRow } from '../../../../db/schema';
 import { HttpError, unauthenticated } from '../http/http-error';
 import { issueCsrfToken } from '../http/csrf';
@@ -76,8 +76,9 @@ export function authRouter(deps: AuthRouterDeps): Router {
   });
   router.post('/sign-in', deps.limits.signInByAddress, deps.limits.signInByAccount, signIn(deps));
   router.post('/sign-out', signOut(deps));
+  // A visitor is not an error: the answer is null, not a 401 in every signed-out browser's console.
   router.get('/me', (req, res) => {
-    res.json(toMe(requireUser(req)));
+    res.json((req.user ? toMe(req.user) : null) satisfies MeAnswer);
   });
   router.patch('/me', async (req, res) => {
     const user = requireUser(req);

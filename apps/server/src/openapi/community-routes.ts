@@ -5,7 +5,7 @@ import type { OpenApiRoute } from './openapi-document';
 /** The community's routes (publishing, Explore, ratings, comments, remix, shop log, notifications). */
 export const COMMUNITY_ROUTES: OpenApiRoute[] = [
   { method: 'post', path: '/api/designs/{id}/publish', summary: 'Publish the design as a new immutable revision (editor)', tag: 'community', body: c.publishBody, status: 201 },
-  { method: 'get', path: '/api/designs/{id}/entry', summary: 'The entry a board design was published as (404 if never)', tag: 'community', answer: c.designEntryLinkSchema },
+  { method: 'get', path: '/api/designs/{id}/entry', summary: 'The entry a board design was published as, or null if never', tag: 'community', answer: c.designEntryLinkAnswerSchema },
   { method: 'get', path: '/api/entries', summary: 'Explore: filters, full-text search, sorts, pages', tag: 'community', query: c.exploreQuery },
   { method: 'get', path: '/api/entries/{id}', summary: 'A published bar: latest revision, history, rating, counts', tag: 'community' },
   { method: 'delete', path: '/api/entries/{id}', summary: 'Delete your own published bar', tag: 'community', status: 204 },

@@ -39,7 +39,7 @@ export const ROUTES: Route[] = [
   { method: 'post', path: '/api/auth/resend-verification', summary: 'Send the verification mail again', tag: 'accounts', answer: ok, status: 202 },
   { method: 'post', path: '/api/auth/sign-in', summary: 'Sign in (rate limited per account and per address)', tag: 'accounts', body: c.signInBody, answer: c.meSchema },
   { method: 'post', path: '/api/auth/sign-out', summary: 'Sign out; the session ends on the server', tag: 'accounts', status: 204 },
-  { method: 'get', path: '/api/auth/me', summary: 'The signed-in member', tag: 'accounts', answer: c.meSchema },
+  { method: 'get', path: '/api/auth/me', summary: 'The signed-in member, or null for a visitor', tag: 'accounts', answer: c.meAnswerSchema },
   { method: 'patch', path: '/api/auth/me', summary: 'Change display name or units', tag: 'accounts', body: c.updateProfileBody, answer: c.meSchema },
   { method: 'post', path: '/api/auth/password-reset/request', summary: 'Mail a reset link (202 whether or not the address is known)', tag: 'accounts', body: c.resetRequestBody, answer: ok, status: 202 },
   { method: 'post', path: '/api/auth/password-reset/confirm', summary: 'Choose a new password with the mailed token', tag: 'accounts', body: c.resetConfirmBody, answer: ok },

@@ -28,6 +28,13 @@ describe.each(drivers)('publishing API on %s', (driver) => {
     expect((await other.client.get(`/api/designs/${designId}/entry`)).status).toBe(404);
   });
 
+  it('answers 200 with null for a design never published: the usual case, not an error', async () => {
+    const fresh = (await author.client.post(`/api/boards/${author.boardId}/designs`, { title: 'Unpublished' })).body.id;
+    const res = await author.client.get(`/api/designs/${fresh}/entry`);
+    expect(res.status).toBe(200);
+    expect(res.text).toBe('null');
+  });
+
   it('publishes an immutable revision with the facts of the design and a thumbnail', async () => {
     const { entryId, designId } = await publishedBar(author, 'Sine 24 keeper', { tags: ['Barleycorn', 'a2 steel'], description: 'Cut on the club engine.' });
     const entry = (await new Client(server.app).get(`/api/entries/${entryId}`)).body;

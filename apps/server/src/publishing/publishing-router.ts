@@ -1,6 +1,6 @@
 import { gzipSync } from 'node:zlib';
 import { Router, type Request, type Response } from 'express';
-import { publishBody, type DesignEntryLink, type PublishResult } from '@barwright/contracts';
+import { publishBody, type DesignEntryLinkAnswer, type PublishResult } from '@barwright/contracts';
 import { and, eq, isNull } from 'drizzle-orm';
 import { entries } from '../../../../db/schema';
 import { EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
@@ -9,7 +9,7 @@ import { ExportCache } from '../compute/export-cache';
 import { requireUser } from '../auth/auth-router';
 import { requireDesignRole } from '../boards/board-access';
 import { validatedDesign } from '../designs/designs-service';
-import { forbidden, HttpError, notFound } from '../http/http-error';
+import { forbidden, HttpError } from '../http/http-error';
 import { parseBody } from '../http/validate';
 import type { DesignDocStore } from '../realtime/design-doc-store';
 import { currentDoc } from '../realtime/live-docs';
@@ -55,15 +55,15 @@ export function publishingRouter(deps: PublishingRouterDeps): Router {
     res.status(201).json((await publishDesign(db, design, file, user, body, (d) => compute.thumbnailSvg(d))) satisfies PublishResult);
   });
 
-  // The live entry a board design was published as, so a republish can start from its words.
+  // The live entry a board design was published as, so a republish can start from its words;
+  // null (not a 404) for a design never published, which is the usual case, not an error.
   router.get('/designs/:id/entry', async (req, res) => {
     const { design } = await requireDesignRole(db, req.params.id, requireUser(req).id, 'viewer');
     const [entry] = await db
       .select({ entryId: entries.id, title: entries.title, description: entries.description, tags: entries.tags, latestRevision: entries.latestRevision })
       .from(entries)
       .where(and(eq(entries.designId, design.id), isNull(entries.deletedAt)));
-    if (!entry) throw notFound('published entry');
-    res.json(entry satisfies DesignEntryLink);
+    res.json((entry ?? null) satisfies DesignEntryLinkAnswer);
   });
 
   router.get('/entries/:id', async (req, res) => {

@@ -1,8 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
-import type { Me, Role, SignInBody, UpdateProfileBody } from '@barwright/contracts';
+import type { Me, MeAnswer, Role, SignInBody, UpdateProfileBody } from '@barwright/contracts';
 import { firstValueFrom } from 'rxjs';
-import { ApiError } from '../http/api-error';
 
 /** Who is signed in. The server is the judge; this only mirrors its last answer. */
 @Injectable({ providedIn: 'root' })
@@ -24,13 +23,13 @@ export class AuthStore {
     return role !== null && roles.includes(role);
   }
 
-  /** Asks the server who we are. Never throws: a visitor or an unreachable server both leave us signed out. */
+  /** Asks the server who we are (null for a visitor). Never throws: an unreachable server leaves us signed out. */
   async load(): Promise<void> {
     try {
-      this.current.set(await firstValueFrom(this.http.get<Me>('/api/auth/me')));
+      this.current.set(await firstValueFrom(this.http.get<MeAnswer>('/api/auth/me')));
     } catch (error) {
       this.current.set(null);
-      if (!(error instanceof ApiError && error.status === 401)) console.warn('Could not ask who is signed in', error);
+      console.warn('Could not ask who is signed in', error);
     } finally {
       this.checked.set(true);
     }

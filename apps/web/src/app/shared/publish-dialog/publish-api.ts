@@ -1,8 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import type { DesignEntryLink, PublishBody, PublishResult } from '@barwright/contracts';
+import type { DesignEntryLinkAnswer, PublishBody, PublishResult } from '@barwright/contracts';
 import { firstValueFrom } from 'rxjs';
-import { ApiError } from '../../core/http/api-error';
 
 const design = (id: string) => `/api/designs/${encodeURIComponent(id)}`;
 
@@ -11,14 +10,9 @@ const design = (id: string) => `/api/designs/${encodeURIComponent(id)}`;
 export class PublishApi {
   private readonly http = inject(HttpClient);
 
-  /** `GET /api/designs/:id/entry`: the design's live entry, or null when it was never published (the server's 404). */
-  async entryOf(designId: string): Promise<DesignEntryLink | null> {
-    try {
-      return await firstValueFrom(this.http.get<DesignEntryLink>(`${design(designId)}/entry`));
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 404) return null;
-      throw error;
-    }
+  /** `GET /api/designs/:id/entry`: the design's live entry, or null when it was never published. */
+  entryOf(designId: string): Promise<DesignEntryLinkAnswer> {
+    return firstValueFrom(this.http.get<DesignEntryLinkAnswer>(`${design(designId)}/entry`));
   }
 
   /** `POST /api/designs/:id/publish`: the design's current file becomes a new revision of its entry (made on first publish). */
