@@ -5,3 +5,4 @@ export * from './community';
 export * from './shop-log';
 export * from './notifications';
 export * from './moderation';
+export * from './rack';

@@ -19,3 +19,7 @@ export * from './socket-events';
 export * from './moderation';
 export * from './showcase';
 export * from './audit';
+// The rosette rack, the sweep, votes.
+export * from './rack';
+export * from './sweep';
+export * from './vote';

@@ -1,0 +1,153 @@
+import * as z from 'zod';
+import { DESIGN_FORMAT, designSchema, EXAMPLE_DESIGN, MM_PER_INCH, unitsSchema, type Design, type PhaseSchedule, type Units } from './design';
+import { rackShopBody, rackTagsSchema, RACK_LIMITS, rosetteInUnits, type RosetteObject, type ShopCutter, type ShopFollower, type ShopRubber, type ShopTravel } from './rack';
+
+/**
+ * The sweep: every bar the chosen rosettes × rubbers × travel settings × cutters can cut, with one
+ * follower, one bar length and the line-study settings. A saved sweep keeps its choices and its
+ * shortlist, never its results (they are recomputed, deterministically).
+ *   GET    /api/rack/sweeps        → SweepSummary[] (newest first)
+ *   POST   /api/rack/sweeps        SweepBody → 201 SavedSweep
+ *   GET    /api/rack/sweeps/:id    → SavedSweep
+ *   PUT    /api/rack/sweeps/:id    SweepBody → SavedSweep
+ *   DELETE /api/rack/sweeps/:id    → 204
+ */
+export const SWEEP_MAX_CANDIDATES = 5000;
+export const SWEEP_LIMITS = { nameMax: 80, saved: 100, schedules: 8, shortlist: 200, picked: RACK_LIMITS.rosettes } as const;
+
+const finite = z.number({ error: 'must be a number' }).finite('must be a finite number');
+const shopSchema = rackShopBody().shape;
+const study = designSchema.shape.study.shape;
+
+export const sweepRosettesSchema = z.discriminatedUnion(
+  'by',
+  [
+    z.strictObject({ by: z.literal('all') }),
+    z.strictObject({ by: z.literal('tags'), tags: rackTagsSchema.refine((t) => t.length > 0, 'needs at least 1 tag') }),
+    z.strictObject({ by: z.literal('picked'), ids: z.array(z.uuid('must be rack rosette ids')).min(1, 'needs at least 1 rosette').max(SWEEP_LIMITS.picked, `takes at most ${SWEEP_LIMITS.picked} rosettes`) }),
+  ],
+  { error: 'must choose rosettes by "all", "tags" or "picked"' },
+);
+export type SweepRosettes = z.infer<typeof sweepRosettesSchema>;
+
+export const sweepChoicesSchema = z.strictObject({
+  /** The units of every length below. */
+  units: unitsSchema,
+  rosettes: sweepRosettesSchema,
+  rubbers: shopSchema.rubbers.min(1, 'needs at least 1'),
+  travels: shopSchema.travels.min(1, 'needs at least 1'),
+  cutters: shopSchema.cutters.min(1, 'needs at least 1'),
+  follower: shopSchema.followers.element,
+  barLength: finite.positive('must be greater than 0'),
+  study: z.strictObject({
+    lineSpacing: study.lineSpacing,
+    lines: study.lines,
+    /** One or more phase schedules: each candidate's line study is drawn with each. */
+    schedules: z.array(study.schedule).min(1, 'needs at least 1 schedule').max(SWEEP_LIMITS.schedules, `takes at most ${SWEEP_LIMITS.schedules} schedules`),
+    vAngle: study.vAngle,
+    depth: study.depth,
+  }),
+});
+export type SweepChoices = z.infer<typeof sweepChoicesSchema>;
+
+/** One candidate of a sweep, by the indices of its choices and the rack rosette's id. */
+export const candidateKeySchema = z.strictObject({
+  rosetteId: z.uuid('must be a rack rosette id'),
+  rubber: finite.int('must be a whole number').min(0, 'must not be negative'),
+  travel: finite.int('must be a whole number').min(0, 'must not be negative'),
+  cutter: finite.int('must be a whole number').min(0, 'must not be negative'),
+});
+export type CandidateKey = z.infer<typeof candidateKeySchema>;
+
+export const sweepBody = z
+  .strictObject({
+    name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(SWEEP_LIMITS.nameMax, `must be at most ${SWEEP_LIMITS.nameMax} characters`),
+    choices: sweepChoicesSchema,
+    shortlist: z.array(candidateKeySchema).max(SWEEP_LIMITS.shortlist, `takes at most ${SWEEP_LIMITS.shortlist} candidates`).default([]),
+  })
+  .superRefine((body, ctx) => {
+    const { rubbers, travels, cutters } = body.choices;
+    body.shortlist.forEach((key, i) => {
+      for (const [field, count] of [['rubber', rubbers.length], ['travel', travels.length], ['cutter', cutters.length]] as const) {
+        if (key[field] >= count) ctx.addIssue({ code: 'custom', path: ['shortlist', i, field], message: `must be below ${count} (the number of ${field}s chosen)` });
+      }
+    });
+    const bound = sweepCountProblem(body.choices, body.choices.rosettes.by === 'picked' ? body.choices.rosettes.ids.length : 1);
+    if (bound) ctx.addIssue({ code: 'custom', path: ['choices'], message: bound });
+  });
+export type SweepBody = z.input<typeof sweepBody>;
+
+export interface SweepSummary {
+  id: string;
+  name: string;
+  candidates: number;
+  shortlisted: number;
+  updatedAt: string;
+}
+export interface SavedSweep {
+  id: string;
+  name: string;
+  choices: SweepChoices;
+  shortlist: CandidateKey[];
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** How many bars the choices make with `rosettes` rosettes. */
+export function sweepCount(choices: Pick<SweepChoices, 'rubbers' | 'travels' | 'cutters'>, rosettes: number): number {
+  return rosettes * choices.rubbers.length * choices.travels.length * choices.cutters.length;
+}
+
+/** The count as a sentence: "36 rosettes × 2 rubbers × 3 travels × 1 cutter = 216 bars". */
+export function sweepCountText(choices: Pick<SweepChoices, 'rubbers' | 'travels' | 'cutters'>, rosettes: number): string {
+  const part = (n: number, one: string) => `${n} ${n === 1 ? one : `${one}s`}`;
+  const total = sweepCount(choices, rosettes);
+  return `${part(rosettes, 'rosette')} × ${part(choices.rubbers.length, 'rubber')} × ${part(choices.travels.length, 'travel')} × ${part(choices.cutters.length, 'cutter')} = ${part(total, 'bar')}`;
+}
+
+/** Undefined when the sweep is within SWEEP_MAX_CANDIDATES, else the message saying how to narrow it. */
+export function sweepCountProblem(choices: Pick<SweepChoices, 'rubbers' | 'travels' | 'cutters'>, rosettes: number): string | undefined {
+  if (sweepCount(choices, rosettes) <= SWEEP_MAX_CANDIDATES) return undefined;
+  return `${sweepCountText(choices, rosettes)}: a sweep takes at most ${SWEEP_MAX_CANDIDATES.toLocaleString('en-GB').replace(',', ' ')}; narrow it by choosing rosettes by tag or by hand, or fewer rubbers, travel settings or cutters`;
+}
+
+/** Everything one candidate needs, lengths in `units` (the rosette in its own). */
+export interface SweepCandidate {
+  units: Units;
+  rosette: { name: string; units: Units; rosette: RosetteObject };
+  rubber: ShopRubber;
+  travel: ShopTravel;
+  cutter: ShopCutter;
+  follower: ShopFollower;
+  barLength: number;
+  study: { lineSpacing: number; lines: number; schedule: PhaseSchedule; vAngle: number; depth: number };
+}
+
+/**
+ * The bar design file of a candidate: the keeper bar (A2, the example's thickness and plan) cut with
+ * the candidate's rosette, rubber, travel, cutter and follower. Pure; the same candidate gives the same file.
+ */
+export function candidateDesign(c: SweepCandidate): Design {
+  const f = c.units === 'in' ? 1 / MM_PER_INCH : 1;
+  const { rubber, travel, cutter } = c;
+  return {
+    format: DESIGN_FORMAT,
+    units: c.units,
+    rosette: rosetteInUnits(c.rosette.rosette, c.rosette.units, c.units),
+    rubber: rubber.shape === 'round' ? { shape: 'round', radius: rubber.radius } : { shape: 'flat', width: rubber.width },
+    motion: { travelPerRev: travel.travelPerRev, leverRatio: travel.leverRatio },
+    cutter: { diameter: cutter.diameter, flutes: cutter.flutes },
+    bar: { length: c.barLength, thickness: EXAMPLE_DESIGN.bar.thickness * f, material: 'a2' },
+    follower: { radius: c.follower.radius },
+    study: { lineSpacing: c.study.lineSpacing, lines: c.study.lines, schedule: c.study.schedule, vAngle: c.study.vAngle, depth: c.study.depth },
+    plan: { stepOver: EXAMPLE_DESIGN.plan.stepOver * f, cleanup: EXAMPLE_DESIGN.plan.cleanup * f, travelSpeed: EXAMPLE_DESIGN.plan.travelSpeed * f },
+  };
+}
+
+/** A candidate's title on a board: rosette, rubber and travel ("Sine 24 · round 1 mm · 100 mm/rev"). */
+export function candidateTitle(c: Pick<SweepCandidate, 'units' | 'rosette' | 'rubber' | 'travel'>): string {
+  const len = (v: number) => `${+v.toFixed(c.units === 'in' ? 3 : 2)} ${c.units}`;
+  const rubber = c.rubber.name || (c.rubber.shape === 'round' ? `round ${len(c.rubber.radius)}` : `flat ${len(c.rubber.width)}`);
+  const travel = c.travel.name || `${len(c.travel.travelPerRev)}/rev${c.travel.leverRatio === 1 ? '' : ` ×${c.travel.leverRatio}`}`;
+  return `${c.rosette.name} · ${rubber} · ${travel}`.slice(0, 100);
+}
