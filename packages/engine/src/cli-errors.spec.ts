@@ -1,6 +1,7 @@
 import { EXAMPLE_DESIGN } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { EXIT_OK, EXIT_USAGE, runCli, type CliIo } from './cli';
+import { GCODE_STANDARD, GCODE_SUMMARY } from './export/gcode-standard';
 import { fromMm } from './units';
 
 /** Runs the CLI in-process against an in-memory file system. */
@@ -126,5 +127,26 @@ describe('CLI commands in-process', () => {
       expect(viaFlag.stdout).toContain(`Usage: barwright ${name} FILE`);
       expect(viaHelp.stdout).toBe(viaFlag.stdout);
     }
+  });
+
+  it('answers help about help itself, however it is asked', async () => {
+    const asked = await Promise.all([run(['help', 'help']), run(['help', '--help']), run(['help', '-h']), run(['help', 'help', '--help'])]);
+    for (const result of asked) {
+      expect(result.code).toBe(EXIT_OK);
+      expect(result.stdout).toContain('Usage: barwright help [COMMAND]');
+      expect(result.stdout).toBe(asked[0].stdout);
+    }
+    expect((await run(['--help'])).stdout).toMatch(/^ {2}help {5}this help, or the help of one command$/m);
+    const unknown = await run(['help', 'toString']);
+    expect(unknown.code).toBe(EXIT_USAGE);
+    expect(unknown.stderr).toContain('no command "toString"');
+    expect((await run(['help', 'plan', 'study'])).code).toBe(EXIT_USAGE);
+  });
+
+  it('names the G-code format the way the web does, from one place', async () => {
+    const help = (await run(['help', 'export'])).stdout;
+    expect(help).toContain(`gcode: ${GCODE_SUMMARY}`);
+    expect(GCODE_SUMMARY).toContain(GCODE_STANDARD);
+    expect(help).not.toMatch(/RS274NGC/);
   });
 });

@@ -14,21 +14,32 @@ export const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;
 export const EXIT_USAGE = 2;
 
+/** What `help` tells of itself: it is a topic like the commands, though it reads no FILE. */
+const HELP_TOPIC: HelpTopic = {
+  summary: 'this help, or the help of one command',
+  usage: 'barwright help [COMMAND]',
+  details: [`Prints the list of commands, or with COMMAND (${[...Object.keys(COMMANDS), 'help'].join(', ')}) that command's usage and options.`, '`barwright COMMAND --help` prints the same.'].join('\n'),
+};
+
+type HelpTopic = Pick<Command, 'summary' | 'usage' | 'details'>;
+
+/** Every name `help` answers for, help itself included. */
+const TOPICS: Readonly<Record<string, HelpTopic>> = { ...COMMANDS, help: HELP_TOPIC };
+
 const GENERAL_HELP = [
   'barwright: predict, plan and export pattern bars for a rose engine\'s straight-line machine',
   '',
   'Usage: barwright <command> FILE [options]',
   '',
   'Commands:',
-  ...Object.entries(COMMANDS).map(([name, c]) => `  ${name.padEnd(8)} ${c.summary}`),
-  '  help     this help, or `barwright help COMMAND` for one command',
+  ...Object.entries(TOPICS).map(([name, c]) => `  ${name.padEnd(8)} ${c.summary}`),
   '',
   'FILE is a design file (format barwright.design/1); `-` reads it from standard input.',
   'Every length printed is in the file\'s units (mm or in; inch = 25.4 mm exactly).',
   'Exit codes: 0 done, 2 bad arguments or a bad design file (the message names the field), 1 an internal error.',
 ].join('\n');
 
-function commandHelp(name: string, command: Command): string {
+function commandHelp(name: string, command: HelpTopic): string {
   return [`Usage: ${command.usage}`, '', `${name}: ${command.summary}.`, command.details, '  --help     this help'].join('\n');
 }
 
@@ -57,9 +68,14 @@ async function dispatch(argv: readonly string[], io: CliIo): Promise<number> {
     return EXIT_OK;
   }
   if (name === 'help') {
-    const topic = rest[0] === undefined ? undefined : COMMANDS[rest[0]];
-    if (rest[0] !== undefined && !topic) throw new UsageError(`no command "${rest[0]}"; try barwright --help`);
-    io.stdout((topic ? commandHelp(rest[0], topic) : GENERAL_HELP) + '\n');
+    // `help --help` and `help -h` ask about help itself, like `help help`.
+    const asked = rest[0] === '--help' || rest[0] === '-h' ? 'help' : rest[0];
+    if (rest.length > 1 && !(rest.length === 2 && (rest[1] === '--help' || rest[1] === '-h'))) {
+      throw new UsageError(`help takes one COMMAND at most\nUsage: ${HELP_TOPIC.usage}`);
+    }
+    const topic = asked === undefined ? undefined : Object.hasOwn(TOPICS, asked) ? TOPICS[asked] : undefined;
+    if (asked !== undefined && !topic) throw new UsageError(`no command "${asked}"; try barwright --help`);
+    io.stdout((topic ? commandHelp(asked!, topic) : GENERAL_HELP) + '\n');
     return EXIT_OK;
   }
   const command = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;

@@ -1,6 +1,7 @@
 import { MM_PER_INCH, type Design } from '@barwright/contracts';
 import { planCut } from '../cut-plan';
 import { EXPORT_FORMATS, exportDesign, type ExportFormat } from '../export/index';
+import { GCODE_SUMMARY } from '../export/gcode-standard';
 import { computeLineStudy } from '../line-study';
 import { lineStudySvg } from '../line-study-svg';
 import { COMPANIONS, computeProfile, type Companion } from '../profile';
@@ -90,7 +91,7 @@ const exportCommand: Command = {
   summary: 'write the bar as svg, dxf, gcode, csv or pdf',
   usage: 'barwright export FILE --format svg|dxf|gcode|csv|pdf [--out OUT]',
   details: [
-    '  --format F   svg: bar outline at 1:1 in mm; dxf: R12 drawing; gcode: RS274NGC program of the passes;',
+    `  --format F   svg: bar outline at 1:1 in mm; dxf: R12 drawing; gcode: ${GCODE_SUMMARY};`,
     '               csv: the profile; pdf: a 1:1 printable template with the cut plan',
     '  --out OUT    file to write (default bar.svg, bar.dxf, bar.nc, bar.csv or bar.pdf)',
     'DXF, G-code and CSV are in the file\'s units.',
