@@ -26,7 +26,7 @@ export function webAppRouter(distDir: string): Router {
       return;
     }
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index);
+    res.sendFile(index, { dotfiles: 'allow' }); // the build may live under a dot folder (.tmp/web-…)
   });
   return router;
 }
