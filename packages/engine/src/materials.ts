@@ -28,6 +28,9 @@ export interface MaterialPreset {
 /** The cutter diameter the presets' chip loads are stated for, mm (3/16 in). */
 export const PRESET_CUTTER_DIAMETER_MM = 4.7625;
 
+/** The last heat-treatment note of every steel: the figures are typical, the supplier's sheet for the very bar rules. */
+export const HEAT_TREATMENT_DEFERRAL = 'Typical values: follow your steel supplier\'s data sheet.';
+
 export const MATERIAL_PRESETS: Readonly<Record<MaterialId, MaterialPreset>> = {
   acrylic: {
     id: 'acrylic',
@@ -73,18 +76,29 @@ export const MATERIAL_PRESETS: Readonly<Record<MaterialId, MaterialPreset>> = {
     maxStepOver: 0.0762,
     // 100 mm/min matches rpm × flutes × chip load for a 2-flute 3/16 in cutter at 61 m/min.
     defaults: { stepOver: 0.0762, travelSpeed: 100 },
-    // Annealed A2 is about 200–250 HB (steel suppliers' data sheets, from memory).
+    // Annealed A2 is about 200–250 HB (steel makers' data sheets give at most about 235–250 HB annealed;
+    // ASTM A681 sets each grade's maximum annealed hardness; from memory).
     hardness: 'about 200–250 HB annealed',
     cutting: 'A2: carbide end mill, cutting oil or mist, light passes; keep a real chip, never let the cutter rub.',
-    // From memory: follow the steel supplier's data sheet for the real figures.
+    // Provenance of the heat-treatment notes, line by line (the screen and the PDF name the handbook, not these details):
+    // - Air hardening, preheat about 790 °C (1450 °F), austenitize 925–980 °C (1700–1800 °F), soak 20–45 min
+    //   once through-heated, cool in still air to 50–65 °C (125–150 °F), temper at once: the A2 entry of the
+    //   ASM Heat Treater's Guide (ASM International; the same figures recur in ASM Handbook Vol. 4 and in
+    //   steel makers' A2 data sheets). The handbook itself was not at hand: the figures are from memory,
+    //   checked against public copies of that entry's procedure (preheat 788 °C / 1450 °F, austenitize
+    //   about 960 °C / 1760 °F, cool to 66–51 °C / 150–125 °F, temper 177 °C / 350 °F for about HRC 62).
+    // - Double temper about 2 h each, 175–205 °C (350–400 °F) for about HRC 60–62: the handbook's tempering
+    //   curve for A2 as above (HRC 62 at 177 °C, falling to about HRC 56 at 540 °C).
+    // - Foil wrap against decarburisation, and HRC 57–62 as a pattern bar's aim: common practice.
+    // The last line is the one the turner must act on: these are typical values, the supplier's sheet rules.
     heatTreatment: [
       'A2 is air-hardening: harden only after the bar is cut and the trial cut is approved.',
-      'Wrap the bar in stainless foil (or use a controlled atmosphere) against decarburisation and scale.',
-      'Preheat to about 790 °C (1450 °F), then austenitize at about 925–980 °C (1700–1800 °F); soak about 20–45 minutes once through-heated.',
-      'Cool in still air to hand-warm (about 50–65 °C).',
-      'Temper at once, twice, about 2 hours each; about 175–205 °C (350–400 °F) gives roughly HRC 60–62, hotter gives less.',
-      'Target about HRC 57–62 for a pattern bar.',
-      'These figures are from memory: follow the steel supplier\'s data sheet.',
+      'Wrap the bar in stainless foil (or use a controlled atmosphere) against decarburisation and scale (common practice).',
+      'Preheat to about 790 °C (1450 °F), then austenitize at 925–980 °C (1700–1800 °F); soak about 20–45 minutes once through-heated (ASM Heat Treater\'s Guide, A2).',
+      'Cool in still air to hand-warm, about 50–65 °C (125–150 °F) (same source).',
+      'Temper at once, twice, about 2 hours each: 175–205 °C (350–400 °F) gives about HRC 60–62, hotter gives less (same source\'s tempering curve).',
+      'Aim for about HRC 57–62 for a pattern bar (common practice).',
+      HEAT_TREATMENT_DEFERRAL,
     ],
   },
   custom: {
