@@ -1,0 +1,114 @@
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
+import { describe, expect, it } from 'vitest';
+import { computeLineStudy } from '../line-study';
+import type { Point } from '../types';
+import { computeHeightField, MIXED_PIXEL } from './height-field';
+import { BLINN_PHONG, METAL_COLOURS, shadeHeightField, srgbByte } from './surface-shading';
+
+const straight = (y: number, x0 = -5, x1 = 25): { points: Point[] } => ({ points: [[x0, y], [x1, y]] });
+
+describe('the height field of engraved V-grooves', () => {
+  it('has the V-groove depth d − |y − Y| / tan(α/2) across a straight line, and 0 beyond the groove', () => {
+    // depth 0.1 mm, 90° cutter: walls at 45°, the groove 0.2 mm wide at the surface (2·d·tan(α/2)).
+    const field = computeHeightField({ lines: [straight(1)], depth: 0.1, vAngle: 90, window: { x0: 0, x1: 2, y0: 0, y1: 2 }, width: 20, height: 200, supersample: 1 });
+    const cols = field.width;
+    for (let row = 0; row < field.height; row++) {
+      const y = 2 - (row + 0.5) * 0.01;
+      const expected = Math.max(0, 0.1 - Math.abs(y - 1));
+      expect(field.depth[row * cols + 7]).toBeCloseTo(expected, 6);
+    }
+  });
+
+  it('at a crossing keeps the deeper groove: the depth is the largest of the two grooves', () => {
+    // A falling line crossing a straight one: each groove alone, then both.
+    const falling: { points: Point[] } = { points: [[0, 2], [2, 0]] };
+    const window = { x0: 0, x1: 2, y0: 0, y1: 2 };
+    const size = { depth: 0.15, vAngle: 100, window, width: 64, height: 64, supersample: 2 };
+    const a = computeHeightField({ ...size, lines: [straight(1)] });
+    const b = computeHeightField({ ...size, lines: [falling] });
+    const both = computeHeightField({ ...size, lines: [straight(1), falling] });
+    let crossing = 0;
+    for (let i = 0; i < both.depth.length; i++) {
+      expect(both.depth[i]).toBeCloseTo(Math.max(a.depth[i], b.depth[i]), 6);
+      if (a.depth[i] > 0 && b.depth[i] > 0) crossing++;
+    }
+    expect(crossing).toBeGreaterThan(20);
+  });
+
+  it('rounds the outside of a sharp turn as the cone the cutter sweeps there (distance to the vertex)', () => {
+    const peak: { points: Point[] } = { points: [[0, 0], [1, 1], [2, 0]] };
+    const field = computeHeightField({ lines: [peak], depth: 0.2, vAngle: 90, window: { x0: 0.5, x1: 1.5, y0: 0.5, y1: 1.5 }, width: 100, height: 100, supersample: 1 });
+    // Straight above the vertex (1, 1) the nearest line point is the vertex itself.
+    const col = 50; // x = 1.005
+    for (const y of [1.05, 1.1, 1.15]) {
+      const row = Math.floor((1.5 - y) / 0.01);
+      const yc = 1.5 - (row + 0.5) * 0.01;
+      expect(field.depth[row * 100 + col]).toBeCloseTo(Math.max(0, 0.2 - Math.hypot(0.005, yc - 1)), 5);
+    }
+  });
+
+  it('shows a groove narrower than a pixel, by its samples', () => {
+    // Pixels 0.1 mm tall; the groove is 0.04 mm wide at the surface (depth 0.02 mm, 90°).
+    const field = computeHeightField({ lines: [straight(0.53)], depth: 0.02, vAngle: 90, window: { x0: 0, x1: 1, y0: 0, y1: 1 }, width: 10, height: 10, supersample: 4 });
+    const rgba = shadeHeightField(field, { azimuthDeg: 90, elevationDeg: 30 }, 'silver');
+    const plate = shadeHeightField(computeHeightField({ lines: [], depth: 0.02, vAngle: 90, window: { x0: 0, x1: 1, y0: 0, y1: 1 }, width: 10, height: 10 }), { azimuthDeg: 90, elevationDeg: 30 }, 'silver');
+    const row = 4; // y 0.5 … 0.6
+    expect(field.pixelFacet[row * 10 + 3]).toBe(MIXED_PIXEL);
+    expect(rgba[4 * (row * 10 + 3)]).not.toBe(plate[4 * (row * 10 + 3)]);
+    expect(rgba[4 * (2 * 10 + 3)]).toBe(plate[4 * (2 * 10 + 3)]);
+  });
+});
+
+describe('Blinn–Phong shading of the field', () => {
+  /**
+   * A straight line (a rosette of amplitude 0) leaves two plane walls rising at k = 1/tan(α/2):
+   * above the line the normal is (0, −k, 1)/√(1 + k²), below it (0, k, 1)/√(1 + k²). In closed form,
+   * with the light l = (cos e·cos a, cos e·sin a, sin e) and h = (l + (0,0,1)) / |l + (0,0,1)|:
+   * I = ka + kd·max(0, n·l) + ks·max(0, n·h)^p (J. F. Blinn, SIGGRAPH 1977), times the metal's colour.
+   */
+  it('gives exactly the two wall intensities of the model on a straight-line study', () => {
+    const design: Design = { ...EXAMPLE_DESIGN, rosette: { ...EXAMPLE_DESIGN.rosette, layers: [{ ...EXAMPLE_DESIGN.rosette.layers[0], amplitude: 0 }] } };
+    const study = computeLineStudy(design);
+    const spacing = study.spacing;
+    const window = { x0: 60, x1: 61, y0: 2 * spacing - spacing / 2, y1: 2 * spacing + spacing / 2 };
+    const { depth, vAngle } = design.study; // 0.1 mm, 120°
+    const field = computeHeightField({ lines: study.lines, depth, vAngle, window, width: 4, height: 90 });
+    const light = { azimuthDeg: 70, elevationDeg: 35 };
+    const rgba = shadeHeightField(field, light, 'gold');
+
+    const k = 1 / Math.tan((vAngle * Math.PI) / 360);
+    const e = (35 * Math.PI) / 180;
+    const a = (70 * Math.PI) / 180;
+    const l = [Math.cos(e) * Math.cos(a), Math.cos(e) * Math.sin(a), Math.sin(e)];
+    const hl = Math.hypot(l[0], l[1], l[2] + 1);
+    const intensity = (ny: number) => {
+      const n = [0, ny / Math.sqrt(1 + k * k), 1 / Math.sqrt(1 + k * k)];
+      const nl = n[1] * l[1] + n[2] * l[2];
+      const nh = Math.max(0, (n[1] * l[1] + n[2] * (l[2] + 1)) / hl);
+      return BLINN_PHONG.ambient + BLINN_PHONG.diffuse * Math.max(0, nl) + (nl > 0 ? BLINN_PHONG.specular * nh ** BLINN_PHONG.exponent : 0);
+    };
+    const colour = (i: number) => METAL_COLOURS.gold.map((c) => srgbByte(c * i));
+    const upper = colour(intensity(-k));
+    const lower = colour(intensity(k));
+    const pixel = (row: number) => [...rgba.subarray(4 * (row * 4 + 1), 4 * (row * 4 + 1) + 3)];
+    // The line is at the middle row; the groove is 2·0.1·tan 60° = 0.346 mm wide, 0.45 mm rows span 90 pixels.
+    const mmPerRow = spacing / 90;
+    const rowAt = (y: number) => Math.floor((window.y1 - y) / mmPerRow);
+    const line = 2 * spacing;
+    expect(pixel(rowAt(line + 0.1))).toEqual(upper);
+    expect(pixel(rowAt(line + 0.05))).toEqual(upper);
+    expect(pixel(rowAt(line - 0.05))).toEqual(lower);
+    expect(pixel(rowAt(line - 0.1))).toEqual(lower);
+    expect(upper).not.toEqual(lower);
+  });
+
+  it('reshades without recomputing: the field is unchanged and another light gives other colours', () => {
+    const field = computeHeightField({ lines: [straight(1)], depth: 0.1, vAngle: 90, window: { x0: 0, x1: 2, y0: 0, y1: 2 }, width: 40, height: 40 });
+    const before = Float32Array.from(field.depth);
+    const one = shadeHeightField(field, { azimuthDeg: 90, elevationDeg: 40 }, 'silver');
+    const two = shadeHeightField(field, { azimuthDeg: 270, elevationDeg: 40 }, 'silver');
+    expect(field.depth).toEqual(before);
+    expect(one).not.toEqual(two);
+    expect(one.length).toBe(40 * 40 * 4);
+  });
+});

@@ -1,0 +1,254 @@
+/**
+ * The engraved surface: the plate after every V-groove of a line study is cut, as a height field.
+ *
+ * Usage (the expensive part once per design, window and size; reshading whenever the light moves):
+ *
+ *   const study = computeLineStudy(design);
+ *   const mm = toMm(design).study;
+ *   const field = computeHeightField({ lines: study.lines, depth: mm.depth, vAngle: mm.vAngle,
+ *     window: { x0: 55, x1: 95, y0: -1, y1: 19 }, width: 1280, height: 640 });
+ *   const rgba = shadeHeightField(field, { azimuthDeg: 135, elevationDeg: 40 }, 'silver');
+ *   // rgba: width × height × 4 bytes, row 0 at the top (ImageData, or sharp's raw input)
+ *
+ * A V-cutter of included angle α, its tip at depth d, swept along a line leaves the depth
+ * d − dist(p, line) / tan(α/2) at a point p of the plate (the sweep of a cone), down to 0 at
+ * dist = R = d·tan(α/2). Every groove of a study has the same d and α, so the deepest groove at p is
+ * the nearest line: the field is a distance transform of the lines clipped at R. The distance to a
+ * polyline is the smaller of the distance across a segment (inside the strip its ends bound) and the
+ * distance to a vertex (inside the vertex's outer sector, between the two segments' normals); both are
+ * rasterised, the smaller kept per sample, so crossings and sharp turns come out exactly.
+ *
+ * The walls all slope at 1/tan(α/2); only the direction they face varies. Each sample keeps that
+ * direction (the way from its nearest line point, in FACET_BINS steps of a turn) as a facet number,
+ * so a light change shades FACET_BINS + 1 normals and then only looks them up.
+ */
+import type { Point } from '../types';
+
+/** A window of the plate (mm, y up, as the line study's coordinates). */
+export interface SurfaceWindow {
+  x0: number;
+  x1: number;
+  y0: number;
+  y1: number;
+}
+
+export interface HeightFieldInput {
+  /** The engraved lines (mm), each with x increasing: a line study's `lines`. */
+  lines: readonly { readonly points: readonly Point[] }[];
+  /** Depth of the V-cutter's tip below the plate (mm) and its included angle (degrees). */
+  depth: number;
+  vAngle: number;
+  window: SurfaceWindow;
+  /** Pixels of the picture. */
+  width: number;
+  height: number;
+  /** Samples per pixel along each axis (anti-aliasing): 3 by default, 1 to 8. */
+  supersample?: number;
+}
+
+export interface HeightField {
+  width: number;
+  height: number;
+  supersample: number;
+  window: SurfaceWindow;
+  /** Slope of every groove wall, 1 / tan(α/2). */
+  wallSlope: number;
+  /** Depth below the plate (mm, ≥ 0) of each sample: (width·s) × (height·s), row 0 at the top (y1). */
+  depth: Float32Array;
+  /** Per sample: 0 for the uncut plate, else 1 + the direction the wall rises towards, in FACET_BINS steps of a turn from +x. */
+  facet: Uint16Array;
+  /** Per pixel: the facet all its samples share, or MIXED_PIXEL. */
+  pixelFacet: Uint16Array;
+}
+
+/** Directions a wall can face, per turn (0.088° apart: far below what the eye tells on a wall). */
+export const FACET_BINS = 4096;
+/** `pixelFacet` of a pixel whose samples differ (an edge or a ridge runs through it). */
+export const MIXED_PIXEL = 0xffff;
+
+/** The height field of a study's grooves over a window (see the module's comment). */
+export function computeHeightField(input: HeightFieldInput): HeightField {
+  const s = Math.max(1, Math.min(8, Math.round(input.supersample ?? 3)));
+  const { width, height, window } = input;
+  const cols = width * s;
+  const rows = height * s;
+  const slope = 1 / Math.tan((input.vAngle * Math.PI) / 360);
+  const reach = Math.max(0, input.depth) / slope; // R: half the groove's width at the surface
+  const dist2 = new Float32Array(cols * rows).fill(reach * reach);
+  const facet = new Uint16Array(cols * rows);
+  const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
+  if (reach > 0) for (const line of input.lines) cutLine(line.points, grid, window);
+  // Distances to depths, in place: d − dist·slope inside the groove, 0 on the plate.
+  const depth = dist2;
+  for (let i = 0; i < depth.length; i++) depth[i] = facet[i] === 0 ? 0 : Math.max(0, input.depth - Math.sqrt(dist2[i]) * slope);
+  return { width, height, supersample: s, window, wallSlope: slope, depth, facet, pixelFacet: pixelFacets(facet, width, height, s) };
+}
+
+interface Raster {
+  cols: number;
+  rows: number;
+  x0: number;
+  y1: number;
+  dx: number;
+  dy: number;
+  reach: number;
+  dist2: Float32Array;
+  facet: Uint16Array;
+}
+
+function cutLine(points: readonly Point[], g: Raster, w: SurfaceWindow): void {
+  const n = points.length;
+  const r = g.reach;
+  // Points run with x increasing: skip to the first segment that can reach the window.
+  let lo = 0;
+  let hi = n - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (points[mid][0] < w.x0 - r) lo = mid + 1;
+    else hi = mid;
+  }
+  const first = Math.max(0, lo - 1);
+  for (let i = first; i < n; i++) {
+    const [ax, ay] = points[i];
+    if (ax - r > w.x1) break;
+    const prev = i > 0 ? points[i - 1] : undefined;
+    const next = i + 1 < n ? points[i + 1] : undefined;
+    if (next) {
+      const [bx, by] = next;
+      const inY = Math.max(ay, by) + r >= w.y0 && Math.min(ay, by) - r <= w.y1;
+      if (inY) cutStrip(ax, ay, bx, by, g);
+    }
+    if (ay + r >= w.y0 && ay - r <= w.y1) cutVertex(ax, ay, prev, next, g);
+  }
+}
+
+/** The samples whose nearest point lies inside segment A→B: distance across it, facet by side. */
+function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster): void {
+  const len = Math.hypot(bx - ax, by - ay);
+  if (!(len > 0)) return;
+  const ux = (bx - ax) / len;
+  const uy = (by - ay) / len;
+  const nx = -uy; // the normal to the left of A→B
+  const ny = ux;
+  const left = facetOf(nx, ny);
+  const right = facetOf(-nx, -ny);
+  const r = g.reach;
+  const r2 = r * r;
+  const spread = r * Math.abs(nx);
+  const c0 = Math.max(0, Math.ceil((Math.min(ax, bx) - spread - g.x0) / g.dx - 0.5));
+  const c1 = Math.min(g.cols - 1, Math.floor((Math.max(ax, bx) + spread - g.x0) / g.dx - 0.5));
+  for (let c = c0; c <= c1; c++) {
+    const x = g.x0 + (c + 0.5) * g.dx;
+    const ex = x - ax;
+    // Across: −R ≤ ex·nx + (y − ay)·ny ≤ R; along: 0 ≤ ex·ux + (y − ay)·uy ≤ len.
+    let [ylo, yhi] = yRange(ny, ex * nx, -r, r);
+    const [tlo, thi] = yRange(uy, ex * ux, 0, len);
+    ylo = Math.max(ylo, tlo) + ay;
+    yhi = Math.min(yhi, thi) + ay;
+    if (!(ylo <= yhi)) continue;
+    const r0 = Math.max(0, Math.ceil((g.y1 - yhi) / g.dy - 0.5));
+    const r1 = Math.min(g.rows - 1, Math.floor((g.y1 - ylo) / g.dy - 0.5));
+    for (let row = r0; row <= r1; row++) {
+      const across = ex * nx + (g.y1 - (row + 0.5) * g.dy - ay) * ny;
+      const d2 = across * across;
+      const p = row * g.cols + c;
+      if (d2 < g.dist2[p] && d2 < r2) {
+        g.dist2[p] = d2;
+        g.facet[p] = across >= 0 ? left : right;
+      }
+    }
+  }
+}
+
+/** The y (relative) with lo ≤ a·y + b ≤ hi: an interval, everything, or nothing (NaN). */
+function yRange(a: number, b: number, lo: number, hi: number): [number, number] {
+  if (Math.abs(a) < 1e-12) return b >= lo && b <= hi ? [-Infinity, Infinity] : [NaN, NaN];
+  const p = (lo - b) / a;
+  const q = (hi - b) / a;
+  return p < q ? [p, q] : [q, p];
+}
+
+/**
+ * The samples whose nearest point is the vertex V: those in its outer sector (between the normals of
+ * the segments meeting there), or all round an end of the line. Only the sector's bounding box is
+ * visited; a distance to V elsewhere is never below the true one, so it cannot win wrongly.
+ */
+function cutVertex(vx: number, vy: number, prev: Point | undefined, next: Point | undefined, g: Raster): void {
+  const r = g.reach;
+  let [bx0, bx1, by0, by1] = [vx - r, vx + r, vy - r, vy + r];
+  if (prev && next) {
+    const box = sectorBox(vx - prev[0], vy - prev[1], next[0] - vx, next[1] - vy, r);
+    if (!box) return;
+    [bx0, bx1, by0, by1] = [vx + box[0], vx + box[1], vy + box[2], vy + box[3]];
+  }
+  const c0 = Math.max(0, Math.ceil((bx0 - g.x0) / g.dx - 0.5));
+  const c1 = Math.min(g.cols - 1, Math.floor((bx1 - g.x0) / g.dx - 0.5));
+  const r0 = Math.max(0, Math.ceil((g.y1 - by1) / g.dy - 0.5));
+  const r1 = Math.min(g.rows - 1, Math.floor((g.y1 - by0) / g.dy - 0.5));
+  const r2 = r * r;
+  for (let row = r0; row <= r1; row++) {
+    const ey = g.y1 - (row + 0.5) * g.dy - vy;
+    for (let c = c0; c <= c1; c++) {
+      const ex = g.x0 + (c + 0.5) * g.dx - vx;
+      const d2 = ex * ex + ey * ey;
+      const p = row * g.cols + c;
+      if (d2 < g.dist2[p] && d2 < r2) {
+        g.dist2[p] = d2;
+        g.facet[p] = d2 > 0 ? facetOf(ex, ey) : g.facet[p];
+      }
+    }
+  }
+}
+
+/**
+ * Bounding box (relative to V) of the outer sector at a vertex where direction (ix, iy) turns into
+ * (ox, oy), radius r: the arc between the two segments' normals on the outer side of the turn.
+ * Undefined when the line goes straight on (both strips meet there).
+ */
+function sectorBox(ix: number, iy: number, ox: number, oy: number, r: number): [number, number, number, number] | undefined {
+  const li = Math.hypot(ix, iy);
+  const lo = Math.hypot(ox, oy);
+  if (!(li > 0) || !(lo > 0)) return [-r, r, -r, r];
+  const cross = ix * oy - iy * ox;
+  const dot = ix * ox + iy * oy;
+  if (cross === 0) return dot > 0 ? undefined : [-r, r, -r, r];
+  // Turning left (cross > 0) the outer side is the right: normals (iy, −ix) and (oy, −ox).
+  const side = cross > 0 ? -1 : 1;
+  let a = Math.atan2((side * ix) / li, (-side * iy) / li);
+  let b = Math.atan2((side * ox) / lo, (-side * oy) / lo);
+  if (side > 0) [a, b] = [b, a]; // turning right the normals turn clockwise: the arc runs counter-clockwise from b to a
+  const sweep = (((b - a) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+  const xs = [0, Math.cos(a), Math.cos(b)];
+  const ys = [0, Math.sin(a), Math.sin(b)];
+  for (let k = 0; k < 4; k++) {
+    const axis = (k * Math.PI) / 2;
+    const from = (((axis - a) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+    if (from <= sweep) {
+      xs.push(Math.cos(axis));
+      ys.push(Math.sin(axis));
+    }
+  }
+  return [r * Math.min(...xs), r * Math.max(...xs), r * Math.min(...ys), r * Math.max(...ys)];
+}
+
+/** 1 + the direction (x, y) in FACET_BINS steps of a turn, rounded to the nearest. */
+function facetOf(x: number, y: number): number {
+  const turn = Math.atan2(y, x) / (2 * Math.PI);
+  const bin = Math.round(turn * FACET_BINS);
+  return 1 + (((bin % FACET_BINS) + FACET_BINS) % FACET_BINS);
+}
+
+function pixelFacets(facet: Uint16Array, width: number, height: number, s: number): Uint16Array {
+  const out = new Uint16Array(width * height);
+  const cols = width * s;
+  for (let py = 0; py < height; py++) {
+    for (let px = 0; px < width; px++) {
+      const base = py * s * cols + px * s;
+      const f = facet[base];
+      let same = true;
+      for (let j = 0; j < s && same; j++) for (let i = 0; i < s; i++) if (facet[base + j * cols + i] !== f) { same = false; break; }
+      out[py * width + px] = same ? f : MIXED_PIXEL;
+    }
+  }
+  return out;
+}

@@ -1,0 +1,124 @@
+/**
+ * Shading of the engraved surface (see height-field.ts) as polished metal, by the Blinn–Phong model:
+ * J. F. Blinn, "Models of light reflection for computer synthesized pictures", SIGGRAPH 1977
+ * (Computer Graphics 11(2), 192–198). For a unit normal n, a unit vector l towards a distant light,
+ * the viewer overhead v = (0, 0, 1) and the half-way vector h = (l + v) / |l + v|:
+ *
+ *   I = tint · (ka + kd · max(0, n·l) + ks · max(0, n·h)^p)      (the specular term only where n·l > 0)
+ *
+ * A metal reflects in its own colour, so the tint colours the specular lobe as well as the diffuse
+ * part. Intensities are linear; the bytes are sRGB-encoded (IEC 61966-2-1).
+ */
+import { FACET_BINS, MIXED_PIXEL, type HeightField } from './height-field';
+
+/** A distant light: from `azimuthDeg` (0° from +x, the right of the drawing; 90° from +y, its top) at `elevationDeg` above the plate. */
+export interface SurfaceLight {
+  azimuthDeg: number;
+  elevationDeg: number;
+}
+
+export type MetalTint = 'silver' | 'gold' | 'brass';
+export const METAL_TINTS: readonly MetalTint[] = ['silver', 'gold', 'brass'];
+
+/** Linear reflectance of each metal at normal incidence, RGB (the usual rendering values; from memory). */
+export const METAL_COLOURS: Record<MetalTint, readonly [number, number, number]> = {
+  silver: [0.95, 0.93, 0.88],
+  gold: [1.0, 0.71, 0.29],
+  brass: [0.91, 0.78, 0.42],
+};
+
+/** The model's constants: ambient, diffuse, specular weights and the specular exponent. */
+export const BLINN_PHONG = { ambient: 0.05, diffuse: 0.28, specular: 0.85, exponent: 20 } as const;
+
+/** Unit vector towards the light. */
+export function lightVector(light: SurfaceLight): [number, number, number] {
+  const az = (light.azimuthDeg * Math.PI) / 180;
+  const el = (light.elevationDeg * Math.PI) / 180;
+  return [Math.cos(el) * Math.cos(az), Math.cos(el) * Math.sin(az), Math.sin(el)];
+}
+
+/** Blinn–Phong intensity (linear, before the tint) of a surface with unit normal n under `light`, viewer overhead. */
+export function blinnPhong(nx: number, ny: number, nz: number, light: SurfaceLight): number {
+  const [lx, ly, lz] = lightVector(light);
+  const hLen = Math.sqrt(lx * lx + ly * ly + (lz + 1) * (lz + 1));
+  const nl = nx * lx + ny * ly + nz * lz;
+  const nh = Math.max(0, (nx * lx + ny * ly + nz * (lz + 1)) / hLen);
+  const { ambient, diffuse, specular, exponent } = BLINN_PHONG;
+  return ambient + diffuse * Math.max(0, nl) + (nl > 0 ? specular * nh ** exponent : 0);
+}
+
+/**
+ * The field as RGBA bytes (width × height × 4, row 0 at the top). Cheap: the FACET_BINS + 1 normals
+ * are shaded once, then each pixel looks its facet up; pixels an edge or ridge runs through average
+ * their samples' linear colours before encoding.
+ */
+export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: MetalTint): Uint8ClampedArray {
+  const linear = facetColours(field.wallSlope, light, METAL_COLOURS[tint]);
+  const bytes = new Uint8ClampedArray(linear.length);
+  for (let i = 0; i < linear.length; i++) bytes[i] = srgbByte(linear[i]);
+  const { width, height, supersample: s, facet, pixelFacet } = field;
+  const out = new Uint8ClampedArray(width * height * 4);
+  const cols = width * s;
+  const share = 1 / (s * s);
+  for (let py = 0; py < height; py++) {
+    for (let px = 0; px < width; px++) {
+      const p = py * width + px;
+      const f = pixelFacet[p];
+      const o = 4 * p;
+      out[o + 3] = 255;
+      if (f !== MIXED_PIXEL) {
+        out[o] = bytes[3 * f];
+        out[o + 1] = bytes[3 * f + 1];
+        out[o + 2] = bytes[3 * f + 2];
+        continue;
+      }
+      let r = 0;
+      let g = 0;
+      let b = 0;
+      const base = py * s * cols + px * s;
+      for (let j = 0; j < s; j++) {
+        for (let i = 0; i < s; i++) {
+          const k = 3 * facet[base + j * cols + i];
+          r += linear[k];
+          g += linear[k + 1];
+          b += linear[k + 2];
+        }
+      }
+      out[o] = SRGB_TABLE[Math.min(ENCODE_STEPS, Math.round(r * share * ENCODE_STEPS))];
+      out[o + 1] = SRGB_TABLE[Math.min(ENCODE_STEPS, Math.round(g * share * ENCODE_STEPS))];
+      out[o + 2] = SRGB_TABLE[Math.min(ENCODE_STEPS, Math.round(b * share * ENCODE_STEPS))];
+    }
+  }
+  return out;
+}
+
+/**
+ * Linear RGB of facet 0 (the uncut plate, normal straight up) and of each wall direction: a wall rising
+ * towards direction φ with slope k has the gradient k·(cos φ, sin φ) and the normal (−∇z, 1)/√(1 + k²).
+ */
+function facetColours(slope: number, light: SurfaceLight, tint: readonly [number, number, number]): Float32Array {
+  const out = new Float32Array(3 * (FACET_BINS + 1));
+  const put = (f: number, v: number) => {
+    out[3 * f] = v * tint[0];
+    out[3 * f + 1] = v * tint[1];
+    out[3 * f + 2] = v * tint[2];
+  };
+  put(0, blinnPhong(0, 0, 1, light));
+  const norm = 1 / Math.sqrt(1 + slope * slope);
+  for (let b = 0; b < FACET_BINS; b++) {
+    const phi = (2 * Math.PI * b) / FACET_BINS;
+    put(b + 1, blinnPhong(-slope * Math.cos(phi) * norm, -slope * Math.sin(phi) * norm, norm, light));
+  }
+  return out;
+}
+
+/** Linear steps of the encoding table for averaged (edge) pixels: within a byte of srgbByte. */
+const ENCODE_STEPS = 8191;
+const SRGB_TABLE = Uint8ClampedArray.from({ length: ENCODE_STEPS + 1 }, (_, i) => srgbByte(i / ENCODE_STEPS));
+
+/** sRGB encoding of a linear value (IEC 61966-2-1), clipped to 0…1, as a byte. */
+export function srgbByte(linear: number): number {
+  const c = linear <= 0 ? 0 : linear >= 1 ? 1 : linear;
+  const v = c <= 0.0031308 ? 12.92 * c : 1.055 * c ** (1 / 2.4) - 0.055;
+  return Math.round(255 * v);
+}
