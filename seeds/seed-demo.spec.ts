@@ -6,7 +6,8 @@ import { openTestDatabase, type TestDatabase } from '../apps/server/src/testing/
 import { Client, startTestServer, type TestServer } from '../apps/server/src/testing/test-app';
 import { seedDemoScenario } from './seed-demo';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-scenario';
-import { DEMO_BARS, DEMO_SHOWCASE } from './demo-bars';
+import { computeProfile, planCut } from '@barwright/engine';
+import { DEMO_BARS, DEMO_REMIX, DEMO_SHOWCASE } from './demo-bars';
 
 describe('the demo scenario', () => {
   let database: TestDatabase;
@@ -37,5 +38,14 @@ describe('the demo scenario', () => {
       expect(a.email).toMatch(/@example\.test$/);
       await new Client(server.app).signIn(a.email, DEMO_PASSWORD);
     }
+  });
+
+  it('cuts clean demo bars, all but the scalloped one, which shows its warning on purpose', () => {
+    const reference = DEMO_BARS.find((b) => b.title === DEMO_REMIX.of)!.design;
+    const bars = [...DEMO_BARS.map((b) => ({ title: b.title, design: b.design })), { title: DEMO_REMIX.title, design: DEMO_REMIX.change(reference) }];
+    const warned = bars
+      .map(({ title, design }) => ({ title, codes: [...computeProfile(design).warnings, ...planCut(design).warnings].map((w) => w.code) }))
+      .filter((b) => b.codes.length > 0);
+    expect(warned).toEqual([{ title: 'Scalloped forty-eight', codes: ['valley-bridged'] }]);
   });
 });
