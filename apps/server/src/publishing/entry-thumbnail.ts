@@ -1,61 +1,59 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, lineStudySvg, type LineStudy } from '@barwright/engine';
+import { computeHeightField, computeLineStudy, computeProfile, shadeHeightField, toMm, type LineStudy, type SurfaceLight, type SurfaceWindow } from '@barwright/engine';
+import sharp from 'sharp';
 
-/** Width the thumbnail is drawn for, in pixels; its viewBox stays in millimetres. */
+/** Size the thumbnail is drawn at, in pixels: a card's proportions (4:3). */
 export const THUMBNAIL_WIDTH_PX = 480;
-/** Width to height of the window shown: a card's proportions. */
-const ASPECT = 4 / 3;
+export const THUMBNAIL_HEIGHT_PX = 360;
 /** The window shows at least this many periods of the bar, so the wave reads as a pattern. */
 const MIN_PERIODS = 4;
+/** The light the studio opens with: from the upper left, 40° above the plate. */
+export const THUMBNAIL_LIGHT: SurfaceLight = { azimuthDeg: 135, elevationDeg: 40 };
+/** Samples per pixel along each axis: a thumbnail is drawn once, so it can afford more than a live view. */
+const SUPERSAMPLE = 3;
 
 /**
- * The line study of a design, cropped to a card-shaped window at the start of the bar (the study
- * repeats along the bar, so a few periods show the pattern; the whole study of a 150 mm bar is
- * some 0.5 MB of SVG, the window a tenth of that).
+ * The card thumbnail of a design: the engraved surface of its line study (the engine's height field,
+ * Blinn–Phong shaded as the web draws it) over a card-shaped window near the start of the bar, as a
+ * palette PNG (sharp) inside an SVG whose viewBox is the window in millimetres. The study repeats along the
+ * bar, so a few periods show the pattern.
  */
-export function entryThumbnailSvg(design: Design): string {
+export async function entryThumbnailSvg(design: Design): Promise<string> {
   const profile = computeProfile(design);
   const study = computeLineStudy(design, profile);
-  return lineStudySvg(cropStudy(study, profile.period), { widthPx: THUMBNAIL_WIDTH_PX });
+  const { depth, vAngle } = toMm(design).study;
+  const window = thumbnailWindow(study, profile.period, depth * Math.tan((vAngle * Math.PI) / 360));
+  const field = computeHeightField({ lines: study.lines, depth, vAngle, window, width: THUMBNAIL_WIDTH_PX, height: THUMBNAIL_HEIGHT_PX, supersample: SUPERSAMPLE });
+  const rgba = shadeHeightField(field, THUMBNAIL_LIGHT, 'silver');
+  const png = await sharp(Buffer.from(rgba.buffer, rgba.byteOffset, rgba.byteLength), { raw: { width: THUMBNAIL_WIDTH_PX, height: THUMBNAIL_HEIGHT_PX, channels: 4 } })
+    .removeAlpha()
+    .png({ palette: true, quality: 90, compressionLevel: 9 }) // 256 colours: a third of the full PNG's size, no visible banding on metal greys
+    .toBuffer();
+  const w = window.x1 - window.x0;
+  const h = window.y1 - window.y0;
+  const mm = (v: number) => +v.toFixed(4);
+  return (
+    `<?xml version="1.0" encoding="UTF-8"?>\n` +
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${THUMBNAIL_WIDTH_PX}" height="${THUMBNAIL_HEIGHT_PX}" viewBox="0 0 ${mm(w)} ${mm(h)}">` +
+    `<title>Line study, engraved (${mm(w)} × ${mm(h)} mm)</title>` +
+    `<image width="${mm(w)}" height="${mm(h)}" preserveAspectRatio="none" href="data:image/png;base64,${png.toString('base64')}"/>` +
+    `</svg>\n`
+  );
 }
 
-function cropStudy(study: LineStudy, period: number): LineStudy {
+/**
+ * A 4:3 window (mm) over the study: at least MIN_PERIODS periods, or the lines' height, wide; starting
+ * a period into the bar (past the grooves' run-in) when the bar is long enough, with the lowest line
+ * at the bottom. `reach` is the groove's half width at the surface.
+ */
+function thumbnailWindow(study: LineStudy, period: number, reach: number): SurfaceWindow {
   let low = Infinity;
   let high = -Infinity;
   for (const line of study.lines) for (const [, y] of line.points) [low, high] = [Math.min(low, y), Math.max(high, y)];
-  const height = Number.isFinite(low) ? high - low : 0;
-  const length = Math.min(study.length, Math.max(height * ASPECT, MIN_PERIODS * period));
-  const maxHeight = length / ASPECT;
-  const lines = study.lines.filter((line) => line.index * study.spacing <= maxHeight || line.index === 0);
-  // Coordinates to a power of ten below half a pixel: shorter numbers, no visible change.
-  const quantum = 10 ** Math.floor(Math.log10(length / THUMBNAIL_WIDTH_PX / 2));
-  return { ...study, length, lines: lines.map((line) => ({ ...line, points: quantise(clipLine(line.points, length), quantum) })) };
-}
-
-/** Points rounded to multiples of `quantum` (mm), consecutive repeats dropped. */
-function quantise(points: [number, number][], quantum: number): [number, number][] {
-  const out: [number, number][] = [];
-  for (const [x, y] of points) {
-    const p: [number, number] = [Math.round(x / quantum) * quantum, Math.round(y / quantum) * quantum];
-    const last = out.at(-1);
-    if (!last || last[0] !== p[0] || last[1] !== p[1]) out.push(p);
-  }
-  return out;
-}
-
-/** The part of a polyline with x ≤ length, ending exactly at length (interpolated). */
-function clipLine(points: [number, number][], length: number): [number, number][] {
-  const out: [number, number][] = [];
-  for (let i = 0; i < points.length; i++) {
-    const [x, y] = points[i];
-    if (x <= length) {
-      out.push([x, y]);
-      continue;
-    }
-    const [x0, y0] = points[i - 1] ?? points[i];
-    const w = x === x0 ? 0 : (length - x0) / (x - x0);
-    out.push([length, y0 + w * (y - y0)]);
-    break;
-  }
-  return out;
+  if (!Number.isFinite(low)) [low, high] = [0, 0];
+  const aspect = THUMBNAIL_WIDTH_PX / THUMBNAIL_HEIGHT_PX;
+  const width = Math.min(study.length, Math.max((high - low + 2 * reach) * aspect, MIN_PERIODS * period));
+  const x0 = Math.max(0, Math.min(period, study.length - width));
+  const y0 = low - 2 * reach;
+  return { x0, x1: x0 + width, y0, y1: y0 + width / aspect };
 }

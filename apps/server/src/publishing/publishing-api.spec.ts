@@ -60,7 +60,7 @@ describe.each(drivers)('publishing API on %s', (driver) => {
     expect(svg.status).toBe(200);
     expect(svg.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(svg.headers['x-content-type-options']).toBe('nosniff');
-    expect(svg.body.toString()).toMatch(/^<\?xml[\s\S]*<svg[\s\S]*<polyline/);
+    expect(svg.body.toString()).toMatch(/^<\?xml[\s\S]*<svg[\s\S]*<image [^>]*href="data:image\/png;base64,/);
     expect(svg.body.toString()).not.toMatch(/<script/i);
   });
 

@@ -32,7 +32,7 @@ function sendSvg(req: Request, res: Response, svg: string, maxAgeSeconds: number
   res.set({
     'Content-Type': 'image/svg+xml; charset=utf-8',
     'X-Content-Type-Options': 'nosniff',
-    'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'",
+    'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; img-src data:", // the lit thumbnail is a PNG inside the SVG
     // private: a shared cache must not keep serving a bar after the moderators hide it.
     'Cache-Control': `private, max-age=${maxAgeSeconds}`,
     Vary: 'Accept-Encoding',

@@ -42,7 +42,7 @@ export interface HeightFieldInput {
   /** Pixels of the picture. */
   width: number;
   height: number;
-  /** Samples per pixel along each axis (anti-aliasing): 3 by default, 1 to 8. */
+  /** Samples per pixel along each axis (anti-aliasing): 2 by default, 1 to 8. */
   supersample?: number;
 }
 
@@ -59,6 +59,9 @@ export interface HeightField {
   facet: Uint16Array;
   /** Per pixel: the facet all its samples share, or MIXED_PIXEL. */
   pixelFacet: Uint16Array;
+  /** The MIXED_PIXEL pixels (index y·width + x), and their samples' facets, s² each, row by row. */
+  mixed: Uint32Array;
+  mixedFacets: Uint16Array;
 }
 
 /** Directions a wall can face, per turn (0.088° apart: far below what the eye tells on a wall). */
@@ -68,7 +71,7 @@ export const MIXED_PIXEL = 0xffff;
 
 /** The height field of a study's grooves over a window (see the module's comment). */
 export function computeHeightField(input: HeightFieldInput): HeightField {
-  const s = Math.max(1, Math.min(8, Math.round(input.supersample ?? 3)));
+  const s = Math.max(1, Math.min(8, Math.round(input.supersample ?? 2)));
   const { width, height, window } = input;
   const cols = width * s;
   const rows = height * s;
@@ -78,10 +81,57 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
   const facet = new Uint16Array(cols * rows);
   const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
   if (reach > 0) for (const line of input.lines) cutLine(line.points, grid, window);
-  // Distances to depths, in place: d − dist·slope inside the groove, 0 on the plate.
-  const depth = dist2;
-  for (let i = 0; i < depth.length; i++) depth[i] = facet[i] === 0 ? 0 : Math.max(0, input.depth - Math.sqrt(dist2[i]) * slope);
-  return { width, height, supersample: s, window, wallSlope: slope, depth, facet, pixelFacet: pixelFacets(facet, width, height, s) };
+  const pixels = finishField(dist2, facet, { width, height, s, depth: input.depth, slope });
+  return { width, height, supersample: s, window, wallSlope: slope, depth: dist2, facet, ...pixels };
+}
+
+/**
+ * One pass over the pixels: distances become depths in place (d − dist·slope inside a groove, 0 on
+ * the plate), and each pixel gets its facet when its samples share one, else MIXED_PIXEL with its
+ * samples' facets copied out in a row (so that reshading reads them in order).
+ */
+function finishField(dist2: Float32Array, facet: Uint16Array, f: { width: number; height: number; s: number; depth: number; slope: number }): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
+  const { width, height, s, depth, slope } = f;
+  const cols = width * s;
+  const pixelFacet = new Uint16Array(width * height);
+  let mixedPixels = new Uint32Array(1024);
+  let mixedFacets = new Uint16Array(1024 * s * s);
+  let count = 0;
+  for (let py = 0; py < height; py++) {
+    for (let px = 0; px < width; px++) {
+      const base = py * s * cols + px * s;
+      const first = facet[base];
+      let same = true;
+      for (let j = 0; j < s; j++) {
+        for (let i = 0, k = base + j * cols; i < s; i++, k++) {
+          const fk = facet[k];
+          if (fk !== first) same = false;
+          dist2[k] = fk === 0 ? 0 : Math.max(0, depth - Math.sqrt(dist2[k]) * slope);
+        }
+      }
+      const p = py * width + px;
+      if (same) {
+        pixelFacet[p] = first;
+        continue;
+      }
+      pixelFacet[p] = MIXED_PIXEL;
+      if (count === mixedPixels.length) {
+        mixedPixels = grown(mixedPixels, 2 * count);
+        mixedFacets = grown(mixedFacets, 2 * count * s * s);
+      }
+      mixedPixels[count] = p;
+      let o = count * s * s;
+      for (let j = 0; j < s; j++) for (let i = 0, k = base + j * cols; i < s; i++) mixedFacets[o++] = facet[k + i];
+      count++;
+    }
+  }
+  return { pixelFacet, mixed: mixedPixels.slice(0, count), mixedFacets: mixedFacets.slice(0, count * s * s) };
+}
+
+function grown<T extends Uint16Array | Uint32Array>(a: T, size: number): T {
+  const b = new (a.constructor as new (n: number) => T)(size);
+  b.set(a);
+  return b;
 }
 
 interface Raster {
@@ -236,19 +286,4 @@ function facetOf(x: number, y: number): number {
   const turn = Math.atan2(y, x) / (2 * Math.PI);
   const bin = Math.round(turn * FACET_BINS);
   return 1 + (((bin % FACET_BINS) + FACET_BINS) % FACET_BINS);
-}
-
-function pixelFacets(facet: Uint16Array, width: number, height: number, s: number): Uint16Array {
-  const out = new Uint16Array(width * height);
-  const cols = width * s;
-  for (let py = 0; py < height; py++) {
-    for (let px = 0; px < width; px++) {
-      const base = py * s * cols + px * s;
-      const f = facet[base];
-      let same = true;
-      for (let j = 0; j < s && same; j++) for (let i = 0; i < s; i++) if (facet[base + j * cols + i] !== f) { same = false; break; }
-      out[py * width + px] = same ? f : MIXED_PIXEL;
-    }
-  }
-  return out;
 }

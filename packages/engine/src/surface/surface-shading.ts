@@ -56,38 +56,34 @@ export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: 
   const linear = facetColours(field.wallSlope, light, METAL_COLOURS[tint]);
   const bytes = new Uint8ClampedArray(linear.length);
   for (let i = 0; i < linear.length; i++) bytes[i] = srgbByte(linear[i]);
-  const { width, height, supersample: s, facet, pixelFacet } = field;
+  const { width, height, supersample: s, pixelFacet, mixed, mixedFacets } = field;
   const out = new Uint8ClampedArray(width * height * 4);
-  const cols = width * s;
-  const share = 1 / (s * s);
-  for (let py = 0; py < height; py++) {
-    for (let px = 0; px < width; px++) {
-      const p = py * width + px;
-      const f = pixelFacet[p];
-      const o = 4 * p;
-      out[o + 3] = 255;
-      if (f !== MIXED_PIXEL) {
-        out[o] = bytes[3 * f];
-        out[o + 1] = bytes[3 * f + 1];
-        out[o + 2] = bytes[3 * f + 2];
-        continue;
-      }
-      let r = 0;
-      let g = 0;
-      let b = 0;
-      const base = py * s * cols + px * s;
-      for (let j = 0; j < s; j++) {
-        for (let i = 0; i < s; i++) {
-          const k = 3 * facet[base + j * cols + i];
-          r += linear[k];
-          g += linear[k + 1];
-          b += linear[k + 2];
-        }
-      }
-      out[o] = SRGB_TABLE[Math.min(ENCODE_STEPS, Math.round(r * share * ENCODE_STEPS))];
-      out[o + 1] = SRGB_TABLE[Math.min(ENCODE_STEPS, Math.round(g * share * ENCODE_STEPS))];
-      out[o + 2] = SRGB_TABLE[Math.min(ENCODE_STEPS, Math.round(b * share * ENCODE_STEPS))];
+  // One 32-bit write per pixel: the facet's bytes packed in the platform's order.
+  const packed = new Uint32Array(FACET_BINS + 1);
+  const rgba = new Uint8ClampedArray(packed.buffer);
+  for (let f = 0; f <= FACET_BINS; f++) rgba.set([bytes[3 * f], bytes[3 * f + 1], bytes[3 * f + 2], 255], 4 * f);
+  const words = new Uint32Array(out.buffer);
+  for (let p = 0; p < pixelFacet.length; p++) {
+    const f = pixelFacet[p];
+    if (f !== MIXED_PIXEL) words[p] = packed[f];
+  }
+  const n = s * s;
+  const share = ENCODE_STEPS / n;
+  for (let m = 0, k = 0; m < mixed.length; m++) {
+    let r = 0;
+    let g = 0;
+    let b = 0;
+    for (const end = k + n; k < end; k++) {
+      const c = 3 * mixedFacets[k];
+      r += linear[c];
+      g += linear[c + 1];
+      b += linear[c + 2];
     }
+    const o = 4 * mixed[m];
+    out[o] = SRGB_TABLE[Math.round(r * share)];
+    out[o + 1] = SRGB_TABLE[Math.round(g * share)];
+    out[o + 2] = SRGB_TABLE[Math.round(b * share)];
+    out[o + 3] = 255;
   }
   return out;
 }
@@ -98,10 +94,11 @@ export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: 
  */
 function facetColours(slope: number, light: SurfaceLight, tint: readonly [number, number, number]): Float32Array {
   const out = new Float32Array(3 * (FACET_BINS + 1));
+  // Clipped at white here, as the display would: averaged edge pixels then stay within 0…1.
   const put = (f: number, v: number) => {
-    out[3 * f] = v * tint[0];
-    out[3 * f + 1] = v * tint[1];
-    out[3 * f + 2] = v * tint[2];
+    out[3 * f] = Math.min(1, v * tint[0]);
+    out[3 * f + 1] = Math.min(1, v * tint[1]);
+    out[3 * f + 2] = Math.min(1, v * tint[2]);
   };
   put(0, blinnPhong(0, 0, 1, light));
   const norm = 1 / Math.sqrt(1 + slope * slope);
