@@ -33,6 +33,11 @@ import type { ModerationEvents } from './moderation/moderation-events';
 import type { ModerationLimits } from './moderation/moderation-limits';
 // Engine work (exports, thumbnails) runs in a worker pool with a budget per job.
 import { retryAfterWhenBusy, type ComputePool } from './compute/compute-pool';
+// The rosette rack and its sweeps; votes on a board's designs.
+import { rackRouter } from './rack/rack-router';
+import { VoteEvents } from './votes/vote-events';
+import { votesRouter } from './votes/votes-router';
+import { VotesService } from './votes/votes-service';
 
 /** Idle and absolute session lifetimes. */
 export const SESSION_IDLE_MS = 7 * 24 * 3600_000;
@@ -88,6 +93,8 @@ export interface AppLocals {
   accessEvents: BoardAccessEvents;
   notificationEvents: NotificationEvents;
   moderationEvents: ModerationEvents;
+  /** Votes: their ranking events feed the vote socket (VoteGateway). */
+  votes: VotesService;
 }
 
 /** Builds the Express app. It never listens: main.ts does, and tests call it through supertest. */
@@ -121,7 +128,8 @@ export function createApp(deps: AppDeps): express.Express {
     db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}), notificationEvents: community.events,
     events: deps.moderationEvents, limits: deps.moderationLimits,
   });
-  Object.assign(app.locals, { sessionParser, accessEvents, notificationEvents: community.events, moderationEvents: moderation.events } satisfies AppLocals);
+  const votes = new VotesService({ db: deps.db, notifier: community.notifier, events: new VoteEvents() });
+  Object.assign(app.locals, { sessionParser, accessEvents, notificationEvents: community.events, moderationEvents: moderation.events, votes } satisfies AppLocals);
   app.use(securityHeaders(secureCookies));
 
   const api = express.Router();
@@ -150,6 +158,8 @@ export function createApp(deps: AppDeps): express.Express {
   api.use('/boards', boardsRouter(boardDeps));
   api.use('/invitations', invitationsRouter(boardDeps));
   api.use('/designs', designsRouter({ db: deps.db, store, compute: deps.compute, closeDesignSockets: deps.closeDesignSockets ?? (() => {}) }));
+  api.use('/rack', rackRouter({ db: deps.db }));
+  api.use(votesRouter(votes));
   api.use(community.router);
   api.use(moderation.router);
   if (deps.localSmtp) api.use('/dev', mailboxRouter(deps.localSmtp));

@@ -10,7 +10,7 @@ import { isoInstant } from './instant';
  *   GET  /api/notifications/unsubscribe?token=  → { email: 'off' } (no sign-in; the link in every notification e-mail;
  *                                                  a browser asking for HTML gets a short page instead)
  */
-export const NOTIFICATION_KINDS = ['remix', 'rating', 'comment', 'invitation'] as const;
+export const NOTIFICATION_KINDS = ['remix', 'rating', 'comment', 'invitation', 'vote-opened', 'vote-closed'] as const;
 export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
 
 export const EMAIL_MODES = ['immediate', 'digest', 'off'] as const;

@@ -67,7 +67,7 @@ export function rosetteIssues(rosette: unknown, units: Units): { path: (string |
 const rosetteFields = {
   name: name(RACK_LIMITS.nameMax),
   units: unitsSchema.optional(),
-  rosette: z.unknown(),
+  rosette: z.unknown().optional(),
   tags: rackTagsSchema.optional(),
   notes: text(RACK_LIMITS.notesMax).optional(),
 };

@@ -151,3 +151,21 @@ export function candidateTitle(c: Pick<SweepCandidate, 'units' | 'rosette' | 'ru
   const travel = c.travel.name || `${len(c.travel.travelPerRev)}/rev${c.travel.leverRatio === 1 ? '' : ` ×${c.travel.leverRatio}`}`;
   return `${c.rosette.name} · ${rubber} · ${travel}`.slice(0, 100);
 }
+
+/** POST /api/boards/:id/designs/batch: a shortlist made bar designs on a board in one request, all or nothing → 201 { ids }. */
+export const DESIGNS_BATCH_MAX = 100;
+export const designsBatchBody = z.strictObject({
+  designs: z
+    .array(
+      z.strictObject({
+        title: z.string({ error: 'is required' }).trim().min(1, 'is required').max(100, 'must be at most 100 characters'),
+        file: designSchema,
+        /** The rack rosette the design was made from (one of the caller's), recorded as its origin. */
+        rackRosetteId: z.uuid('must be a rack rosette id').optional(),
+      }),
+      { error: 'must be a list of designs' },
+    )
+    .min(1, 'needs at least 1 design')
+    .max(DESIGNS_BATCH_MAX, `takes at most ${DESIGNS_BATCH_MAX} designs`),
+});
+export type DesignsBatchBody = z.input<typeof designsBatchBody>;

@@ -12,6 +12,7 @@ import type { Mailer } from '../mail/mailer';
 import { createDesign } from '../designs/designs-service';
 import { requireBoardRole, type BoardAccessEvents } from './board-access';
 import * as service from './boards-service';
+import { createDesignsBatch } from './designs-batch';
 
 export interface BoardsRouterDeps {
   db: Db;
@@ -91,6 +92,7 @@ export function boardsRouter(deps: BoardsRouterDeps): Router {
     res.status(204).end();
   });
 
+  router.post('/:id/designs/batch', createDesignsBatch(db));
   router.post('/:id/designs', async (req, res) => {
     const user = requireUser(req);
     await requireBoardRole(db, req.params.id, user.id, 'editor');

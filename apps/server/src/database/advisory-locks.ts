@@ -15,6 +15,8 @@ export const ADVISORY_LOCKS = {
   compaction: 7403,
   /** With the uploader (hashtext of the user id): the day's photo allowance is counted and used in one step. */
   photoAllowance: 7301,
+  /** With the member (hashtext of the user id): one change of the rack's rosette count (add, import) at a time. */
+  rack: 7501,
 } as const;
 
 /** Waits for the transaction-scoped lock (key, hashtext(id)); it is released when the transaction ends. */

@@ -4,7 +4,7 @@ import type { NotificationRow } from '../../../../db/schema';
 const quoted = (title?: string) => `“${title ?? 'a bar'}”`;
 
 /** The sentence and the app link of a notification (pure; the words are kept from the moment it happened). */
-export function describeNotification(row: Pick<NotificationRow, 'kind' | 'data' | 'entryId'>): { text: string; link: string } {
+export function describeNotification(row: Pick<NotificationRow, 'kind' | 'data' | 'entryId' | 'boardId'>): { text: string; link: string } {
   const who = row.data.actorName ?? 'Someone';
   const entryLink = `/entries/${row.entryId}`;
   switch (row.kind) {
@@ -19,6 +19,10 @@ export function describeNotification(row: Pick<NotificationRow, 'kind' | 'data' 
         text: `${who} invited you to the board ${quoted(row.data.boardName)} as ${row.data.role === 'editor' ? 'an editor' : 'a viewer'}. Accept with the link in the invitation e-mail.`,
         link: '/boards',
       };
+    case 'vote-opened':
+      return { text: `${who} asks on the board ${quoted(row.data.boardName)}: ${quoted(row.data.question)} Answer before it closes.`, link: `/boards/${row.boardId}/votes/${row.data.voteId}` };
+    case 'vote-closed':
+      return { text: `The vote ${quoted(row.data.question)} on the board ${quoted(row.data.boardName)} has closed: see the ranking.`, link: `/boards/${row.boardId}/votes/${row.data.voteId}` };
   }
 }
 

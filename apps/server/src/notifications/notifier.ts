@@ -29,7 +29,7 @@ export interface NotifyInput {
   board?: { id: string; name: string };
   /** The comment told of, so the notification leaves the list while moderation hides it. */
   comment?: { id: string };
-  data?: { stars?: number; role?: string };
+  data?: { stars?: number; role?: string; voteId?: string; question?: string };
 }
 
 /** Notifications the member has not read yet (of those shown: none about hidden items). */

@@ -3,6 +3,7 @@ import * as z from 'zod';
 import * as c from '@barwright/contracts';
 import { COMMUNITY_ROUTES } from './community-routes';
 import { MODERATION_ROUTES } from './moderation-routes';
+import { RACK_ROUTES } from './rack-routes';
 
 /**
  * The OpenAPI 3.1 document of every route, generated from the contracts' zod schemas: request
@@ -78,7 +79,7 @@ const pathParams = (path: string) => {
 export function openApiDocument(extra: Route[] = []) {
   const registry = new OpenAPIRegistry();
   registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'barwright.sid' });
-  for (const r of [...ROUTES, ...COMMUNITY_ROUTES, ...MODERATION_ROUTES, ...extra]) {
+  for (const r of [...ROUTES, ...COMMUNITY_ROUTES, ...MODERATION_ROUTES, ...RACK_ROUTES, ...extra]) {
     const status = r.status ?? 200;
     const params = pathParams(r.path);
     registry.registerPath({

@@ -1,0 +1,53 @@
+import { Router } from 'express';
+import * as z from 'zod';
+import { rackFileSchema, rackRosetteBody, rackRosettePatch, rackShopBody, type RackFile, type RackShop } from '@barwright/contracts';
+import type { Db } from '../database/database';
+import { requireUser } from '../auth/auth-router';
+import { parseBody } from '../http/validate';
+import * as rack from './rack-service';
+import { sweepsRouter } from './sweeps-router';
+
+const importQuery = z.strictObject({ mode: z.enum(['replace', 'add'], { error: 'must be "replace" or "add"' }).default('replace') });
+
+/** The member's own rack at /api/rack: nobody reads or changes another's (their rosettes answer 404). */
+export function rackRouter(deps: { db: Db }): Router {
+  const { db } = deps;
+  const router = Router();
+
+  router.get('/', async (req, res) => {
+    res.json(await rack.readRack(db, requireUser(req)));
+  });
+  router.post('/rosettes', async (req, res) => {
+    const user = requireUser(req);
+    const body = parseBody(rackRosetteBody(user.units), req.body);
+    res.status(201).json(await rack.addRosette(db, user, body));
+  });
+  router.patch('/rosettes/:id', async (req, res) => {
+    const user = requireUser(req);
+    const row = await rack.ownRosette(db, user.id, req.params.id);
+    const patch = parseBody(rackRosettePatch(row.units), req.body);
+    res.json(await rack.changeRosette(db, user.id, row.id, patch as Parameters<typeof rack.changeRosette>[3]));
+  });
+  router.delete('/rosettes/:id', async (req, res) => {
+    await rack.removeRosette(db, requireUser(req).id, req.params.id);
+    res.status(204).end();
+  });
+  router.put('/shop', async (req, res) => {
+    const user = requireUser(req);
+    const body = parseBody(rackShopBody(user.units), req.body);
+    res.json(await rack.saveShop(db, user.id, { ...body, units: body.units ?? user.units } as RackShop));
+  });
+  router.get('/export', async (req, res) => {
+    const file = await rack.exportRack(db, requireUser(req));
+    res.setHeader('Content-Disposition', 'attachment; filename="rack.barwright-rack.json"');
+    res.json(file);
+  });
+  router.post('/import', async (req, res) => {
+    const user = requireUser(req);
+    const { mode } = parseBody(importQuery, req.query);
+    const file = parseBody(rackFileSchema, req.body) as RackFile;
+    res.json(await rack.importRack(db, user, file, mode));
+  });
+  router.use('/sweeps', sweepsRouter(deps));
+  return router;
+}

@@ -1,0 +1,88 @@
+import { Router } from 'express';
+import { and, desc, eq, sql } from 'drizzle-orm';
+import { sweepBody, sweepCountProblem, SWEEP_LIMITS, type SavedSweep, type SweepChoices, type SweepSummary } from '@barwright/contracts';
+import { savedSweeps } from '../../../../db/schema';
+import type { Db } from '../database/database';
+import { requireUser } from '../auth/auth-router';
+import { HttpError, notFound } from '../http/http-error';
+import { isUuid } from '../http/uuid';
+import { parseBody } from '../http/validate';
+import { ownRosettesAmong, rackRosetteRows } from './rack-service';
+
+type Row = typeof savedSweeps.$inferSelect;
+
+const toSaved = (row: Row): SavedSweep => ({
+  id: row.id,
+  name: row.name,
+  choices: row.choices,
+  shortlist: row.shortlist,
+  createdAt: row.createdAt.toISOString(),
+  updatedAt: row.updatedAt.toISOString(),
+});
+
+/**
+ * How many rosettes the choices take from the member's rack: picked ones must all be theirs, and the
+ * whole sweep must stay within SWEEP_MAX_CANDIDATES (400 naming the field and how to narrow it).
+ */
+async function chosenRosettes(db: Db, ownerId: string, choices: SweepChoices): Promise<number> {
+  const pick = choices.rosettes;
+  let count: number;
+  if (pick.by === 'picked') {
+    const own = new Set((await ownRosettesAmong(db, ownerId, pick.ids)).map((r) => r.id));
+    const i = pick.ids.findIndex((id) => !own.has(id));
+    if (i >= 0) throw new HttpError(400, 'invalid_input', 'A picked rosette is not on your rack.', { [`choices.rosettes.ids[${i}]`]: 'is not a rosette of your rack' });
+    count = pick.ids.length;
+  } else {
+    const rows = await rackRosetteRows(db, ownerId);
+    const wanted = pick.by === 'tags' ? new Set(pick.tags.map((t) => t.toLowerCase())) : undefined;
+    count = wanted ? rows.filter((r) => r.tags.some((t) => wanted.has(t.toLowerCase()))).length : rows.length;
+  }
+  const problem = sweepCountProblem(choices, count);
+  if (problem) throw new HttpError(400, 'invalid_input', problem, { choices: problem });
+  return count * choices.rubbers.length * choices.travels.length * choices.cutters.length;
+}
+
+async function ownSweep(db: Db, ownerId: string, id: string): Promise<Row> {
+  const [row] = isUuid(id) ? await db.select().from(savedSweeps).where(and(eq(savedSweeps.id, id), eq(savedSweeps.ownerId, ownerId))) : [];
+  if (!row) throw notFound('sweep');
+  return row;
+}
+
+/** Saved sweeps at /api/rack/sweeps: their choices and shortlists (results are recomputed), the member's own only. */
+export function sweepsRouter({ db }: { db: Db }): Router {
+  const router = Router();
+  router.get('/', async (req, res) => {
+    const rows = await db.select().from(savedSweeps).where(eq(savedSweeps.ownerId, requireUser(req).id)).orderBy(desc(savedSweeps.updatedAt));
+    res.json(rows.map((r): SweepSummary => ({ id: r.id, name: r.name, candidates: r.candidates, shortlisted: r.shortlist.length, updatedAt: r.updatedAt.toISOString() })));
+  });
+  router.post('/', async (req, res) => {
+    const user = requireUser(req);
+    const body = parseBody(sweepBody, req.body);
+    const candidates = await chosenRosettes(db, user.id, body.choices);
+    const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(savedSweeps).where(eq(savedSweeps.ownerId, user.id));
+    if (n >= SWEEP_LIMITS.saved) throw new HttpError(400, 'invalid_input', `You can keep at most ${SWEEP_LIMITS.saved} sweeps; delete some first.`, { sweeps: `at most ${SWEEP_LIMITS.saved} saved sweeps` });
+    const [row] = await db.insert(savedSweeps).values({ ownerId: user.id, name: body.name, choices: body.choices, shortlist: body.shortlist, candidates }).returning();
+    res.status(201).json(toSaved(row));
+  });
+  router.get('/:id', async (req, res) => {
+    res.json(toSaved(await ownSweep(db, requireUser(req).id, req.params.id)));
+  });
+  router.put('/:id', async (req, res) => {
+    const user = requireUser(req);
+    const row = await ownSweep(db, user.id, req.params.id);
+    const body = parseBody(sweepBody, req.body);
+    const candidates = await chosenRosettes(db, user.id, body.choices);
+    const [updated] = await db
+      .update(savedSweeps)
+      .set({ name: body.name, choices: body.choices, shortlist: body.shortlist, candidates, updatedAt: new Date() })
+      .where(eq(savedSweeps.id, row.id))
+      .returning();
+    res.json(toSaved(updated));
+  });
+  router.delete('/:id', async (req, res) => {
+    const row = await ownSweep(db, requireUser(req).id, req.params.id);
+    await db.delete(savedSweeps).where(eq(savedSweeps.id, row.id));
+    res.status(204).end();
+  });
+  return router;
+}
