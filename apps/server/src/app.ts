@@ -1,5 +1,6 @@
 import express from 'express';
 import session from 'express-session';
+import compression from 'compression';
 import type { ClientConfig, Health } from '@barwright/contracts';
 import { healthRouter, type ReadinessCheck } from './http/health-router';
 import type { Db } from './database/database';
@@ -125,21 +126,26 @@ export function createApp(deps: AppDeps): express.Express {
     events: deps.notificationEvents, limits: deps.communityLimits, uploadsDir: deps.uploadsDir, photoStorage: deps.photoStorage, log,
   });
   const moderation = createModeration({
-    db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}), notificationEvents: community.events,
+    db: deps.db, sessionStore, closeUserSockets: deps.closeUserSockets ?? (() => {}), notificationEvents: community.events, notifier: community.notifier,
     events: deps.moderationEvents, limits: deps.moderationLimits,
   });
   const votes = new VotesService({ db: deps.db, notifier: community.notifier, events: new VoteEvents() });
   Object.assign(app.locals, { sessionParser, accessEvents, notificationEvents: community.events, moderationEvents: moderation.events, votes } satisfies AppLocals);
+  // Health checks first: a balancer's probe needs no security headers, session, body parser or compression.
+  app.use('/api', healthRouter({ db: deps.db, databaseKind: deps.databaseKind, readinessChecks: deps.readinessChecks, isDraining: deps.isDraining }));
   app.use(securityHeaders(secureCookies));
 
   const api = express.Router();
+  // JSON answers above 1 KiB go compressed (brotli or gzip, as the client accepts); images are left alone.
+  api.use(compression({ threshold: 1024 }));
   api.use(express.json({ limit: '256kb' }));
   api.use(refuseHostileShapes);
   const openapi = openApiDocument();
   api.get('/openapi.json', (_req, res) => {
     res.json(openapi);
   });
-  api.use(healthRouter({ db: deps.db, databaseKind: deps.databaseKind, readinessChecks: deps.readinessChecks, isDraining: deps.isDraining }));
+  // A visitor's request reads no session row and writes none (saveUninitialized: false, and the XSRF
+  // token needs no session); a signed-in one is read once and its rolling expiry written at most once a minute.
   api.use(sessionParser);
   api.use((req, _res, next) => {
     // The absolute timeout: a session older than this ends however active it is.
@@ -148,7 +154,7 @@ export function createApp(deps: AppDeps): express.Express {
   });
   api.use(passport.initialize());
   api.use(passport.session());
-  api.use(csrfProtection(secureCookies));
+  api.use(csrfProtection(deps.sessionSecret, secureCookies));
   api.get('/config', (_req, res) => {
     res.json({ localMail: Boolean(deps.localSmtp), demo: Boolean(deps.demo) } satisfies ClientConfig);
   });

@@ -55,6 +55,7 @@ const signOut = (deps: AuthRouterDeps) => (req: Request, res: Response, next: (e
     req.session.destroy((destroyError) => {
       if (destroyError) return next(destroyError);
       res.clearCookie('barwright.sid', { path: '/' });
+      issueCsrfToken(req, res, deps.secureCookies); // a visitor's token, so the next sign-in needs no reload
       res.status(204).end();
     });
   });
