@@ -10,13 +10,13 @@ export const notifications = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
-    kind: text('kind', { enum: ['remix', 'rating', 'comment', 'invitation', 'vote-opened', 'vote-closed'] }).notNull(),
+    kind: text('kind', { enum: ['remix', 'rating', 'comment', 'invitation', 'vote-opened', 'vote-closed', 'item-hidden', 'item-restored', 'entry-featured'] }).notNull(),
     actorId: uuid('actor_id').references(() => users.id, { onDelete: 'set null' }),
     entryId: uuid('entry_id').references(() => entries.id, { onDelete: 'cascade' }),
     boardId: uuid('board_id').references(() => boards.id, { onDelete: 'cascade' }),
     /** The comment a `comment` notification tells of, so it leaves the list while that comment is hidden. */
     commentId: uuid('comment_id').references(() => comments.id, { onDelete: 'cascade' }),
-    data: jsonb('data').$type<{ entryTitle?: string; boardName?: string; actorName?: string; stars?: number; role?: string; voteId?: string; question?: string }>().notNull().default({}),
+    data: jsonb('data').$type<{ entryTitle?: string; boardName?: string; actorName?: string; stars?: number; role?: string; voteId?: string; question?: string; itemKind?: 'bar' | 'comment' | 'photo'; reason?: string; note?: string }>().notNull().default({}),
     readAt: timestamp('read_at', { withTimezone: true }),
     /** Waiting for the member's daily digest e-mail. */
     digestPending: boolean('digest_pending').notNull().default(false),

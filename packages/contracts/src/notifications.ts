@@ -3,6 +3,8 @@ import { isoInstant } from './instant';
 
 /**
  * Notifications: in the app (the bell, live over socket.io: see socket-events.ts) and by e-mail.
+ * Kinds: remix, rating, comment (on the member's bar), invitation, votes on their boards, and moderation of
+ * their own items (item-hidden, item-restored: a bar, comment or photo; entry-featured: a bar put in the showcase).
  *   GET  /api/notifications?limit=&before=      → NotificationList (newest first; `before` an ISO time for the next page)
  *   POST /api/notifications/read                MarkReadBody → { unread }
  *   GET  /api/notifications/settings            → NotificationSettings
@@ -10,7 +12,7 @@ import { isoInstant } from './instant';
  *   GET  /api/notifications/unsubscribe?token=  → { email: 'off' } (no sign-in; the link in every notification e-mail;
  *                                                  a browser asking for HTML gets a short page instead)
  */
-export const NOTIFICATION_KINDS = ['remix', 'rating', 'comment', 'invitation', 'vote-opened', 'vote-closed'] as const;
+export const NOTIFICATION_KINDS = ['remix', 'rating', 'comment', 'invitation', 'vote-opened', 'vote-closed', 'item-hidden', 'item-restored', 'entry-featured'] as const;
 export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
 
 export const EMAIL_MODES = ['immediate', 'digest', 'off'] as const;

@@ -7,7 +7,7 @@ import { findUserById } from '../auth/users';
 import { recordAudit, type AuditInput } from '../audit/audit-log';
 import { forbidden, HttpError, notFound } from '../http/http-error';
 import type { NotificationEvents } from '../notifications/notification-events';
-import { unreadCount } from '../notifications/notifier';
+import { unreadCount, type Notifier } from '../notifications/notifier';
 import { setHidden } from './item-hiding';
 import type { ModerationEvents } from './moderation-events';
 import { requireMayAct } from './moderation-rules';
@@ -19,6 +19,8 @@ export interface ModerationActionDeps {
   accounts: AccountChangeDeps;
   events: ModerationEvents;
   notificationEvents: NotificationEvents;
+  /** Tells an item's author that it was hidden or restored (in the app and by their e-mail setting). */
+  notifier: Pick<Notifier, 'notify'>;
 }
 
 type Target = Pick<ReportTarget, 'kind' | 'id'>;
@@ -61,6 +63,18 @@ async function announce(deps: ModerationActionDeps, f: TargetFacts | undefined) 
   }
 }
 
+/** Tells the item's author of the decision, as "the moderators"; a failure is logged by the notifier, never undoing the decision. */
+function tellAuthor(deps: ModerationActionDeps, f: TargetFacts, viewer: UserRow, kind: 'item-hidden' | 'item-restored', reason?: string) {
+  return deps.notifier.notify({
+    userId: f.authorId,
+    kind,
+    actor: viewer,
+    byModerators: true,
+    entry: { id: f.entryId, title: f.entryTitle },
+    data: { itemKind: NAMES[f.kind], ...(reason ? { reason } : {}) },
+  });
+}
+
 /** Hides the item (never deletes it), upholds its open reports; the reason is shown to its author. */
 export async function hideItem(deps: ModerationActionDeps, viewer: UserRow, target: Target, reason: string): Promise<void> {
   const { facts, author } = await decidable(deps.db, target, viewer);
@@ -72,6 +86,7 @@ export async function hideItem(deps: ModerationActionDeps, viewer: UserRow, targ
     await recordAudit(tx, auditOf(facts, viewer, author, 'item.hide', reason, closed));
   });
   await announce(deps, facts);
+  await tellAuthor(deps, facts, viewer, 'item-hidden', reason);
 }
 
 /** Shows a hidden item again, as it was. */
@@ -83,6 +98,7 @@ export async function restoreItem(deps: ModerationActionDeps, viewer: UserRow, t
     await recordAudit(tx, auditOf(facts, viewer, author, 'item.restore', note, 0));
   });
   await announce(deps, facts);
+  await tellAuthor(deps, facts, viewer, 'item-restored');
 }
 
 /** Closes the item's open reports without acting on it. */

@@ -3,6 +3,7 @@ import type { Db } from '../database/database';
 import type { AccountChangeDeps } from '../admin/account-changes';
 import type { DatabaseSessionStore } from '../auth/session-store';
 import type { NotificationEvents } from '../notifications/notification-events';
+import type { Notifier } from '../notifications/notifier';
 import { auditRouter } from '../audit/audit-router';
 import { curationRouter } from '../showcase/curation-router';
 import { showcaseRouter } from '../showcase/showcase-router';
@@ -17,6 +18,8 @@ export interface ModerationDeps {
   closeUserSockets: (userId: string) => void;
   /** The community's notification events: hiding a comment changes its notification's bell count. */
   notificationEvents: NotificationEvents;
+  /** Tells authors when their item is hidden, restored or featured. */
+  notifier: Pick<Notifier, 'notify'>;
   events?: ModerationEvents;
   limits?: Partial<ModerationLimits>;
 }
@@ -31,12 +34,12 @@ export function createModeration(deps: ModerationDeps) {
   const events = deps.events ?? new ModerationEvents();
   const limits = { ...DEFAULT_MODERATION_LIMITS, ...deps.limits };
   const accounts: AccountChangeDeps = { db: deps.db, sessionStore: deps.sessionStore, closeUserSockets: deps.closeUserSockets, moderationEvents: events };
-  const routerDeps = { db: deps.db, accounts, events, notificationEvents: deps.notificationEvents, reportsPerHour: limits.reportsPerHour };
+  const routerDeps = { db: deps.db, accounts, events, notificationEvents: deps.notificationEvents, notifier: deps.notifier, reportsPerHour: limits.reportsPerHour };
   const router = Router();
   router.use(showcaseRouter({ db: deps.db }));
   router.use(reportsRouter(routerDeps));
   router.use(deskRouter(routerDeps));
-  router.use(curationRouter({ db: deps.db }));
+  router.use(curationRouter({ db: deps.db, notifier: deps.notifier }));
   router.use(auditRouter({ db: deps.db }));
   return { router, accounts, events };
 }

@@ -3,6 +3,15 @@ import type { NotificationRow } from '../../../../db/schema';
 
 const quoted = (title?: string) => `“${title ?? 'a bar'}”`;
 
+type ItemData = Pick<NotificationRow['data'], 'itemKind' | 'entryTitle'>;
+
+/** "bar “Sine 24”", "comment on “Sine 24”", "photo on “Sine 24”". */
+const itemOf = (d: ItemData) => (d.itemKind === 'comment' || d.itemKind === 'photo' ? `${d.itemKind} on ${quoted(d.entryTitle)}` : `bar ${quoted(d.entryTitle)}`);
+const itemLink = (d: ItemData, entryLink: string) => (d.itemKind === 'comment' ? `${entryLink}#comments` : entryLink);
+
+/** The moderator's words as one sentence: a final full stop added when they end without one. */
+const sentence = (words: string) => (/[.!?…]$/.test(words.trim()) ? words.trim() : `${words.trim()}.`);
+
 /** The sentence and the app link of a notification (pure; the words are kept from the moment it happened). */
 export function describeNotification(row: Pick<NotificationRow, 'kind' | 'data' | 'entryId' | 'boardId'>): { text: string; link: string } {
   const who = row.data.actorName ?? 'Someone';
@@ -21,6 +30,15 @@ export function describeNotification(row: Pick<NotificationRow, 'kind' | 'data' 
       };
     case 'vote-opened':
       return { text: `${who} asks on the board ${quoted(row.data.boardName)}: ${quoted(row.data.question)} Answer before it closes.`, link: `/boards/${row.boardId}/votes/${row.data.voteId}` };
+    case 'item-hidden':
+      return {
+        text: `${who} hid your ${itemOf(row.data)}. ${row.data.reason ? `Reason: ${sentence(row.data.reason)} ` : ''}Others no longer see it; you still do, and it is not deleted.`,
+        link: itemLink(row.data, entryLink),
+      };
+    case 'item-restored':
+      return { text: `${who} restored your ${itemOf(row.data)}: everyone sees it again.`, link: itemLink(row.data, entryLink) };
+    case 'entry-featured':
+      return { text: `${who} featured your bar ${quoted(row.data.entryTitle)} in the showcase${row.data.note ? `: ${quoted(row.data.note)}` : '.'}`, link: entryLink };
     case 'vote-closed':
       return { text: `The vote ${quoted(row.data.question)} on the board ${quoted(row.data.boardName)} has closed: see the ranking.`, link: `/boards/${row.boardId}/votes/${row.data.voteId}` };
   }

@@ -29,7 +29,9 @@ export interface NotifyInput {
   board?: { id: string; name: string };
   /** The comment told of, so the notification leaves the list while moderation hides it. */
   comment?: { id: string };
-  data?: { stars?: number; role?: string; voteId?: string; question?: string };
+  data?: { stars?: number; role?: string; voteId?: string; question?: string; itemKind?: 'bar' | 'comment' | 'photo'; reason?: string; note?: string };
+  /** A moderation decision: the member is told "the moderators", not which one (the audit log keeps who). */
+  byModerators?: boolean;
 }
 
 /** Notifications the member has not read yet (of those shown: none about hidden items). */
@@ -78,11 +80,11 @@ export class Notifier {
       .values({
         userId: input.userId,
         kind: input.kind,
-        actorId: input.actor.id,
+        actorId: input.byModerators ? null : input.actor.id,
         entryId: input.entry?.id ?? null,
         boardId: input.board?.id ?? null,
         commentId: input.comment?.id ?? null,
-        data: { actorName: input.actor.displayName, entryTitle: input.entry?.title, boardName: input.board?.name, ...input.data },
+        data: { actorName: input.byModerators ? 'The moderators' : input.actor.displayName, entryTitle: input.entry?.title, boardName: input.board?.name, ...input.data },
         digestPending: mode === 'digest',
       })
       .returning();

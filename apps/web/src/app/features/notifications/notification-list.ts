@@ -17,6 +17,9 @@ export const KIND_ICONS: Readonly<Record<NotificationKind, string>> = {
   rating: 'star',
   comment: 'chat_bubble_outline',
   invitation: 'group_add',
+  'item-hidden': 'visibility_off',
+  'item-restored': 'visibility',
+  'entry-featured': 'workspace_premium',
 };
 
 export const KIND_LABELS: Readonly<Record<NotificationKind, string>> = {
@@ -24,4 +27,7 @@ export const KIND_LABELS: Readonly<Record<NotificationKind, string>> = {
   rating: 'Rating',
   comment: 'Comment',
   invitation: 'Invitation',
+  'item-hidden': 'Hidden by the moderators',
+  'item-restored': 'Restored',
+  'entry-featured': 'Featured',
 };
