@@ -48,9 +48,9 @@ export class ComputePool {
     this.pool.on('error', (error) => log(error));
   }
 
-  /** A design file in one format (the design already validated). */
-  exportDesign(design: Design, format: ExportFormat, name: string): Promise<ExportedFile> {
-    return this.run({ kind: 'export', design, format, name }, `${format.toUpperCase()} export`) as Promise<ExportedFile>;
+  /** A design file in one format (the design already validated); `title` is the name printed on a PDF, `opposite` adds the opposite blank to it. */
+  exportDesign(design: Design, format: ExportFormat, name: string, extra: { title?: string; opposite?: boolean } = {}): Promise<ExportedFile> {
+    return this.run({ kind: 'export', design, format, name, ...extra }, `${format.toUpperCase()} export`) as Promise<ExportedFile>;
   }
 
   /** The card thumbnail of a design (SVG text). */

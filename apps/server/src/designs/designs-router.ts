@@ -3,7 +3,6 @@ import * as Y from 'yjs';
 import { and, desc, eq } from 'drizzle-orm';
 import { createVersionBody, updateDesignBody, type DesignMeta, type DesignVersion } from '@barwright/contracts';
 import { NOTES_TEXT, readDesign, writeDesign } from '@barwright/contracts/design-doc';
-import { EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
 import { boards, designs, designVersions, users } from '../../../../db/schema';
 import type { ComputePool } from '../compute/compute-pool';
 import type { Db } from '../database/database';
@@ -14,6 +13,7 @@ import { parseBody } from '../http/validate';
 import { isUuid } from '../http/uuid';
 import type { DesignDocStore } from '../realtime/design-doc-store';
 import { applyServerUpdate, currentDoc } from '../realtime/live-docs';
+import { exportQuery, fileSlug as slug } from './export-query';
 import { createDesign, toDesignSummary, validatedDesign } from './designs-service';
 
 export interface DesignsRouterDeps {
@@ -23,8 +23,6 @@ export interface DesignsRouterDeps {
   /** Closes the open sockets of a deleted design. */
   closeDesignSockets: (designId: string) => void;
 }
-
-const slug = (title: string) => title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'bar';
 
 export function designsRouter(deps: DesignsRouterDeps): Router {
   const { db, store } = deps;
@@ -66,11 +64,8 @@ export function designsRouter(deps: DesignsRouterDeps): Router {
 
   router.get('/:id/export', async (req, res) => {
     const { design } = await requireDesignRole(db, req.params.id, requireUser(req).id, 'viewer');
-    const format = String(req.query.format ?? '') as ExportFormat;
-    if (!EXPORT_FORMATS.includes(format)) {
-      throw new HttpError(400, 'invalid_input', `format must be one of ${EXPORT_FORMATS.join(', ')}`, { format: `must be one of ${EXPORT_FORMATS.join(', ')}` });
-    }
-    const file = await deps.compute.exportDesign(validatedDesign(await currentDoc(store, design.id)), format, slug(design.title));
+    const { format, opposite } = exportQuery(req.query);
+    const file = await deps.compute.exportDesign(validatedDesign(await currentDoc(store, design.id)), format, slug(design.title), { title: design.title, opposite });
     res.type(file.mime).attachment(file.filename).send(typeof file.content === 'string' ? file.content : Buffer.from(file.content));
   });
 

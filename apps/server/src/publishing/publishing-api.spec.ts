@@ -1,5 +1,7 @@
+import { PDFParse } from 'pdf-parse';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { EXAMPLE_DESIGN } from '@barwright/contracts';
+import { EXAMPLE_DESIGN, parseDesign } from '@barwright/contracts';
+import { EXPORT_FORMATS } from '@barwright/engine';
 import { availableDrivers, type TestDatabase } from '../testing/test-database';
 import { Client, makeUser, useTestServer, type TestServer } from '../testing/test-app';
 import { editDesign, member, publishedBar, type Member } from '../community/community-testing';
@@ -7,6 +9,14 @@ import { entries } from '../../../../db/schema';
 import { eq } from 'drizzle-orm';
 
 const drivers = await availableDrivers();
+
+/** Reads a response body as bytes (supertest leaves a PDF unparsed otherwise). */
+const binary = (res: import('superagent').Response, done: (error: Error | null, body: Buffer) => void) => {
+  const stream = res as unknown as NodeJS.ReadableStream;
+  const chunks: Buffer[] = [];
+  stream.on('data', (chunk: Buffer) => chunks.push(chunk));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
+};
 
 describe.each(drivers)('publishing API on %s', (driver) => {
   let database: TestDatabase;
@@ -100,12 +110,34 @@ describe.each(drivers)('publishing API on %s', (driver) => {
   it('exports the published file in every format, for visitors too', async () => {
     const { entryId } = await publishedBar(author, 'Sine 24 keeper');
     const visitor = new Client(server.app);
-    for (const format of ['svg', 'dxf', 'gcode', 'csv', 'pdf']) {
+    for (const format of EXPORT_FORMATS) {
       const res = await visitor.agent.get(`/api/entries/${entryId}/export?format=${format}`).buffer(true);
       expect(res.status, format).toBe(200);
-      expect(res.headers['content-disposition']).toMatch(/sine-24-keeper\./);
+      expect(res.headers['content-disposition']).toMatch(/sine-24-keeper[.-]/);
     }
     expect((await visitor.get(`/api/entries/${entryId}/export?format=stl`)).body.error.fields.format).toMatch(/svg/);
+    expect((await visitor.get(`/api/entries/${entryId}/export?format=pdf&opposite=yes`)).body.error.fields.opposite).toMatch(/0 or 1/);
+    expect((await visitor.get(`/api/entries/${entryId}/export?format=svg&opposite=1`)).body.error.fields.opposite).toMatch(/pdf only/);
+  });
+
+  it('prints the entry\'s name on the PDF, and the opposite blank when asked; the design file reads back as the design', async () => {
+    const { entryId } = await publishedBar(author, 'Sine 24 keeper');
+    const visitor = new Client(server.app);
+    const pdf = async (query: string) => {
+      const res = await visitor.agent.get(`/api/entries/${entryId}/export?format=pdf${query}`).buffer(true).parse(binary);
+      const parser = new PDFParse({ data: new Uint8Array(res.body as Buffer) });
+      try {
+        return (await parser.getText()).text;
+      } finally {
+        await parser.destroy();
+      }
+    };
+    const plain = await pdf('');
+    expect(plain).toMatch(/^Sine 24 keeper/);
+    expect(plain).not.toContain('Opposite blank');
+    expect(await pdf('&opposite=1')).toContain('Opposite blank, turned over');
+    const file = await visitor.agent.get(`/api/entries/${entryId}/export?format=json`).buffer(true);
+    expect(parseDesign(JSON.parse(file.text)).ok).toBe(true);
   });
 
   it('keeps hidden and deleted entries from others; visitors only read', async () => {

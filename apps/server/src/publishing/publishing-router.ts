@@ -3,13 +3,13 @@ import { Router, type Request, type Response } from 'express';
 import { publishBody, type DesignEntryLinkAnswer, type PublishResult } from '@barwright/contracts';
 import { and, eq, isNull } from 'drizzle-orm';
 import { entries } from '../../../../db/schema';
-import { EXPORT_FORMATS, type ExportFormat } from '@barwright/engine';
 import type { ComputePool } from '../compute/compute-pool';
 import { ExportCache } from '../compute/export-cache';
 import { requireUser } from '../auth/auth-router';
 import { requireDesignRole } from '../boards/board-access';
 import { validatedDesign } from '../designs/designs-service';
 import { forbidden, HttpError } from '../http/http-error';
+import { exportQuery, fileSlug as slug } from '../designs/export-query';
 import { parseBody } from '../http/validate';
 import type { DesignDocStore } from '../realtime/design-doc-store';
 import { currentDoc } from '../realtime/live-docs';
@@ -25,7 +25,6 @@ export interface PublishingRouterDeps {
   compute: ComputePool;
 }
 
-const slug = (title: string) => title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'bar';
 
 /** Our own SVG, served as an image: no scripts, nothing loaded, not framed; gzip when the client takes it (it shrinks some 85 %). */
 function sendSvg(req: Request, res: Response, svg: string, maxAgeSeconds: number) {
@@ -86,12 +85,10 @@ export function publishingRouter(deps: PublishingRouterDeps): Router {
   });
   router.get('/entries/:id/export', async (req, res) => {
     const entry = await requireVisibleEntry(db, req.params.id, viewerOf(req));
-    const format = String(req.query.format ?? '') as ExportFormat;
-    if (!EXPORT_FORMATS.includes(format)) {
-      throw new HttpError(400, 'invalid_input', `format must be one of ${EXPORT_FORMATS.join(', ')}`, { format: `must be one of ${EXPORT_FORMATS.join(', ')}` });
-    }
+    const { format, opposite } = exportQuery(req.query);
     const revision = await requireRevision(db, entry, req.query.revision === undefined ? undefined : String(req.query.revision));
-    const file = await exports.get(`${revision.id}:${format}`, () => compute.exportDesign(revision.design, format, slug(revision.title)));
+    const key = `${revision.id}:${format}${opposite ? ':opposite' : ''}`;
+    const file = await exports.get(key, () => compute.exportDesign(revision.design, format, slug(revision.title), { title: revision.title, opposite }));
     res.type(file.mime).attachment(file.filename).send(typeof file.content === 'string' ? file.content : Buffer.from(file.content));
   });
   router.delete('/entries/:id', async (req, res) => {

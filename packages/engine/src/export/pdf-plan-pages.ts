@@ -2,6 +2,8 @@ import type { Units } from '@barwright/contracts';
 import type { PDFDocument, PDFFont, PDFPage } from 'pdf-lib';
 import type { CutPlan } from '../cut-plan';
 import { formatLength } from '../length-format';
+import type { EngineWarning } from '../types';
+import { SUPPLIER_NOTE } from './pdf-cover-page';
 import { PAGE_MARGIN_MM, PT_PER_MM } from './pdf-tiles';
 import { winAnsiText, wrapText } from './pdf-text';
 
@@ -28,7 +30,7 @@ export function addPlanPages(
   doc: PDFDocument,
   size: readonly [number, number],
   fonts: PlanPageFonts,
-  content: { title: string; plan: CutPlan; materialName: string; units: Units },
+  content: { name: string; title: string; plan: CutPlan; materialName: string; units: Units; warnings: readonly EngineWarning[] },
 ): void {
   const margin = PAGE_MARGIN_MM * PT_PER_MM;
   const width = size[0] - 2 * margin;
@@ -51,10 +53,11 @@ export function addPlanPages(
     for (const item of items) write(`- ${item}`, 9.5, fonts.regular, 8);
   };
 
-  write(winAnsiText(content.title), 15, fonts.bold);
+  write(winAnsiText(`${content.name} - cut plan`), 15, fonts.bold);
+  write(content.title, 9.5, fonts.regular);
   section('Cut plan', planFigureLines(content.plan, content.materialName, content.units));
-  section('Warnings', content.plan.warnings.length ? content.plan.warnings.map((w) => w.message) : ['none']);
+  section('Warnings', content.warnings.length ? content.warnings.map((w) => w.message) : ['none: the studio shows no warning for this design.']);
   section('Set-up reminders', content.plan.reminders);
   if (content.plan.heatTreatment) section('Heat treatment', content.plan.heatTreatment);
-  section('Cautions', content.plan.cautions);
+  section('Cautions', [...content.plan.cautions, SUPPLIER_NOTE]);
 }

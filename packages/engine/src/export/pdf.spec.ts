@@ -2,17 +2,19 @@ import { PDFParse } from 'pdf-parse';
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { planCut } from '../cut-plan';
+import { formatLength } from '../length-format';
 import { computeProfile } from '../profile';
 import { demoDesign, demoInInches, demoProfile } from '../testing/export-fixtures';
 import { handMadeProfile } from '../testing/hand-made-profile';
 import { exportDesign } from './index';
+import { winAnsiText } from './pdf-text';
 import { PAGE_MARGIN_MM } from './pdf-tiles';
 
 /** PDF user space: 1 unit = 1/72 in (ISO 32000-1 §8.3.2.3); inch = 25.4 mm (NIST). */
 const PT_PER_MM = 72 / 25.4;
 
-async function pdfOf(design = demoDesign, profile = demoProfile): Promise<Uint8Array> {
-  const file = await exportDesign(design, 'pdf', { profile });
+async function pdfOf(design = demoDesign, profile = demoProfile, options: { opposite?: boolean } = {}): Promise<Uint8Array> {
+  const file = await exportDesign(design, 'pdf', { profile, title: 'Guild reference bar', ...options });
   expect(file).toMatchObject({ filename: 'bar.pdf', mime: 'application/pdf' });
   return file.content as Uint8Array;
 }
@@ -22,11 +24,22 @@ async function textOf(bytes: Uint8Array) {
   const parser = new PDFParse({ data: bytes.slice() });
   try {
     const text = await parser.getText();
-    return { text: text.text, pages: text.total };
+    return { text: text.text, pages: text.total, pageTexts: text.pages.map((p) => p.text) };
   } finally {
     await parser.destroy();
   }
 }
+
+/** The page number (from 1) of the first page whose text holds `words`. */
+async function pageWith(bytes: Uint8Array, words: string): Promise<number> {
+  const { pageTexts } = await textOf(bytes);
+  const index = pageTexts.findIndex((t) => t.includes(words));
+  expect(index).toBeGreaterThanOrEqual(0);
+  return index + 1;
+}
+
+/** Words as pdf-parse reads them back: lines wrapped and typographic marks written plainly (WinAnsi). */
+const flat = (text: string) => winAnsiText(text.replace(/\s+/g, ' '));
 
 /**
  * Bounding boxes of the stroked paths on a page, in points, read with pdfjs-dist (Mozilla's PDF
@@ -47,14 +60,29 @@ async function pathBoxes(bytes: Uint8Array, pageNumber: number) {
   return { boxes, size: [view[2] - view[0], view[3] - view[1]] };
 }
 
+/** A bar whose profile warns (the rubber bridges valleys, the follower rounds crests), as a scalloped rosette does. */
+function scallopedBar(): Design {
+  return {
+    ...EXAMPLE_DESIGN,
+    rosette: { baseRadius: 50, layers: [{ lobes: 48, amplitude: 0.6, phase: 0, wave: { shape: 'scallop' } }] },
+    rubber: { shape: 'round', radius: 0.8 },
+  };
+}
+
 describe('PDF template', () => {
-  it('holds the title, the calibration note, the cut plan and the cautions as text', async () => {
-    const { text, pages } = await textOf(await pdfOf());
+  it('holds the name, the set-up, the title, the calibration note, the cut plan and the cautions as text', async () => {
+    const { text, pages, pageTexts } = await textOf(await pdfOf());
     const plan = planCut(demoDesign, demoProfile);
-    expect(pages).toBe(2);
+    expect(pages).toBe(5); // first page, period, line study, one tile, cut plan
+    expect(pageTexts[0]).toMatch(/^Guild reference bar/);
     expect(text).toContain('24-lobe sine rosette, A2 tool steel, annealed, bar 150 mm');
+    for (const label of ['Rosette:', 'Rubber:', 'Travel:', 'Lever:', 'Cutter:', 'Follower:', 'Material:']) expect(pageTexts[0]).toContain(label);
+    expect(pageTexts[0]).toContain('24 lobes, sine');
+    expect(pageTexts[0]).toContain('Print at 100 % (actual size)');
+    expect(pageTexts[1]).toContain('one period enlarged');
+    expect(pageTexts[2]).toContain('line study');
     expect(text).toContain('Calibration square: it must measure 10 mm x 10 mm on paper.');
-    expect(text).toContain(`Passes: ${plan.passes} at 0.0762 mm step-over`);
+    expect(text).toContain(`Passes: ${plan.passes} at ${formatLength(plan.stepOver, 'mm')} step-over`);
     expect(text).toContain(`${plan.totalMinutes.toFixed(1)} min in all`);
     expect(text).toContain(`${Math.round(plan.rpm)} rpm`);
     expect(text).toContain('Wear eye protection');
@@ -62,8 +90,34 @@ describe('PDF template', () => {
     expect(text).toMatch(/Heat treatment[\s\S]*HRC 57-62/);
   });
 
+  it('lists the warnings the studio shows: the profile\'s summarised warnings, then the plan\'s', async () => {
+    const design = scallopedBar();
+    const profile = computeProfile(design);
+    const plan = planCut(design, profile);
+    expect(profile.warnings.length).toBeGreaterThan(0);
+    const { pageTexts } = await textOf(await pdfOf(design, profile));
+    const first = flat(pageTexts[0]);
+    const last = flat(pageTexts.at(-1)! + pageTexts.at(-2)!);
+    for (const w of [...profile.warnings, ...plan.warnings]) {
+      expect(first).toContain(flat(w.message));
+      expect(last).toContain(flat(w.message));
+    }
+    expect(first).not.toContain('- none');
+  });
+
+  it('adds the opposite blank at 1:1 and in the enlarged period when asked', async () => {
+    const without = await textOf(await pdfOf());
+    const bytes = await pdfOf(demoDesign, computeProfile(demoDesign), { opposite: true });
+    const { text, pages } = await textOf(bytes);
+    expect(pages).toBe(without.pages + 1);
+    expect(text).toContain('Opposite blank, turned over (cut edge on top). Tile 1 of 1');
+    expect(text).toContain('the opposite blank of the same cut');
+    expect(without.text).not.toContain('Opposite blank');
+  });
+
   it('is A4 landscape with a 10 mm calibration square and the bar drawn at 1:1', async () => {
-    const { boxes, size } = await pathBoxes(await pdfOf(), 1);
+    const bytes = await pdfOf();
+    const { boxes, size } = await pathBoxes(bytes, await pageWith(bytes, 'Tile 1 of 1'));
     expect(size[0]).toBeCloseTo(297 * PT_PER_MM, 2);
     expect(size[1]).toBeCloseTo(210 * PT_PER_MM, 2);
     const square = boxes.find((b) => Math.abs(b.width - b.height) < 1e-3 && b.width < 40);
@@ -74,7 +128,7 @@ describe('PDF template', () => {
 
   it('uses Letter and a 1 in square for an inch design', async () => {
     const bytes = await pdfOf(demoInInches());
-    const { boxes, size } = await pathBoxes(bytes, 1);
+    const { boxes, size } = await pathBoxes(bytes, await pageWith(bytes, 'Tile 1 of 1'));
     expect(size).toEqual([792, 612]);
     expect(boxes.some((b) => Math.abs(b.width - 72) < 1e-3 && Math.abs(b.height - 72) < 1e-3)).toBe(true);
     expect((await textOf(bytes)).text).toContain('1 in x 1 in');
@@ -103,7 +157,7 @@ describe('PDF template', () => {
   it('keeps a deep bar on the page, clear of the heading and the calibration square', async () => {
     const design = deep(10);
     const bytes = await pdfOf(design, computeProfile(design));
-    const { boxes } = await pathBoxes(bytes, 1);
+    const { boxes } = await pathBoxes(bytes, await pageWith(bytes, 'Tile 1 of 1'));
     const bar = boxes.filter((b) => Math.abs(b.width - 150 * PT_PER_MM) < 0.5 && b.height < 200 * PT_PER_MM);
     expect(bar.length).toBeGreaterThan(0);
     for (const b of bar) {
@@ -120,7 +174,8 @@ describe('PDF template', () => {
     expect(text).toContain('row 3 of 3');
     expect(text).toContain('row 2 starts here');
     expect(pages).toBeGreaterThanOrEqual(4);
-    for (let page = 1; page <= 3; page++) {
+    const firstTile = await pageWith(bytes, 'Tile 1 of 1');
+    for (let page = firstTile; page < firstTile + 3; page++) {
       // The band each row is clipped to (the full-width rectangle) lies between the square and the heading.
       const band = (await pathBoxes(bytes, page)).boxes.find((b) => b.width > 290 * PT_PER_MM)!;
       expect(band.y0).toBeGreaterThan(foot);

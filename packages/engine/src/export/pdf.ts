@@ -3,7 +3,6 @@ import {
   PDFDocument,
   StandardFonts,
   clip,
-  closePath,
   endPath,
   lineTo,
   moveTo,
@@ -26,16 +25,33 @@ import { SHORT_CAUTION } from '../cut-plan-notes';
 import { formatLength } from '../length-format';
 import type { Point } from '../types';
 import type { BarDrawing } from './bar-drawing';
+import type { LineStudy } from '../line-study';
+import type { EngineWarning } from '../types';
+import { addCoverPage, type PdfFonts } from './pdf-cover-page';
+import { addFigurePages } from './pdf-figure-pages';
+import type { PeriodFigure } from './pdf-figures';
+import { path, pushAll } from './pdf-paths';
 import { addPlanPages } from './pdf-plan-pages';
+import type { SetUpLine } from './set-up-lines';
 import { winAnsiText } from './pdf-text';
 import { PAGE_MARGIN_MM, PAPER_POINTS, PT_PER_MM, TILE_OVERLAP_MM, tileRanges, type Paper, type Tile } from './pdf-tiles';
 
 export interface PdfJob {
+  /** The design's own name, as its board or entry calls it. */
+  name: string;
+  /** What the design is, in one line (rosette, material, bar). */
   title: string;
   units: Units;
   drawing: BarDrawing;
   plan: CutPlan;
   materialName: string;
+  setUp: readonly SetUpLine[];
+  /** The warnings the studio shows: the profile's (one per kind, summarised) then the cut plan's. */
+  warnings: readonly EngineWarning[];
+  period: PeriodFigure;
+  study: LineStudy;
+  /** The opposite blank, turned over so its cut edge is on top, when the pair is asked for. */
+  opposite?: BarDrawing;
   /** Default: A4 for a mm design, Letter for an inch design. */
   paper?: Paper;
 }
@@ -46,29 +62,48 @@ export function calibrationSideMm(units: Units): number {
 }
 
 /**
- * A printable 1:1 template: one landscape page per tile of the bar (with a calibration square,
- * x marks and seam marks), then the cut plan. Deterministic: no dates are written.
+ * A printable template: a first page with the name, set-up and warnings; one period enlarged; the
+ * line study; one landscape page per tile of the bar at 1:1 (with a calibration square, x marks and
+ * seam marks), the opposite blank's tiles when asked; then the cut plan. Deterministic: no dates are written.
  */
 export async function barPdf(job: PdfJob): Promise<Uint8Array> {
   const doc = await PDFDocument.create({ updateMetadata: false });
-  doc.setTitle(winAnsiText(job.title));
+  doc.setTitle(winAnsiText(`${job.name}: ${job.title}`));
   doc.setCreator('Barwright');
   const fonts = { regular: await doc.embedFont(StandardFonts.Helvetica), bold: await doc.embedFont(StandardFonts.HelveticaBold) };
   const size = PAPER_POINTS[job.paper ?? (job.units === 'in' ? 'letter' : 'a4')];
-  const usableMm = size[0] / PT_PER_MM - 2 * PAGE_MARGIN_MM;
-  const tiles = tileRanges(job.drawing.length, usableMm);
-  const band = drawingBand(size[1], job.units);
-  const content = contentSpan(job.drawing);
-  const rows = tileRanges(content.top - content.bottom, band.heightMm).map((r) => ({ ...r, count: 0 }));
-  rows.forEach((r) => (r.count = rows.length));
-  for (const row of rows) for (const tile of tiles) drawTilePage(doc.addPage([size[0], size[1]]), { job, tile, tiles, row, band, content }, fonts);
+  addCoverPage(doc, size, fonts, { name: job.name, title: job.title, setUp: job.setUp, warnings: job.warnings, contents: contentsOf(job) });
+  addFigurePages(doc, size, fonts, job);
+  addTilePages(doc, size, fonts, job, job.drawing, '');
+  if (job.opposite) addTilePages(doc, size, fonts, job, job.opposite, 'Opposite blank, turned over (cut edge on top). ');
   addPlanPages(doc, size, fonts, job);
   return doc.save();
+}
+
+function contentsOf(job: PdfJob): string[] {
+  return [
+    `Page 2: one period enlarged${job.opposite ? ', with the opposite blank of the same cut above it' : ''}; page 3: the line study.`,
+    `Then the bar at 1:1 (actual size) over one or more tiles with a calibration square${job.opposite ? ', then the opposite blank at 1:1' : ''}.`,
+    'Last: the cut plan, warnings, set-up reminders, heat treatment and safety cautions.',
+  ];
+}
+
+function addTilePages(doc: PDFDocument, size: readonly [number, number], fonts: PdfFonts, job: PdfJob, drawing: BarDrawing, what: string): void {
+  const usableMm = size[0] / PT_PER_MM - 2 * PAGE_MARGIN_MM;
+  const tiles = tileRanges(drawing.length, usableMm);
+  const band = drawingBand(size[1], job.units);
+  const content = contentSpan(drawing);
+  const rows = tileRanges(content.top - content.bottom, band.heightMm).map((r) => ({ ...r, count: 0 }));
+  rows.forEach((r) => (r.count = rows.length));
+  for (const row of rows) for (const tile of tiles) drawTilePage(doc.addPage([size[0], size[1]]), { job, drawing, what, tile, tiles, row, band, content }, fonts);
 }
 
 /** One page: a tile along the bar, and a row of its height when the drawing is deeper than the page. */
 interface PageTile {
   job: PdfJob;
+  drawing: BarDrawing;
+  /** Which blank, when not the bar itself. */
+  what: string;
   tile: Tile;
   tiles: readonly Tile[];
   row: Tile & { count: number };
@@ -95,8 +130,7 @@ function contentSpan(drawing: BarDrawing): { bottom: number; top: number } {
 }
 
 function drawTilePage(page: PDFPage, where: PageTile, fonts: { regular: PDFFont; bold: PDFFont }): void {
-  const { job, tile, tiles, row, band, content } = where;
-  const { drawing } = job;
+  const { job, drawing, tile, tiles, row, band, content } = where;
   const k = PT_PER_MM;
   const margin = PAGE_MARGIN_MM * k;
   const { height } = page.getSize();
@@ -107,10 +141,10 @@ function drawTilePage(page: PDFPage, where: PageTile, fonts: { regular: PDFFont;
   const toPt = ([x, y]: Point): Point => [margin + (x - tile.xFrom) * k, band.bottomPt + (y - foot) * k];
   const text = (s: string, x: number, y: number, size = 9, font = fonts.regular) => page.drawText(winAnsiText(s), { x, y, size, font });
 
-  text(job.title, margin, height - margin - 12, 13, fonts.bold);
+  text(`${job.name} - ${job.title}`, margin, height - margin - 12, 13, fonts.bold);
   const span = `x ${fmt(tile.xFrom, unit)} to ${fmt(tile.xTo, unit)} ${unit}`;
   const rowNote = row.count > 1 ? `, row ${row.index + 1} of ${row.count} counted up from the back of the bar (rows overlap by ${fmt(TILE_OVERLAP_MM, unit)} ${unit})` : '';
-  text(`Tile ${tile.index + 1} of ${tiles.length}${rowNote}: ${span}. Print at 100 % (actual size), not "fit to page".`, margin, height - margin - 28);
+  text(`${where.what}Tile ${tile.index + 1} of ${tiles.length}${rowNote}: ${span}. Print at 100 % (actual size), not "fit to page".`, margin, height - margin - 28);
   text('Grey: the bar, cut edge on top. Dashed red: the cutter-centre path. Thin line: the blank before cutting.', margin, height - margin - 41);
   const { plan } = job;
   const summary = `Cut plan: ${plan.passes} passes of ${formatLength(plan.stepOver, unit)}, about ${plan.totalMinutes.toFixed(1)} min at ${Math.round(plan.rpm)} rpm. The full plan and the cautions are on the last pages.`;
@@ -196,19 +230,6 @@ function onTile(points: readonly Point[], tile: Tile): Point[] {
   let to = points.length - 1;
   while (to > from && points[to - 1][0] > tile.xTo) to--;
   return points.slice(from, to + 1);
-}
-
-/** Operators per pushOperators call: pdf-lib spreads them into one push, which overflows the stack on a long path. */
-const OPERATOR_BATCH = 10_000;
-
-function pushAll(page: PDFPage, ...groups: readonly PDFOperator[][]): void {
-  for (const ops of groups) for (let i = 0; i < ops.length; i += OPERATOR_BATCH) page.pushOperators(...ops.slice(i, i + OPERATOR_BATCH));
-}
-
-function path(points: readonly Point[], closed: boolean): PDFOperator[] {
-  const ops = points.map(([x, y], i) => (i === 0 ? moveTo(x, y) : lineTo(x, y)));
-  if (closed) ops.push(closePath());
-  return ops;
 }
 
 function fmt(mm: number, units: Units): string {
