@@ -5,7 +5,7 @@ import { SAFETY_CAUTIONS, setUpReminders } from './cut-plan-notes';
 import { formatLength } from './length-format';
 import { assertFinite, assertFiniteWarnings } from './finite-output';
 import { cuttingFigures } from './materials';
-import { computeProfile } from './profile';
+import { computeProfile, profileSamples } from './profile';
 import { feedPerMinute, spindleRpm } from './spindle-speed';
 import type { EngineWarning, Point, Profile } from './types';
 import { toMm } from './units';
@@ -56,7 +56,9 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
   const figures = cuttingFigures(design, mm.cutter.diameter, chipOverride);
   const { stepOver, travelSpeed } = mm.plan;
 
-  const depth = peakToValley(path.barEdge) + mm.plan.cleanup;
+  // The typed arrays behind a computed profile when there are any (the same figures, no Point arrays built).
+  const typed = profileSamples(path);
+  const depth = (typed ? heightSpan(typed.bar) : peakToValley(path.barEdge)) + mm.plan.cleanup;
   const passes = Math.max(1, Math.ceil(depth / stepOver - 1e-9));
   const passLength = mm.bar.length + mm.cutter.diameter + 2 * LEAD_CLEARANCE_MM;
   const returnSpeed = options.returnSpeed ?? RETURN_SPEED_FACTOR * travelSpeed;
@@ -64,7 +66,7 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
 
   const rpm = spindleRpm(figures.surfaceSpeed, mm.cutter.diameter);
   const show = (v: number) => formatLength(v, design.units);
-  const placement = placementText(mm, peakToValley(path.cutterPath), design.units);
+  const placement = placementText(mm, typed ? heightSpan(typed.cutter) : peakToValley(path.cutterPath), design.units);
   const warnings = cutPlanWarnings({
     preset: figures.preset,
     stepOver,
@@ -73,7 +75,7 @@ export function planCut(design: Design, profile?: Profile, options: CutPlanOptio
     flutes: mm.cutter.flutes,
     chipLoad: figures.chipLoad,
     travelSpeed,
-    maxSlope: steepestSlope(path.cutterPath),
+    maxSlope: typed ? steepestTypedSlope(typed.x, typed.cutter) : steepestSlope(path.cutterPath),
     leverRatio: mm.motion.leverRatio,
     cutterOffset: mm.cutter.offset,
     placement,
@@ -129,6 +131,26 @@ export function steepestSlope(points: readonly Point[]): number {
   for (let i = 1; i < points.length; i++) {
     const dx = points[i][0] - points[i - 1][0];
     if (dx > 0) steepest = Math.max(steepest, Math.abs(points[i][1] - points[i - 1][1]) / dx);
+  }
+  return steepest;
+}
+
+function heightSpan(y: Float64Array): number {
+  if (y.length === 0) return 0;
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < y.length; i++) {
+    if (y[i] < lo) lo = y[i];
+    if (y[i] > hi) hi = y[i];
+  }
+  return hi - lo;
+}
+
+function steepestTypedSlope(x: Float64Array, y: Float64Array): number {
+  let steepest = 0;
+  for (let i = 1; i < y.length; i++) {
+    const dx = x[i] - x[i - 1];
+    if (dx > 0) steepest = Math.max(steepest, Math.abs(y[i] - y[i - 1]) / dx);
   }
   return steepest;
 }

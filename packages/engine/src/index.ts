@@ -14,7 +14,7 @@ export { type DetailLossInput, detailLossWarnings } from './detail-loss';
 export { type BarGrid, barGrid, defaultStep, finestFeature, neededStep } from './bar-grid';
 export { NonFiniteResultError } from './finite-output';
 export { type ProfileOptions, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';
-export { type Companion, COMPANIONS, oppositeProfile } from './profile';
+export { type Companion, type ProfileSamples, COMPANIONS, oppositeProfile, profileSamples } from './profile';
 export { type CutterPlacement, type PlacementFigures, cutterPlacement, placementFigures, placementText, alongBarShift, acrossBarHeight } from './cutter-placement';
 export { type PeriodProfile, periodProfile } from './period-profile';
 export { type LineStudy, computeLineStudy, vGrooveWidth } from './line-study';

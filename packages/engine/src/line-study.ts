@@ -1,5 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import { periodProfile } from './period-profile';
+import { profileSamples } from './profile';
 import { linePhase, reducedPhase } from './phase-schedule';
 import { decimateGraph } from './polyline-decimate';
 import type { Point, Profile } from './types';
@@ -93,8 +94,9 @@ function periodFromProfile(design: Design, profile: Profile): PeriodLine | undef
   if (Math.abs(m * profile.step - profile.period) > 1e-9 * profile.period || m < 2) return undefined;
   const margin = Math.ceil((design.cutter.diameter / 2 + design.follower.radius) / profile.step) + 2;
   const start = m * Math.ceil(margin / m);
-  if (start + m + margin >= profile.followerPath.length) return undefined;
-  const line = Float64Array.from({ length: m }, (_, k) => profile.followerPath[start + k][1]);
+  const typed = profileSamples(profile);
+  if (start + m + margin >= (typed ? typed.follower.length : profile.followerPath.length)) return undefined;
+  const line = typed ? typed.follower.slice(start, start + m) : Float64Array.from({ length: m }, (_, k) => profile.followerPath[start + k][1]);
   let low = Infinity;
   for (const v of line) low = Math.min(low, v);
   return { line: line.map((v) => v - low), step: profile.step };

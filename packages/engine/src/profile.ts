@@ -40,26 +40,61 @@ export interface BarSamples {
   leadOut?: Point[];
 }
 
-/** Cutter path, bar edge and follower path of a validated design: numbers in mm whatever the file's units, warning messages in the file's units. */
+/**
+ * Cutter path, bar edge and follower path of a validated design: numbers in mm whatever the file's
+ * units, warning messages in the file's units. The work runs on typed arrays (computeBarSamples);
+ * the three Point arrays are built when first read (a bar of 150 000 points makes 450 000 small
+ * arrays, which cost more than the computation and weigh on the garbage collector), and
+ * `profileSamples` hands the typed arrays to readers that want them.
+ */
 export function computeProfile(design: Design, options: ProfileOptions = {}): Profile {
   const samples = computeBarSamples(design, options);
-  const { x, cutter, bar, follower } = samples;
-  const points = (y: Float64Array): Point[] => {
-    const out: Point[] = new Array(y.length);
-    for (let i = 0; i < y.length; i++) out[i] = [x[i], y[i]];
-    return out;
-  };
-  return {
+  const profile = {
     period: samples.grid.period,
     step: samples.grid.step,
-    cutterPath: points(cutter),
-    barEdge: points(bar),
-    followerPath: points(follower),
     minRadiusOfCurvature: samples.minRadiusOfCurvature,
     crest: samples.crest,
     ...(samples.leadIn ? { leadIn: samples.leadIn, leadOut: samples.leadOut } : {}),
     warnings: samples.warnings,
-  };
+  } as Profile;
+  const { x, cutter, bar, follower } = samples;
+  lazyPoints(profile, 'cutterPath', x, cutter);
+  lazyPoints(profile, 'barEdge', x, bar);
+  lazyPoints(profile, 'followerPath', x, follower);
+  // Not enumerable: a copy made by spreading (a caller changing a path) does not carry stale arrays.
+  Object.defineProperty(profile, TYPED, { value: { x, cutter, bar, follower } satisfies ProfileSamples, enumerable: false });
+  return profile;
+}
+
+/** The paths of a profile as typed arrays (mm) on its x grid. */
+export interface ProfileSamples {
+  x: Float64Array;
+  cutter: Float64Array;
+  bar: Float64Array;
+  follower: Float64Array;
+}
+
+const TYPED = Symbol('profile samples');
+
+/** The typed arrays behind a profile computeProfile returned (read-only by contract); undefined for a profile made otherwise or copied. */
+export function profileSamples(profile: Profile): ProfileSamples | undefined {
+  return (profile as Profile & { [TYPED]?: ProfileSamples })[TYPED];
+}
+
+/** An enumerable property that builds its Point array on first read, then holds it as a plain value (assignable). */
+function lazyPoints(profile: Profile, key: 'cutterPath' | 'barEdge' | 'followerPath', x: Float64Array, y: Float64Array): void {
+  const settle = (value: Point[]) => Object.defineProperty(profile, key, { value, writable: true, enumerable: true, configurable: true });
+  Object.defineProperty(profile, key, {
+    enumerable: true,
+    configurable: true,
+    get() {
+      const out: Point[] = [];
+      for (let i = 0; i < y.length; i++) out.push([x[i], y[i]]);
+      settle(out);
+      return out;
+    },
+    set: settle,
+  });
 }
 
 /** The counter-phase companion's profile (the bar shifted half a period). */
