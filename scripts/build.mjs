@@ -13,11 +13,15 @@ const shared = ['packages/contracts/src', 'packages/engine/src', 'package-lock.j
 export const PARTS = {
   web: {
     stamp: 'dist/web/.built',
-    sources: [...shared, 'apps/web/src', 'apps/web/public', 'apps/web/tools', 'apps/web/tsconfig.app.json', 'angular.json'],
+    sources: [...shared, 'apps/web/src', 'apps/web/public', 'apps/web/tools', 'apps/web/tsconfig.app.json', 'angular.json', 'scripts/precompress.mjs'],
     tool: 'node_modules/@angular/cli/bin/ng.js',
-    build: () => {
+    build: async () => {
       const status = spawnSync(process.execPath, [path.join(root, 'node_modules/@angular/cli/bin/ng.js'), 'build', '--configuration', 'production'], { cwd: root, stdio: 'inherit' }).status;
       if (status !== 0) throw new Error(`ng build failed (exit ${status})`);
+      // Brotli and gzip siblings of every text file, served by Accept-Encoding (apps/server/src/web/web-app.ts).
+      const { precompress } = await import('./precompress.mjs');
+      const { raw, br } = await precompress(path.join(root, 'dist/web/browser'));
+      console.log(`[barwright] web app precompressed: ${(raw / 1024).toFixed(0)} kB of text, ${(br / 1024).toFixed(0)} kB as brotli`);
     },
   },
   server: {

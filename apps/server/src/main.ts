@@ -17,12 +17,14 @@ import { NotificationEvents } from './notifications/notification-events';
 import { NotifyGateway } from './notifications/notify-gateway';
 import { DIGEST_CHECK_MS, sendDueDigests } from './notifications/digests';
 import { ModerationGateway } from './moderation/moderation-gateway';
+import { VoteGateway } from './votes/vote-gateway';
 // Several instances (REDIS_URL): socket.io rooms, the co-editing relay and the rate-limit counters in Redis.
 import { createAdapter } from '@socket.io/redis-streams-adapter';
 import { openRedis } from './cluster/redis-connection';
 import { redisRateLimitStores } from './http/rate-limits';
 import { DesignDocStore } from './realtime/design-doc-store';
 import { RedisRelay } from './realtime/redis-relay';
+import { DatabaseSessionStore, PRUNE_EVERY_MS } from './auth/session-store';
 
 const log = (line: string) => console.log(`[barwright] ${line}`);
 
@@ -52,6 +54,7 @@ async function main() {
   let gateway: CollabGateway | undefined;
   let notify: NotifyGateway | undefined;
   let moderation: ModerationGateway | undefined;
+  let votes: VoteGateway | undefined;
   // Browsers may open the realtime sockets from these origins only (a page on another port of this host may not).
   const origins = allowedOrigins(config.publicUrl, config.extraOrigins);
   const notificationEvents = new NotificationEvents();
@@ -65,11 +68,13 @@ async function main() {
       gateway?.closeEverywhere({ userId }, CLOSE_CODES.unauthorized, 'signed out: account suspended or password reset');
       notify?.disconnectUser(userId);
       moderation?.disconnectUser(userId);
+      votes?.disconnectUser(userId);
     },
     closeSessionSockets: (sessionId) => {
       gateway?.closeEverywhere({ sessionId }, CLOSE_CODES.unauthorized, 'signed out');
       notify?.disconnectSession(sessionId);
       moderation?.disconnectSession(sessionId);
+      votes?.disconnectSession(sessionId);
     },
     db: database.db,
     databaseKind: database.kind,
@@ -95,9 +100,19 @@ async function main() {
   notify.attach(server);
   // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
   moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
+  // Live vote rankings, another namespace; votes past their closing time are closed (and members told) every minute.
+  votes = new VoteGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, votes: (app.locals as AppLocals).votes, accessEvents });
+  const voteCloser = setInterval(() => void (app.locals as AppLocals).votes.closeDue().catch(console.error), 60_000);
+  voteCloser.unref();
   const digests = setInterval(() => void sendDueDigests({ db: database.db, mailer, publicUrl: config.publicUrl, secret: sessionSecret }).catch(console.error), DIGEST_CHECK_MS);
   digests.unref();
+  // Expired sessions are swept now and every hour (the store deletes none on its own).
+  const sessionStore = new DatabaseSessionStore(database.db);
+  const sweepSessions = () => void sessionStore.pruneExpired().catch(console.error);
+  const sweeps = setInterval(sweepSessions, PRUNE_EVERY_MS);
+  sweeps.unref();
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve));
+  sweepSessions();
 
   const ms = Math.round(performance.now() - started);
   log(`database: ${database.kind}${database.kind === 'pglite' ? ` in ${config.dataDir}${fresh ? ' (new)' : ''}` : ''}`);
@@ -122,10 +137,13 @@ async function main() {
       process.exit(1);
     }, SHUTDOWN_DEADLINE_MS).unref();
     clearInterval(digests);
+    clearInterval(sweeps);
+    clearInterval(voteCloser);
     const httpClosed = closeHttpServer(server, HTTP_DRAIN_MS);
     notify?.io.engine.close(); // transports closed, so socket.io clients reconnect (a server-side disconnect would be final)
     await gateway?.drain(CLOSE_CODES.goingAway, 'server going away');
     moderation?.close();
+    votes?.close();
     notify?.close();
     await gateway?.close();
     await httpClosed;
@@ -135,7 +153,9 @@ async function main() {
     await localSmtp?.close();
     photoStorage.close?.();
     await database.close();
+    log(`database closed (${database.kind})`);
     release();
+    log(`lock on ${config.dataDir} released`);
     log('stopped');
     process.exit(0);
   };

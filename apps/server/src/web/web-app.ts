@@ -1,24 +1,64 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import express, { Router } from 'express';
+import express, { Router, type Request, type Response } from 'express';
+import { listPrecompressed, pickEncoding, PRECOMPRESSED, type Encoding } from './precompressed';
+
+/** Angular's output names: `main-ABCD1234.js`, `chunk-….js`, `styles-….css`, fonts `roboto-…-ABCD1234.woff2`. */
+const HASHED = /-[A-Z0-9]{8,}\.[a-z0-9]+$/;
+const IMMUTABLE = 'public, max-age=31536000, immutable';
 
 /**
- * Serves the built Angular app. Hashed bundles are cached for a year; index.html never is, and
- * every other GET outside /api falls back to it so client routes survive a reload.
+ * Serves the built Angular app. Files built with `.br` / `.gz` siblings (scripts/build.mjs writes
+ * them after ng build) go out in the encoding the client accepts, with `Vary: Accept-Encoding`.
+ * Hashed files are cached for a year; index.html never is, and every other GET outside /api falls
+ * back to it so client routes survive a reload.
  */
 export function webAppRouter(distDir: string): Router {
   const router = Router();
   const index = path.join(distDir, 'index.html');
-  router.use(
-    express.static(distDir, {
-      index: false,
-      setHeaders(res, file) {
-        if (/\.[0-9a-z]{8,}\.(js|css|woff2?)$/i.test(path.basename(file)) || /-[A-Z0-9]{8,}\.(js|css)$/.test(file)) {
-          res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-        }
-      },
-    }),
-  );
+  const variants = listPrecompressed(distDir); // read once: a new build comes with a restart
+  const serve = express.static(distDir, {
+    index: false,
+    setHeaders(res, file) {
+      const encoding = res.locals.encoding as Encoding | undefined;
+      const original = encoding ? file.slice(0, -PRECOMPRESSED[encoding].length) : file;
+      if (encoding) {
+        res.setHeader('Content-Encoding', encoding);
+        res.type(path.extname(original)); // the original's type, not "application/x-brotli"
+      }
+      if (HASHED.test(path.basename(original))) res.setHeader('Cache-Control', IMMUTABLE);
+    },
+  });
+
+  /** Points the request at the best encoded sibling of `relative` (a path inside distDir), when one exists. */
+  const negotiate = (req: Request, res: Response, relative: string): string => {
+    const offered = variants.get(relative);
+    if (!offered) return relative;
+    res.vary('Accept-Encoding');
+    const encoding = pickEncoding(req.headers['accept-encoding'], offered);
+    if (!encoding) return relative;
+    res.locals.encoding = encoding;
+    return relative + PRECOMPRESSED[encoding];
+  };
+
+  router.use((req, res, next) => {
+    if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+    let relative: string;
+    try {
+      relative = decodeURIComponent(req.path).replace(/^\/+/, '');
+    } catch {
+      return next();
+    }
+    const chosen = negotiate(req, res, relative);
+    if (chosen === relative) return serve(req, res, next);
+    const original = req.url;
+    req.url = '/' + chosen.split('/').map(encodeURIComponent).join('/') + (original.includes('?') ? original.slice(original.indexOf('?')) : '');
+    serve(req, res, (error?: unknown) => {
+      req.url = original;
+      delete res.locals.encoding;
+      next(error);
+    });
+  });
   router.get('/{*splat}', (req, res, next) => {
     if (req.path.startsWith('/api/') || req.path === '/api') return next();
     if (!fs.existsSync(index)) {
@@ -26,7 +66,10 @@ export function webAppRouter(distDir: string): Router {
       return;
     }
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index, { dotfiles: 'allow' }); // the build may live under a dot folder (.tmp/web-…)
+    const chosen = negotiate(req, res, 'index.html');
+    const encoding = res.locals.encoding as Encoding | undefined;
+    if (encoding) res.setHeader('Content-Encoding', encoding).type('html');
+    res.sendFile(path.join(distDir, chosen));
   });
   return router;
 }
