@@ -78,13 +78,18 @@ export const auditEntrySchema = z.object({
   /** Whom it concerns: the item's author, or the account changed. */
   subject: personSchema.nullable(),
   reason: z.string().nullable(),
-  /** Particulars of the action: `{ from, to }` of a role, `reports` closed, `entryId` of a comment or photo, the new `order`. */
+  /**
+   * Particulars of the action: `{ from, to }` of a role, `reports` closed, `entryId` of a comment or photo;
+   * for a reorder `moves` ({ entryId, title, from, to }, places counted from 1) and the new `order`.
+   */
   details: z.record(z.string(), z.unknown()),
 });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
 
 export const auditPageSchema = z.object({
   items: z.array(auditEntrySchema),
+  /** With the `item` filter: that item as the log last named it (its title), or null when no line is about it. */
+  item: z.object({ id: z.string(), kind: z.enum(AUDIT_TARGET_KINDS), label: z.string() }).nullable().optional(),
   total: z.number().int(),
   page: z.number().int(),
   pageSize: z.number().int(),

@@ -73,6 +73,11 @@ describe.each(drivers)('the audit log on %s', (driver) => {
     expect((await audit(tobias, '?kind=user')).total).toBe(2);
     expect((await audit(tobias, `?item=${comment}`)).items.map((e) => e.action)).toEqual(['item.restore', 'item.hide']);
     expect((await audit(tobias, `?item=${entryId}`)).items.map((e) => e.action)).toEqual(['showcase.feature']);
+    // Filtered by item, the page names the item by its title, so nobody reads a raw id.
+    expect((await tobias.client.get(`/api/moderation/audit?item=${entryId}`)).body.item).toEqual({ id: entryId, kind: 'entry', label: 'Sine 24' });
+    expect((await tobias.client.get(`/api/moderation/audit?item=${comment}`)).body.item).toMatchObject({ kind: 'comment', label: 'comment on “Sine 24”' });
+    expect((await tobias.client.get('/api/moderation/audit?item=00000000-0000-4000-8000-000000000000')).body.item).toBeNull();
+    expect((await tobias.client.get('/api/moderation/audit')).body).not.toHaveProperty('item');
     expect((await audit(tobias, '?from=2026-01-15&to=2026-01-15')).items.map((e) => e.action)).toEqual(['showcase.feature']);
     expect((await audit(tobias, '?to=2026-01-14')).total).toBe(0);
     expect((await audit(tobias, '?from=2026-01-16')).total).toBe(4);

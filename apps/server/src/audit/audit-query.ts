@@ -43,7 +43,19 @@ export async function auditPage(db: Db, q: AuditQuery): Promise<AuditPage> {
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
   const [{ total }] = await db.select({ total: count() }).from(auditLog).where(where);
-  return { items: rows.map(toAuditEntry), total, page: q.page, pageSize: q.pageSize };
+  const page: AuditPage = { items: rows.map(toAuditEntry), total, page: q.page, pageSize: q.pageSize };
+  return q.item ? { ...page, item: await itemNamed(db, q.item) } : page;
+}
+
+/** An item as the log's newest line about it names it, so a filter by item shows a title, not an id. */
+async function itemNamed(db: Db, id: string): Promise<AuditPage['item']> {
+  const [row] = await db
+    .select({ kind: auditLog.targetKind, label: auditLog.targetLabel })
+    .from(auditLog)
+    .where(eq(auditLog.targetId, id))
+    .orderBy(desc(auditLog.at), desc(auditLog.seq))
+    .limit(1);
+  return row ? { id, kind: row.kind, label: row.label } : null;
 }
 
 /** The lines about some items, newest first (the desk's history of each case). */

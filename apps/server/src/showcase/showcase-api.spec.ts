@@ -87,6 +87,19 @@ describe.each(drivers)('the showcase on %s', (driver) => {
     const log = (await tobias.client.get('/api/moderation/audit')).body.items;
     expect(log.map((e: { action: string }) => e.action)).toEqual(['showcase.unfeature', 'showcase.reorder', 'showcase.note', 'showcase.feature', 'showcase.feature']);
     expect(log[2]).toMatchObject({ actor: { id: tobias.id }, target: { kind: 'entry', id: bars[0], label: 'Sine 24' }, reason: 'Revised', details: { before: 'First note' } });
-    expect(log[1]).toMatchObject({ target: { kind: 'showcase', id: null }, details: { order: [bars[1], bars[0]] } });
+    // A swap of two reads as one move, of the entry now first; its title and places are in the line.
+    expect(log[1]).toMatchObject({ target: { kind: 'entry', id: bars[1], label: 'Basket weave 18' }, details: { moves: [{ entryId: bars[1], title: 'Basket weave 18', from: 2, to: 1 }], order: [bars[1], bars[0]] } });
+  });
+
+  it('says what moved when the order changes, and writes nothing when it does not', async () => {
+    for (const [i, id] of bars.entries()) await feature(id, `Note ${i}`);
+    await tobias.client.send('put', '/api/moderation/showcase/order', { entryIds: [bars[2], bars[0], bars[1]] });
+    await tobias.client.send('put', '/api/moderation/showcase/order', { entryIds: [bars[2], bars[0], bars[1]] }); // the same order again
+    const reorders = (await tobias.client.get('/api/moderation/audit?action=showcase.reorder')).body.items;
+    expect(reorders).toHaveLength(1);
+    expect(reorders[0]).toMatchObject({ target: { kind: 'entry', id: bars[2] }, details: { moves: [{ entryId: bars[2], from: 3, to: 1 }] } });
+    // The moved entry's own history has the line.
+    const ofItem = (await tobias.client.get(`/api/moderation/audit?item=${bars[2]}`)).body;
+    expect(ofItem.items.map((e: { action: string }) => e.action)).toEqual(['showcase.reorder', 'showcase.feature']);
   });
 });

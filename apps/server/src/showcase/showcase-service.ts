@@ -8,6 +8,7 @@ import { HttpError, notFound } from '../http/http-error';
 import { isUuid } from '../http/uuid';
 import { findLiveEntry } from '../publishing/entry-access';
 import { toEntryCard } from '../publishing/entry-views';
+import { showcaseMoves } from './showcase-moves';
 
 const { search: _search, ...cardColumns } = getTableColumns(entries);
 const curator = alias(users, 'curator');
@@ -90,17 +91,26 @@ export async function unfeature(db: Db, viewer: UserRow, entryId: string): Promi
   });
 }
 
-/** Sets the order: `entryIds` must name every featured entry once (409 when the showcase changed meanwhile). */
+/**
+ * Sets the order: `entryIds` must name every featured entry once (409 when the showcase changed
+ * meanwhile). The audit line says what moved: one entry and its places (target: that entry, so the
+ * item's own history shows it), or every entry that changed place; the same order writes no line.
+ */
 export async function reorder(db: Db, viewer: UserRow, entryIds: string[]): Promise<CuratedItem[]> {
-  const current = (await curatedShowcase(db)).map((i) => i.entry.id);
+  const curated = await curatedShowcase(db);
+  const current = curated.map((i) => i.entry.id);
   if (current.length !== entryIds.length || current.some((id) => !entryIds.includes(id))) {
     throw new HttpError(409, 'showcase_changed', 'The showcase changed while you were ordering it (someone added or removed a bar). Reload and order it again.');
   }
+  const moves = showcaseMoves(current, entryIds, new Map(curated.map((i) => [i.entry.id, i.entry.title])));
+  if (moves.length === 0) return curated;
   await db.transaction(async (tx) => {
     for (const [position, entryId] of entryIds.entries()) {
       await tx.update(showcaseItems).set({ position, updatedAt: sql`now()` }).where(eq(showcaseItems.entryId, entryId));
     }
-    await recordAudit(tx, { actor: viewer, action: 'showcase.reorder', target: { kind: 'showcase', id: null, label: 'the showcase' }, details: { order: entryIds, before: current } });
+    const [one] = moves;
+    const target = moves.length === 1 ? { kind: 'entry' as const, id: one.entryId, label: one.title } : { kind: 'showcase' as const, id: null, label: 'the showcase' };
+    await recordAudit(tx, { actor: viewer, action: 'showcase.reorder', target, details: { moves, order: entryIds, before: current } });
   });
   return curatedShowcase(db);
 }
