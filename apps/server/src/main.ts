@@ -18,6 +18,7 @@ import { NotifyGateway } from './notifications/notify-gateway';
 import { DIGEST_CHECK_MS, sendDueDigests } from './notifications/digests';
 import { ModerationGateway } from './moderation/moderation-gateway';
 import { VoteGateway } from './votes/vote-gateway';
+import { VoteGateway } from './votes/vote-gateway';
 // Several instances (REDIS_URL): socket.io rooms, the co-editing relay and the rate-limit counters in Redis.
 import { createAdapter } from '@socket.io/redis-streams-adapter';
 import { openRedis } from './cluster/redis-connection';
@@ -55,6 +56,7 @@ async function main() {
   let notify: NotifyGateway | undefined;
   let moderation: ModerationGateway | undefined;
   let votes: VoteGateway | undefined;
+  let votes: VoteGateway | undefined;
   // Browsers may open the realtime sockets from these origins only (a page on another port of this host may not).
   const origins = allowedOrigins(config.publicUrl, config.extraOrigins);
   const notificationEvents = new NotificationEvents();
@@ -69,11 +71,13 @@ async function main() {
       notify?.disconnectUser(userId);
       moderation?.disconnectUser(userId);
       votes?.disconnectUser(userId);
+      votes?.disconnectUser(userId);
     },
     closeSessionSockets: (sessionId) => {
       gateway?.closeEverywhere({ sessionId }, CLOSE_CODES.unauthorized, 'signed out');
       notify?.disconnectSession(sessionId);
       moderation?.disconnectSession(sessionId);
+      votes?.disconnectSession(sessionId);
       votes?.disconnectSession(sessionId);
     },
     db: database.db,
@@ -100,6 +104,10 @@ async function main() {
   notify.attach(server);
   // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
   moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
+  // Live vote rankings, another namespace; votes past their closing time are closed (and members told) every minute.
+  votes = new VoteGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, votes: (app.locals as AppLocals).votes, accessEvents });
+  const voteCloser = setInterval(() => void (app.locals as AppLocals).votes.closeDue().catch(console.error), 60_000);
+  voteCloser.unref();
   // Live vote rankings, another namespace; votes past their closing time are closed (and members told) every minute.
   votes = new VoteGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, votes: (app.locals as AppLocals).votes, accessEvents });
   const voteCloser = setInterval(() => void (app.locals as AppLocals).votes.closeDue().catch(console.error), 60_000);
@@ -137,12 +145,14 @@ async function main() {
       process.exit(1);
     }, SHUTDOWN_DEADLINE_MS).unref();
     clearInterval(digests);
+    clearInterval(voteCloser);
     clearInterval(sweeps);
     clearInterval(voteCloser);
     const httpClosed = closeHttpServer(server, HTTP_DRAIN_MS);
     notify?.io.engine.close(); // transports closed, so socket.io clients reconnect (a server-side disconnect would be final)
     await gateway?.drain(CLOSE_CODES.goingAway, 'server going away');
     moderation?.close();
+    votes?.close();
     votes?.close();
     notify?.close();
     await gateway?.close();
