@@ -69,7 +69,7 @@ export function webAppRouter(distDir: string): Router {
     const chosen = negotiate(req, res, 'index.html');
     const encoding = res.locals.encoding as Encoding | undefined;
     if (encoding) res.setHeader('Content-Encoding', encoding).type('html');
-    res.sendFile(path.join(distDir, chosen));
+    res.sendFile(chosen, { root: distDir }); // root: a dist folder under a dot folder (.tmp/web-…) is still served
   });
   return router;
 }
