@@ -79,8 +79,19 @@ export const adminUserSchema = z.object({
 });
 export type AdminUser = z.infer<typeof adminUserSchema>;
 
+/** Longest reason an admin may give for a change of role or suspension (it goes into the audit log). */
+export const ADMIN_REASON_MAX = 500;
+/**
+ * `PATCH /api/admin/users/:id`. `reason` goes into the audit log; `undo: true` marks a change that
+ * puts back what the admin's previous change did (the People page's Undo), and is audited as such.
+ */
 export const adminUpdateUserBody = z
-  .strictObject({ role: roleSchema.optional(), suspended: z.boolean({ error: 'must be true or false' }).optional() })
+  .strictObject({
+    role: roleSchema.optional(),
+    suspended: z.boolean({ error: 'must be true or false' }).optional(),
+    reason: z.string({ error: 'must be text' }).trim().max(ADMIN_REASON_MAX, `must be at most ${ADMIN_REASON_MAX} characters`).optional(),
+    undo: z.literal(true, { error: 'must be true when given' }).optional(),
+  })
   .refine((b) => b.role !== undefined || b.suspended !== undefined, { message: 'give role or suspended' });
 export type AdminUpdateUserBody = z.input<typeof adminUpdateUserBody>;
 

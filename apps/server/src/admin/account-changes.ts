@@ -21,6 +21,8 @@ export interface AccountChangeDeps {
 export interface AccountChangeContext {
   reason?: string;
   item?: { kind: AuditTargetKind; id: string; label: string };
+  /** The change puts back what the previous one did (the People page's Undo). */
+  undo?: boolean;
 }
 
 /**
@@ -28,7 +30,7 @@ export interface AccountChangeContext {
  * and the desk's "suspend the author". A suspension ends the account's sessions and sockets at
  * once; every change is written to the audit log in the same transaction as the change.
  */
-export async function changeAccount(deps: AccountChangeDeps, actor: UserRow, targetId: string, body: AdminUpdateUserBody, context: AccountChangeContext = {}): Promise<UserRow> {
+export async function changeAccount(deps: AccountChangeDeps, actor: UserRow, targetId: string, body: Pick<AdminUpdateUserBody, 'role' | 'suspended'>, context: AccountChangeContext = {}): Promise<UserRow> {
   const target = await findUserById(deps.db, targetId);
   if (!target) throw notFound('user');
   // An admin cannot lock themselves out: another admin must do it.
@@ -58,7 +60,7 @@ async function auditChanges(db: Db, actor: UserRow, before: UserRow, after: User
     target: { kind: 'user' as const, id: after.id, label: after.displayName },
     subject: { id: after.id, displayName: after.displayName },
     reason: context.reason,
-    details: context.item ? { item: context.item } : {},
+    details: { ...(context.item ? { item: context.item } : {}), ...(context.undo ? { undo: true } : {}) },
   };
   if (before.role !== after.role) await recordAudit(db, { ...base, action: 'user.role', details: { ...base.details, from: before.role, to: after.role } });
   if (!before.suspendedAt && after.suspendedAt) await recordAudit(db, { ...base, action: 'user.suspend' });

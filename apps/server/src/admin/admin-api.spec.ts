@@ -60,5 +60,23 @@ describe.each(drivers)('admin API on %s', (driver) => {
     expect((await admin.patch('/api/admin/users/not-a-uuid', { role: 'member' })).status).toBe(404);
     const me = (await admin.get('/api/auth/me')).body.id;
     expect((await admin.patch(`/api/admin/users/${me}`, { suspended: true })).status).toBe(409);
+    const long = await admin.patch(`/api/admin/users/${targetId}`, { role: 'moderator', reason: 'x'.repeat(501) });
+    expect(long.status).toBe(400);
+    expect(long.body.error.fields.reason).toBe('must be at most 500 characters');
+    expect((await admin.patch(`/api/admin/users/${targetId}`, { reason: 'no change given' })).status).toBe(400);
+    expect((await admin.patch(`/api/admin/users/${targetId}`, { role: 'moderator', undo: false })).body.error.fields.undo).toMatch(/must be true/);
+    expect((await admin.get('/api/admin/users')).body.find((u: { id: string }) => u.id === targetId).role).toBe('member'); // nothing half-saved
+  });
+
+  it('writes the reason of a role change into the audit log, and its undo as an undo', async () => {
+    const admin = await clientAs('admin');
+    expect((await admin.patch(`/api/admin/users/${targetId}`, { role: 'admin', reason: '  Runs the club server now  ' })).status).toBe(200);
+    expect((await admin.patch(`/api/admin/users/${targetId}`, { role: 'member', reason: 'Undo', undo: true })).body.role).toBe('member');
+    const lines = (await admin.get(`/api/moderation/audit?item=${targetId}`)).body.items;
+    expect(lines).toMatchObject([
+      { action: 'user.role', reason: 'Undo', details: { from: 'admin', to: 'member', undo: true } },
+      { action: 'user.role', reason: 'Runs the club server now', details: { from: 'member', to: 'admin' } },
+    ]);
+    expect(lines[1].details).not.toHaveProperty('undo');
   });
 });

@@ -25,8 +25,8 @@ export function adminRouter(deps: AccountChangeDeps): Router {
     res.json(rows.map(toAdminUser));
   });
   router.patch('/users/:id', async (req, res) => {
-    const body = parseBody(adminUpdateUserBody, req.body);
-    res.json(toAdminUser(await changeAccount(deps, req.user!, req.params.id as string, body)));
+    const { reason, undo, ...change } = parseBody(adminUpdateUserBody, req.body);
+    res.json(toAdminUser(await changeAccount(deps, req.user!, req.params.id as string, change, { reason, undo })));
   });
   return router;
 }
