@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { openApiDocument, ROUTES } from './openapi-document';
 import { COMMUNITY_ROUTES } from './community-routes';
 import { MODERATION_ROUTES } from './moderation-routes';
+import { RACK_ROUTES } from './rack-routes';
 
 /** Every `router.<method>('…')` in the server's routers, with the mount point each router has in app.ts. */
 function routesInCode(): string[] {
@@ -13,6 +14,8 @@ function routesInCode(): string[] {
     'dev/mailbox-router.ts': '/api/dev',
     'designs/designs-router.ts': '/api/designs',
     'boards/boards-router.ts': '/api/boards',
+    'rack/rack-router.ts': '/api/rack',
+    'rack/sweeps-router.ts': '/api/rack/sweeps',
   };
   const found: string[] = [];
   const src = path.join(import.meta.dirname, '..');
@@ -39,7 +42,7 @@ describe('the OpenAPI document', () => {
   });
 
   it('documents every route the routers declare', () => {
-    const documented = new Set([...ROUTES, ...COMMUNITY_ROUTES, ...MODERATION_ROUTES].map((r) => `${r.method} ${r.path}`));
+    const documented = new Set([...ROUTES, ...COMMUNITY_ROUTES, ...MODERATION_ROUTES, ...RACK_ROUTES].map((r) => `${r.method} ${r.path}`));
     for (const route of routesInCode()) expect(documented, route).toContain(route);
   });
 });
