@@ -26,10 +26,10 @@ describe('diffDesigns', () => {
     });
     expect(texts(EXAMPLE_DESIGN, after)).toEqual([
       'Lobes: 24 → 36',
-      'Wave: sine → pointed',
+      'Wave: Sine → Pointed',
       'Cutter diameter: 4.7625 mm → 6 mm',
-      'Material: A2 tool steel → brass',
-      'Phase schedule: barleycorn (alternate half-period) → basket weave (ramp of 6 steps)',
+      'Material: A2 tool steel → Brass',
+      'Phase schedule: Barleycorn (alternate half-period) → Basket weave (ramp of 6 steps)',
       'V-cutter included angle: 120° → 90°',
       "Surface speed: material's preset → 30 m/min",
     ]);
@@ -55,7 +55,7 @@ describe('diffDesigns', () => {
     });
     expect(texts(EXAMPLE_DESIGN, after)).toEqual([
       'Rosette layers: 1 → 2',
-      'Layer 2: none → 3 lobes, sine, 0.5 mm peak to valley',
+      'Layer 2: none → 3 lobes, Sine, 0.5 mm peak to valley',
       'Rubber: round, 1 mm radius → flat, 5 mm wide',
     ]);
   });

@@ -1,4 +1,5 @@
-import { MM_PER_INCH, type Design, type MaterialId, type PhaseSchedule, type RosetteLayer, type Rubber, type Units, type Wave } from './design';
+import { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from './design-labels';
+import { MM_PER_INCH, type Design, type PhaseSchedule, type RosetteLayer, type Rubber, type Units, type Wave } from './design';
 
 /** One difference between two design files, worded for turners: `text` is "Lobes: 24 → 36". */
 export interface DesignChange {
@@ -11,16 +12,6 @@ export interface DesignChange {
   text: string;
 }
 
-const WAVE_LABELS: Record<Wave['shape'], string> = {
-  sine: 'sine',
-  pointed: 'pointed',
-  scallop: 'scalloped',
-  flat: 'flat-topped',
-  eccentric: 'eccentric circle',
-  fourier: 'Fourier series',
-  measured: 'measured',
-};
-const MATERIAL_LABELS: Record<MaterialId, string> = { acrylic: 'acrylic', brass: 'brass', a2: 'A2 tool steel', custom: 'custom material' };
 const UNIT_LABELS: Record<Units, string> = { mm: 'millimetres', in: 'inches' };
 
 /** A number to at most 4 decimals, without trailing zeros: 4.7625, 6, 0.003. */
@@ -55,26 +46,26 @@ class ChangeList {
 }
 
 const waveText = (w: Wave): string => {
-  if (w.shape === 'flat') return `flat-topped, clipped at ${formatNumber(w.clip)}`;
-  if (w.shape === 'fourier') return `Fourier series of ${w.terms.length} terms`;
-  if (w.shape === 'measured') return `measured, ${w.points.length} readings`;
-  return WAVE_LABELS[w.shape];
+  if (w.shape === 'flat') return `${WAVE_NAMES.flat}, clipped at ${formatNumber(w.clip)}`;
+  if (w.shape === 'fourier') return `${WAVE_NAMES.fourier} of ${w.terms.length} terms`;
+  if (w.shape === 'measured') return `${WAVE_NAMES.measured}, ${w.points.length} readings`;
+  return WAVE_NAMES[w.shape];
 };
 
 const scheduleText = (s: PhaseSchedule): string => {
   switch (s.kind) {
     case 'none':
-      return 'none (plain lines)';
+      return `${SCHEDULE_NAMES.none} (every line in phase)`;
     case 'alternate':
-      return 'barleycorn (alternate half-period)';
+      return `${SCHEDULE_NAMES.alternate} (alternate half-period)`;
     case 'ramp':
-      return `basket weave (ramp of ${s.steps} steps)`;
+      return `${SCHEDULE_NAMES.ramp} (ramp of ${s.steps} steps)`;
     case 'sine':
-      return `moiré (sinusoidal, period ${formatNumber(s.period)} lines, depth ${formatNumber(s.depth)})`;
+      return `${SCHEDULE_NAMES.sine} (sinusoidal, period ${formatNumber(s.period)} lines, depth ${formatNumber(s.depth)})`;
     case 'twist':
-      return `twist (${formatNumber(s.step)} of a period per line)`;
+      return `${SCHEDULE_NAMES.twist} (${formatNumber(s.step)} of a period per line)`;
     case 'list':
-      return `list of ${s.phases.length} phases`;
+      return `${SCHEDULE_NAMES.list} of ${s.phases.length} phases`;
   }
 };
 
@@ -144,7 +135,7 @@ export function diffDesigns(before: Design, after: Design): DesignChange[] {
   list.plain('cutter.flutes', 'Cutter flutes', (d) => d.cutter.flutes);
   list.length('bar.length', 'Bar length', (d) => d.bar.length);
   list.length('bar.thickness', 'Bar thickness', (d) => d.bar.thickness);
-  list.plain('bar.material', 'Material', (d) => d.bar.material, (m) => MATERIAL_LABELS[m]);
+  list.plain('bar.material', 'Material', (d) => d.bar.material, (m) => MATERIAL_NAMES[m]);
   list.length('follower.radius', 'Follower radius', (d) => d.follower.radius);
   studyChanges(list, before, after);
   list.length('plan.stepOver', 'Step-over per pass', (d) => d.plan.stepOver);

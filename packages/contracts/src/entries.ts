@@ -1,5 +1,6 @@
 import * as z from 'zod';
-import { MATERIALS, WAVE_SHAPES, type Design, type MaterialId, type WaveShape } from './design';
+import { MATERIALS, WAVE_SHAPES, type Design, type MaterialId, type ScheduleKind, type WaveShape } from './design';
+import { SCHEDULE_KINDS } from './design-labels';
 
 /**
  * Published entries: a bar design made public as a series of immutable revisions.
@@ -108,6 +109,8 @@ export interface EntryCard extends EntryFacts {
   commentCount: number;
   /** Relative URL of the latest revision's line-study thumbnail (SVG). */
   thumbnailUrl: string;
+  /** The latest revision's phase schedule (Explore's cards and table show it; other lists may leave it out). */
+  schedule?: ScheduleKind;
 }
 
 /** One immutable revision, with its design file. */
@@ -152,7 +155,8 @@ export interface EntryDetail extends EntryCard {
   };
 }
 
-export const EXPLORE_SORTS = ['top', 'newest', 'remixed', 'discussed', 'relevance'] as const;
+/** `schedule`: by phase schedule in SCHEDULE_KINDS order (plain first), newest first within one. */
+export const EXPLORE_SORTS = ['top', 'newest', 'remixed', 'discussed', 'schedule', 'relevance'] as const;
 export type ExploreSort = (typeof EXPLORE_SORTS)[number];
 export const EXPLORE_PAGE_SIZE_MAX = 60;
 export const EXPLORE_PAGE_SIZE_DEFAULT = 24;
@@ -177,6 +181,8 @@ export const exploreQuery = z
     lobes: intParam(1, 360).optional(),
     wave: z.enum(WAVE_SHAPES as [WaveShape, ...WaveShape[]], { error: `must be one of ${WAVE_SHAPES.join(', ')}` }).optional(),
     material: z.enum(MATERIALS, { error: `must be one of ${MATERIALS.join(', ')}` }).optional(),
+    /** The latest revision's phase schedule (plain, barleycorn, basket weave, moiré, twist, a list). */
+    schedule: z.enum(SCHEDULE_KINDS, { error: `must be one of ${SCHEDULE_KINDS.join(', ')}` }).optional(),
     /** Cutter diameter range in millimetres, inclusive. */
     cutterMin: mmParam.optional(),
     cutterMax: mmParam.optional(),

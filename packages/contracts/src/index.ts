@@ -1,4 +1,5 @@
 export * from './design';
+export * from './design-labels';
 export * from './api-error';
 export * from './auth';
 export * from './boards';

@@ -64,6 +64,16 @@ describe.each(drivers)('Explore on %s', (driver) => {
     expect(await titles('material=a2&wave=sine')).toEqual(['Plain sine 24']);
   });
 
+  it('filters and sorts by the latest revision\'s phase schedule, and names it on each card', async () => {
+    expect(await titles('schedule=ramp')).toEqual(['Basket weave 18']);
+    expect(await titles('schedule=alternate')).toEqual(['Barleycorn 30', 'Plain sine 24']);
+    expect(await titles('schedule=sine')).toEqual([]);
+    // Barleycorn (alternate half-period) comes before basket weave (ramp); newest first within one.
+    expect(await titles('sort=schedule')).toEqual(['Barleycorn 30', 'Plain sine 24', 'Basket weave 18']);
+    const page = (await new Client(server.app).get('/api/entries?sort=schedule')).body;
+    expect(page.items.map((e: { schedule: string }) => e.schedule)).toEqual(['alternate', 'alternate', 'ramp']);
+  });
+
   it('searches title, description and tags with stemming', async () => {
     expect(await titles('q=weaves')).toEqual(['Basket weave 18']);
     expect(await titles('q=brass')).toEqual(['Basket weave 18']);
@@ -85,9 +95,9 @@ describe.each(drivers)('Explore on %s', (driver) => {
   });
 
   it('refuses bad parameters with the field named', async () => {
-    const res = await new Client(server.app).get('/api/entries?pageSize=61&lobes=x&sort=best&wave=square&cutterMin=5&cutterMax=2&colour=red');
+    const res = await new Client(server.app).get('/api/entries?pageSize=61&lobes=x&sort=best&wave=square&schedule=zigzag&cutterMin=5&cutterMax=2&colour=red');
     expect(res.status).toBe(400);
-    expect(Object.keys(res.body.error.fields).sort()).toEqual(['colour', 'lobes', 'pageSize', 'sort', 'wave']);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['colour', 'lobes', 'pageSize', 'schedule', 'sort', 'wave']);
     expect((await new Client(server.app).get('/api/entries?cutterMin=5&cutterMax=2')).body.error.fields.cutterMax).toMatch(/cutterMin/);
     expect((await new Client(server.app).get('/api/entries?sort=relevance')).body.error.fields.sort).toMatch(/needs a search/);
   });

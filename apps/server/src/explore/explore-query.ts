@@ -1,7 +1,7 @@
 import { and, arrayContains, count, eq, getTableColumns, gte, isNull, lte, sql, type SQL } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
-import type { ExplorePage, ExploreQuery, ExploreSort } from '@barwright/contracts';
-import { entries, users } from '../../../../db/schema';
+import { SCHEDULE_KINDS, type ExplorePage, type ExploreQuery, type ExploreSort, type ScheduleKind } from '@barwright/contracts';
+import { entries, entryRevisions, users } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { toEntryCard } from '../publishing/entry-views';
 
@@ -13,12 +13,22 @@ const { search: _search, ...cardColumns } = getTableColumns(entries);
 
 const tsQuery = (q: string) => sql`websearch_to_tsquery('english', ${q})`;
 
+/**
+ * The latest revision's phase schedule, read from its design file (the entries table keeps no copy;
+ * the revision is found through the unique (entry, number) index).
+ */
+const scheduleKind = sql<ScheduleKind>`(SELECT ${entryRevisions.design} -> 'study' -> 'schedule' ->> 'kind' FROM ${entryRevisions}
+  WHERE ${entryRevisions.entryId} = ${entries.id} AND ${entryRevisions.number} = ${entries.latestRevision})`;
+/** Plain first, then barleycorn, basket weave, moiré, twist, a list: the order of SCHEDULE_KINDS. */
+const scheduleRank = sql`array_position(ARRAY[${sql.join(SCHEDULE_KINDS.map((k) => sql`${k}`), sql`, `)}]::text[], ${scheduleKind})`;
+
 /** The WHERE of a query: listed entries (not hidden, not deleted) matching every filter given. */
 export function exploreConditions(q: ExploreQuery): SQL {
   const where: SQL[] = [isNull(entries.deletedAt), isNull(entries.hiddenAt)];
   if (q.lobes !== undefined) where.push(eq(entries.lobes, q.lobes));
   if (q.wave) where.push(eq(entries.wave, q.wave));
   if (q.material) where.push(eq(entries.material, q.material));
+  if (q.schedule) where.push(sql`${scheduleKind} = ${q.schedule}`);
   if (q.cutterMin !== undefined) where.push(gte(entries.cutterDiameterMm, q.cutterMin - MM_SLACK));
   if (q.cutterMax !== undefined) where.push(lte(entries.cutterDiameterMm, q.cutterMax + MM_SLACK));
   if (q.tags?.length) where.push(arrayContains(entries.tags, q.tags));
@@ -46,6 +56,8 @@ function orderFor(sort: ExploreSort, q: ExploreQuery): SQL[] {
       return [descending(entries.remixCount), ...tail];
     case 'discussed':
       return [descending(entries.commentCount), ...tail];
+    case 'schedule':
+      return [sql`${scheduleRank} ASC NULLS LAST`, ...tail];
     case 'relevance':
       return [sql`ts_rank(${entries.search}, ${tsQuery(q.q ?? '')}) DESC`, ...tail];
     case 'newest':
@@ -58,7 +70,7 @@ export const sortOf = (q: ExploreQuery): ExploreSort => q.sort ?? (q.q ? 'releva
 /** The query of one page's rows (exposed so the benchmark can EXPLAIN it). */
 export function exploreItemsQuery(db: Db, q: ExploreQuery) {
   return db
-    .select({ entry: cardColumns, authorName: users.displayName })
+    .select({ entry: cardColumns, authorName: users.displayName, schedule: scheduleKind })
     .from(entries)
     .innerJoin(users, eq(users.id, entries.authorId))
     .where(exploreConditions(q))
@@ -72,7 +84,7 @@ export async function explorePage(db: Db, q: ExploreQuery): Promise<ExplorePage>
   const rows = await exploreItemsQuery(db, q);
   const [{ total }] = await db.select({ total: count() }).from(entries).where(exploreConditions(q));
   return {
-    items: rows.map((r) => toEntryCard(r.entry, { id: r.entry.authorId, displayName: r.authorName })),
+    items: rows.map((r) => ({ ...toEntryCard(r.entry, { id: r.entry.authorId, displayName: r.authorName }), ...(r.schedule ? { schedule: r.schedule } : {}) })),
     total,
     page: q.page,
     pageSize: q.pageSize,

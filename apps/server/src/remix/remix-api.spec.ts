@@ -63,7 +63,7 @@ describe.each(drivers)('remix and lineage on %s', (driver) => {
 
     const changes = (await new Client(server.app).get(`/api/entries/${child.entryId}/changes`)).body;
     expect(changes.changes.map((c: { text: string }) => c.text)).toEqual(['Lobes: 24 → 36', 'Cutter diameter: 4.7625 mm → 6 mm']);
-    expect((await new Client(server.app).get(`/api/entries/${grandchild.entryId}/changes`)).body.changes.map((c: { text: string }) => c.text)).toEqual(['Material: A2 tool steel → brass']);
+    expect((await new Client(server.app).get(`/api/entries/${grandchild.entryId}/changes`)).body.changes.map((c: { text: string }) => c.text)).toEqual(['Material: A2 tool steel → Brass']);
     expect((await new Client(server.app).get(`/api/entries/${original}/changes`)).body).toEqual({ parent: null, revision: 1, changes: [] });
 
     const lineage = (await new Client(server.app).get(`/api/entries/${child.entryId}/lineage`)).body;
