@@ -4,6 +4,7 @@ import type { Db } from '../apps/server/src/database/database';
 import { insertUser } from '../apps/server/src/auth/users';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-scenario';
 import { seedDemoCommunity } from './seed-demo-community';
+import { seedDemoRacks } from './demo-racks';
 
 /** Seeds the demo scenario into an empty database; returns false (and does nothing) when users exist. */
 export async function seedDemoScenario(db: Db): Promise<boolean> {
@@ -13,5 +14,6 @@ export async function seedDemoScenario(db: Db): Promise<boolean> {
     await insertUser(db, { ...account, password: DEMO_PASSWORD, verified: true });
   }
   await seedDemoCommunity(db);
+  await seedDemoRacks(db);
   return true;
 }
