@@ -1,53 +1,18 @@
 /**
- * Engine benchmark: `npm run bench -w packages/engine`. Prints the figures the issue asks for:
- * profile + follower of a 150 mm bar at 0.01 mm beside clipper-lib computing the same envelopes,
- * a line study of 200 lines, and 500 different designs (profile + study thumbnail data) on one core.
- * Times are medians of repeated runs (the machine may be shared), after a warm-up.
+ * Engine benchmark: `npm run bench -w packages/engine`. Prints: computeProfile by bar length (it
+ * should grow linearly), the engine's envelopes beside clipper-lib's offsetting measured fairly,
+ * the lit surface (height field and reshading), a 3-layer compound against the brute-force
+ * reference, a line study of 200 lines, and 500 different designs on one core.
+ * Times are CPU time (process.cpuUsage), medians of warm runs: the machine may be shared.
  */
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
+import * as engine from '../src/index';
 import { computeBarSamples, computeLineStudy, computeProfile, rosetteRepeats } from '../src/index';
 import { bruteForceProfile, referenceAt } from '../src/testing/brute-force-reference';
-import { clipperEnvelopes, topHeights } from '../src/testing/clipper-envelope';
-
-function median(runs: number, work: () => unknown): { median: number; best: number } {
-  for (let i = 0; i < Math.min(50, runs); i++) work();
-  const times: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t = performance.now();
-    work();
-    times.push(performance.now() - t);
-  }
-  times.sort((a, b) => a - b);
-  return { median: times[Math.floor(runs / 2)], best: times[0] };
-}
-
-const ms = (v: number) => `${v.toFixed(2)} ms`;
-
-function profileFigures(): void {
-  const samples = computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 });
-  const profile = median(400, () => computeProfile(EXAMPLE_DESIGN, { step: 0.01 }));
-  const typed = median(400, () => computeBarSamples(EXAMPLE_DESIGN, { step: 0.01 }));
-  console.log(`profile + follower, 150 mm bar at 0.01 mm (${samples.x.length} samples, cutter Ø ${EXAMPLE_DESIGN.cutter.diameter}):`);
-  console.log(`  computeProfile       median ${ms(profile.median)}, best ${ms(profile.best)}   (target < 5 ms)`);
-  console.log(`  typed arrays only    median ${ms(typed.median)}, best ${ms(typed.best)}`);
-
-  // The same envelopes with clipper-lib: the region below the cutter path offset by −rc, then +rf,
-  // arcs to 0.1 µm (our envelopes agree with Clipper's to about that).
-  const rc = EXAMPLE_DESIGN.cutter.diameter / 2;
-  const rf = EXAMPLE_DESIGN.follower.radius;
-  const t = performance.now();
-  const clipper = clipperEnvelopes(samples.x, samples.cutter, rc, rf, { arcTolerance: 1e-4 });
-  const clipperMs = performance.now() - t;
-  const follower = topHeights(clipper.follower, clipper.scale, samples.x);
-  const bar = topHeights(clipper.bar, clipper.scale, samples.x);
-  let worst = 0;
-  const margin = Math.ceil((2 * (rc + rf)) / samples.grid.step);
-  for (let i = margin; i < samples.x.length - margin; i++) {
-    worst = Math.max(worst, Math.abs(follower[i] - samples.follower[i]), Math.abs(bar[i] - samples.bar[i]));
-  }
-  console.log(`  clipper-lib offsets  ${ms(clipperMs)} (one run)   → engine is ${(clipperMs / profile.median).toFixed(0)}× faster`);
-  console.log(`  largest difference from clipper-lib (bar edge and follower, away from the ends): ${(worst * 1000).toFixed(3)} µm`);
-}
+import { cpuMedian as median, ms } from './bench-timing';
+import { clipperFair } from './clipper-fair';
+import { litSurface } from './lit-surface';
+import { profileScaling } from './profile-scaling';
 
 /** A 3-layer coprime compound (24 + 7 + 11 lobes: one repeat a revolution) on the example's 150 mm bar. */
 const COMPOUND: Design = {
@@ -146,17 +111,14 @@ function sweepFigures(): void {
     return computeLineStudy(d, profile);
   };
   thumbnail(designs[0]);
-  const runs = [0, 1, 2].map(() => {
-    const t = performance.now();
-    for (const d of designs) thumbnail(d);
-    return performance.now() - t;
-  });
-  runs.sort((a, b) => a - b);
+  const runs = median(3, () => designs.forEach(thumbnail), 0);
   console.log(`500 different designs, profile + 30-line study thumbnail data, one core:`);
-  console.log(`  median ${ms(runs[1])}, best ${ms(runs[0])}   (target < 2000 ms)`);
+  console.log(`  median ${ms(runs.median)}, best ${ms(runs.best)}   (target < 2000 ms)`);
 }
 
-profileFigures();
+profileScaling(engine);
+litSurface();
+clipperFair();
 compoundFigures();
 studyFigures();
 sweepFigures();

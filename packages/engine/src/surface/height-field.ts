@@ -94,8 +94,8 @@ function finishField(dist2: Float32Array, facet: Uint16Array, f: { width: number
   const { width, height, s, depth, slope } = f;
   const cols = width * s;
   const pixelFacet = new Uint16Array(width * height);
-  let mixedPixels = new Uint32Array(1024);
-  let mixedFacets = new Uint16Array(1024 * s * s);
+  let mixedPixels = new Uint32Array(Math.max(1024, (width * height) >> 2)); // a quarter of the pixels is typical; grown when not
+  let mixedFacets = new Uint16Array(mixedPixels.length * s * s);
   let count = 0;
   for (let py = 0; py < height; py++) {
     for (let px = 0; px < width; px++) {
@@ -190,11 +190,23 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster): vo
   for (let c = c0; c <= c1; c++) {
     const x = g.x0 + (c + 0.5) * g.dx;
     const ex = x - ax;
-    // Across: −R ≤ ex·nx + (y − ay)·ny ≤ R; along: 0 ≤ ex·ux + (y − ay)·uy ≤ len.
-    let [ylo, yhi] = yRange(ny, ex * nx, -r, r);
-    const [tlo, thi] = yRange(uy, ex * ux, 0, len);
-    ylo = Math.max(ylo, tlo) + ay;
-    yhi = Math.min(yhi, thi) + ay;
+    // Across: −R ≤ ex·nx + (y − ay)·ny ≤ R; along: 0 ≤ ex·ux + (y − ay)·uy ≤ len (solved for y − ay, no arrays: this runs per column).
+    let ylo = -Infinity;
+    let yhi = Infinity;
+    if (Math.abs(ny) >= 1e-12) {
+      const p = (-r - ex * nx) / ny;
+      const q = (r - ex * nx) / ny;
+      ylo = p < q ? p : q;
+      yhi = p < q ? q : p;
+    } else if (Math.abs(ex * nx) > r) continue;
+    if (Math.abs(uy) >= 1e-12) {
+      const p = -ex * ux / uy;
+      const q = (len - ex * ux) / uy;
+      ylo = Math.max(ylo, p < q ? p : q);
+      yhi = Math.min(yhi, p < q ? q : p);
+    } else if (ex * ux < 0 || ex * ux > len) continue;
+    ylo += ay;
+    yhi += ay;
     if (!(ylo <= yhi)) continue;
     const r0 = Math.max(0, Math.ceil((g.y1 - yhi) / g.dy - 0.5));
     const r1 = Math.min(g.rows - 1, Math.floor((g.y1 - ylo) / g.dy - 0.5));
@@ -208,14 +220,6 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster): vo
       }
     }
   }
-}
-
-/** The y (relative) with lo ≤ a·y + b ≤ hi: an interval, everything, or nothing (NaN). */
-function yRange(a: number, b: number, lo: number, hi: number): [number, number] {
-  if (Math.abs(a) < 1e-12) return b >= lo && b <= hi ? [-Infinity, Infinity] : [NaN, NaN];
-  const p = (lo - b) / a;
-  const q = (hi - b) / a;
-  return p < q ? [p, q] : [q, p];
 }
 
 /**
