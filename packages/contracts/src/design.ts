@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { checkDesignComplexity } from './design-complexity';
+import { MM_PER_INCH } from './length-units';
 
 /**
  * The bar design file, format `barwright.design/1`.
@@ -12,7 +13,7 @@ import { checkDesignComplexity } from './design-complexity';
 export { COMPLEXITY_LIMITS, designComplexity, type DesignComplexity } from './design-complexity';
 
 export const DESIGN_FORMAT = 'barwright.design/1';
-export const MM_PER_INCH = 25.4;
+export { MM_PER_INCH };
 
 export const unitsSchema = z.enum(['mm', 'in']);
 export type Units = z.infer<typeof unitsSchema>;
