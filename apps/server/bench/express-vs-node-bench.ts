@@ -2,12 +2,15 @@
  * Express against bare node:http, in the same run: `/api/health` and an Explore page (the same
  * query code, the same JSON body), each path loaded with autocannon in turns (Express, node:http,
  * Express, …), the median of the rounds reported with the ratio. The servers run in a child
- * process of their own so the load generator does not share their event loop.
+ * process of their own so the load generator does not share their event loop. Two ratios: requests
+ * per second (what a client sees; on a machine shared with other work it swings from run to run) and
+ * the server process's CPU time per request (user + system, steadier under load: the throughput one
+ * core would give).
  * Run with `node --import tsx apps/server/bench/express-vs-node-bench.ts` (part of `npm run bench -w apps/server`).
  * Target: Express at 50 % or more of node:http on both paths.
  */
 import http from 'node:http';
-import { spawn } from 'node:child_process';
+import { spawn, type ChildProcess } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
 import { exploreQuery, type Health } from '@barwright/contracts';
@@ -50,20 +53,36 @@ async function serve() {
   const port = (s: http.Server) => (s.address() as { port: number }).port;
   console.log(JSON.stringify({ express: port(express), bare: port(bare) }));
   for (const signal of ['SIGTERM', 'SIGINT']) process.on(signal, () => process.exit(0)); // exits normally, so --cpu-prof writes its profile
+  process.on('message', () => process.send!(process.cpuUsage()));
 }
 
-async function load(url: string): Promise<{ rps: number; bytes: number; errors: number }> {
+/** The server process's CPU time so far (µs), asked over IPC. */
+function serverCpu(child: ChildProcess): Promise<number> {
+  return new Promise((resolve) => {
+    child.once('message', (usage) => resolve((usage as NodeJS.CpuUsage).user + (usage as NodeJS.CpuUsage).system));
+    child.send('cpu');
+  });
+}
+
+async function load(child: ChildProcess, url: string): Promise<{ rps: number; cpuUs: number; bytes: number; errors: number }> {
+  const before = await serverCpu(child);
   const result = await autocannon({ url, connections: CONNECTIONS, duration: SECONDS });
-  return { rps: result.requests.average, bytes: result.throughput.average / Math.max(1, result.requests.average), errors: result.errors + result.non2xx };
+  const cpu = (await serverCpu(child)) - before;
+  return {
+    rps: result.requests.average,
+    cpuUs: cpu / Math.max(1, result.requests.total),
+    bytes: result.throughput.average / Math.max(1, result.requests.average),
+    errors: result.errors + result.non2xx,
+  };
 }
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 async function main() {
-  const child = spawn(process.execPath, ['--import', 'tsx', fileURLToPath(import.meta.url), '--serve'], { stdio: ['ignore', 'pipe', 'inherit'] });
+  const child = spawn(process.execPath, ['--import', 'tsx', fileURLToPath(import.meta.url), '--serve'], { stdio: ['ignore', 'pipe', 'inherit', 'ipc'] });
   const ports = await new Promise<{ express: number; bare: number }>((resolve, reject) => {
     let out = '';
-    child.stdout.on('data', (chunk: Buffer) => {
+    child.stdout!.on('data', (chunk: Buffer) => {
       out += chunk;
       const line = out.split('\n').find((l) => l.startsWith('{'));
       if (line) resolve(JSON.parse(line));
@@ -75,23 +94,29 @@ async function main() {
     console.log(`Express against bare node:http, ${CONNECTIONS} connections, ${SECONDS} s a run, ${ROUNDS} rounds in turns, medians:`);
     for (const path of PATHS) {
       const rps = { express: [] as number[], bare: [] as number[] };
+      const cpu = { express: [] as number[], bare: [] as number[] };
       let bytes = { express: 0, bare: 0 };
       for (let round = 0; round < ROUNDS; round++) {
         for (const side of round % 2 ? (['bare', 'express'] as const) : (['express', 'bare'] as const)) {
-          const r = await load(`http://127.0.0.1:${ports[side]}${path}`);
+          const r = await load(child, `http://127.0.0.1:${ports[side]}${path}`);
           if (r.errors) {
             console.error(`${side} ${path}: ${r.errors} errors or non-2xx answers`);
             failed = true;
           }
           rps[side].push(r.rps);
+          cpu[side].push(r.cpuUs);
           bytes = { ...bytes, [side]: r.bytes };
         }
       }
       const ratio = median(rps.express) / median(rps.bare);
+      const cpuRatio = median(cpu.bare) / median(cpu.express);
+      const list = (xs: number[]) => xs.map((x) => x.toFixed(0)).join(', ');
       console.log(
-        `${path.padEnd(30)} Express ${median(rps.express).toFixed(0).padStart(6)} req/s (${rps.express.map((x) => x.toFixed(0)).join(', ')}), ` +
-          `node:http ${median(rps.bare).toFixed(0).padStart(6)} req/s (${rps.bare.map((x) => x.toFixed(0)).join(', ')}); ` +
-          `ratio ${(ratio * 100).toFixed(0)} % (target ≥ ${TARGET * 100} %: ${ratio >= TARGET ? 'met' : 'not met'}); bytes a response ${bytes.express.toFixed(0)} / ${bytes.bare.toFixed(0)}`,
+        `${path}\n  requests/s: Express ${median(rps.express).toFixed(0)} (${list(rps.express)}), node:http ${median(rps.bare).toFixed(0)} (${list(rps.bare)}): ` +
+          `${(ratio * 100).toFixed(0)} % (target ≥ ${TARGET * 100} %: ${ratio >= TARGET ? 'met' : 'not met'})\n` +
+          `  CPU µs a request: Express ${median(cpu.express).toFixed(0)} (${list(cpu.express)}), node:http ${median(cpu.bare).toFixed(0)} (${list(cpu.bare)}): ` +
+          `Express at ${(cpuRatio * 100).toFixed(0)} % of node:http's throughput a core (target ≥ ${TARGET * 100} %: ${cpuRatio >= TARGET ? 'met' : 'not met'})\n` +
+          `  bytes a response: Express ${bytes.express.toFixed(0)}, node:http ${bytes.bare.toFixed(0)}`,
       );
     }
   } finally {
