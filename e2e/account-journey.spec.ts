@@ -51,6 +51,8 @@ test('a visitor signs up, verifies by mail, signs in; the admin makes them a mod
   await shoot(page, 'people');
   await row.getByTestId('people-role-select').click();
   await page.getByRole('option', { name: /moderator/i }).click();
+  await page.getByTestId('account-change-reason').fill('Helps with the reports queue');
+  await page.getByTestId('account-change-confirm').click();
   await expect(row.getByTestId('people-role-select')).toContainText(/moderator/i);
   await signOut(page);
 

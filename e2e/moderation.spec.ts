@@ -119,6 +119,10 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await saskia.page.getByTestId('comment-new-body').fill(SPAM);
   await saskia.page.getByTestId('comment-new-submit').click();
   await expect(saskia.page.getByTestId('comment').filter({ hasText: SPAM })).toBeVisible();
+  // Saskia heard that her moiré was featured, with the curator's note.
+  await saskia.page.goto('/notifications');
+  await expect(saskia.page.getByTestId('notification').filter({ hasText: `Tobias Greenhalgh featured your bar “${MOIRE}” in the showcase` })).toBeVisible();
+  await saskia.page.goto(`/entries/${basket}`);
   await expect(saskia.page.getByTestId('comment').filter({ hasText: SPAM }).getByTestId('comment-report')).toHaveCount(0); // not one's own
   await ibrahim.page.goto(`/entries/${basket}`);
   const reported = ibrahim.page.getByTestId('comment').filter({ hasText: SPAM });
@@ -171,6 +175,10 @@ test('a moderator curates the showcase and hides a reported comment; members see
   const own = saskia.page.getByTestId('comment').filter({ hasText: SPAM });
   await expect(own.getByTestId('comment-hidden')).toContainText(HIDE_REASON);
   await shootFromTop(saskia.page, 'entry-hidden-comment-author');
+  // …and she was told, in the app (the bell) as well as by e-mail.
+  await saskia.page.goto('/notifications');
+  await expect(saskia.page.getByTestId('notification').filter({ hasText: `The moderators hid your comment on “${BASKET}”. Reason: ${HIDE_REASON}` })).toBeVisible();
+  await shootFromTop(saskia.page, 'notifications-moderation');
 
   // The audit log shows both: the featuring and the hiding, with who, what and why.
   await tobias.page.getByTestId('desk-tab-audit').click();
@@ -178,18 +186,92 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await expect(lines.filter({ hasText: `Tobias Greenhalgh hid comment on “${BASKET}” (by Saskia Penrose)` })).toContainText(HIDE_REASON);
   await expect(lines.filter({ hasText: `Tobias Greenhalgh featured ${BASKET}` })).toHaveCount(1);
   await expect(lines.filter({ hasText: `Tobias Greenhalgh featured ${MOIRE}` })).toHaveCount(1);
-  await expect(lines.filter({ hasText: 'Tobias Greenhalgh reordered the showcase' })).toHaveCount(3);
+  // Each reorder says what moved: the drag and the arrow up moved the basket weave to the top, the arrow down back.
+  await expect(lines.filter({ hasText: `Tobias Greenhalgh moved “${BASKET}” from place 2 to 1 in the showcase` })).toHaveCount(2);
+  await expect(lines.filter({ hasText: `Tobias Greenhalgh moved “${BASKET}” from place 1 to 2 in the showcase` })).toHaveCount(1);
   await shootFromTop(tobias.page, 'moderation-audit');
+  // One item's history, by its title: from a line, from the desk's case, and from the bar's own page.
+  await lines.filter({ hasText: `featured ${BASKET}` }).getByRole('button', { name: `Only lines about ${BASKET}` }).click();
+  await expect(tobias.page.getByTestId('audit-item-title')).toHaveText(`the bar “${BASKET}”`);
+  await expect(lines).toHaveCount(4); // featured, and moved three times
+  await shootFromTop(tobias.page, 'moderation-audit-item');
+  await tobias.page.getByTestId('audit-item-clear').click();
+  await expect(tobias.page.getByTestId('audit-item')).toHaveCount(0);
+  await tobias.page.getByTestId('desk-tab-hidden').click();
+  await tobias.page.getByTestId('case').filter({ hasText: SPAM }).getByTestId('case-audit').click();
+  await expect(tobias.page.getByTestId('audit-item-title')).toHaveText(`comment on “${BASKET}”`);
+  await expect(lines).toHaveCount(1);
+  await tobias.page.goto(`/entries/${moire}`);
+  await tobias.page.getByTestId('moderator-menu').click();
+  await tobias.page.getByTestId('moderator-menu-audit').click();
+  await expect(tobias.page.getByTestId('audit-item-title')).toHaveText(`the bar “${MOIRE}”`);
+  await expect(lines.filter({ hasText: `Tobias Greenhalgh featured ${MOIRE}` })).toHaveCount(1);
+  await tobias.page.getByTestId('desk-tab-audit').click();
   await tobias.page.getByTestId('audit-filter-action').click();
   await tobias.page.getByRole('option', { name: 'Hidden' }).click();
   await expect(tobias.page).toHaveURL(/action=item.hide/);
   await expect(lines).toHaveCount(1);
   await expect(tobias.page.getByTestId('audit-total')).toHaveText('1 entry match');
 
-  // A member does not reach the desk.
+  // A member does not reach the desk, and sees no moderation menu on a bar.
+  await ibrahim.page.goto(`/entries/${moire}`);
+  await expect(ibrahim.page.getByTestId('entry-title')).toHaveText(MOIRE);
+  await expect(ibrahim.page.getByTestId('moderator-menu')).toHaveCount(0);
   await ibrahim.page.goto('/moderation/reports');
   await expect(ibrahim.page).toHaveURL(/\/$/);
   expect((await ibrahim.page.request.get('/api/moderation/queue')).status()).toBe(403);
 
   for (const c of [tobias.context, saskia.context, ibrahim.context, visitor]) await c.close();
+});
+
+test('an admin changes a role only after confirming with a reason, can undo it, and finds both in the audit log', async ({ browser }) => {
+  test.setTimeout(120_000);
+  const odile = await memberPage(browser, 'odile@example.test'); // the admin
+  const page = odile.page;
+  await page.goto('/admin/people');
+  const row = page.getByTestId('people-row').filter({ hasText: 'ibrahim@example.test' });
+  await expect(row).toHaveCount(1);
+  // The intro names every role; the verification column says what it holds; no red button on every row.
+  for (const role of ['Members', 'Moderators', 'Admins']) await expect(page.locator('.bw-lede')).toContainText(role);
+  await expect(page.getByRole('columnheader', { name: 'E-mail verified' })).toBeVisible();
+  await expect(row.getByTestId('people-verified')).toHaveText('Yes');
+  await expect(page.getByTestId('people-suspend')).toHaveCount(0);
+  await shootFromTop(page, 'people');
+
+  // Choosing Admin asks first; cancelling leaves the role as it was.
+  await row.getByTestId('people-role-select').click();
+  await page.getByTestId('people-role-admin').click();
+  await expect(page.getByRole('dialog')).toContainText('Make Ibrahim Coldwell an admin?');
+  await page.getByTestId('account-change-cancel').click();
+  await expect(row.getByTestId('people-role-select')).toContainText('Member');
+
+  // Confirming needs a reason; then the change applies, and the snack bar offers to undo it.
+  await row.getByTestId('people-role-select').click();
+  await page.getByTestId('people-role-moderator').click();
+  await page.getByTestId('account-change-confirm').click();
+  await expect(page.getByText('The reason is required')).toBeVisible();
+  await page.getByTestId('account-change-reason').fill('Helps with the reports queue on weekends');
+  await shootDialog(page, 'people-role-dialog');
+  await page.getByTestId('account-change-confirm').click();
+  await expect(row.getByTestId('people-role-select')).toContainText('Moderator');
+  const snack = page.locator('mat-snack-bar-container');
+  await expect(snack).toContainText('Ibrahim Coldwell is now a moderator.');
+  await snack.getByRole('button', { name: 'Undo' }).click();
+  await expect(row.getByTestId('people-role-select')).toContainText('Member');
+  await expect(snack).toContainText('Undone: Ibrahim Coldwell is now a member.');
+
+  // Suspending lives in the row's menu, with its own confirmation and reason; here it is only opened.
+  await row.getByTestId('people-more').click();
+  await expect(page.getByTestId('people-suspend')).toBeVisible();
+  await shootDialog(page, 'people-row-menu');
+  // The menu leads to the account's history: the change with its reason, and the undo.
+  await page.getByTestId('people-history').click();
+  await expect(page.getByTestId('audit-item-title')).toHaveText('the account of Ibrahim Coldwell');
+  const lines = page.getByTestId('audit-line');
+  await expect(lines).toHaveCount(2);
+  await expect(lines.nth(0)).toContainText('Odile Farrant undid the role change of Ibrahim Coldwell: moderator → member');
+  await expect(lines.nth(1)).toContainText('Odile Farrant changed the role of Ibrahim Coldwell: member → moderator');
+  await expect(lines.nth(1).getByTestId('audit-reason')).toHaveText('“Helps with the reports queue on weekends”');
+  await shootFromTop(page, 'audit-account');
+  await odile.context.close();
 });

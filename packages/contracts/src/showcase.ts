@@ -30,6 +30,8 @@ export const showcaseOrderBody = z.strictObject({
     .array(z.uuid('must be entry ids'), { error: 'must be a list of entry ids' })
     .max(SHOWCASE_MAX, `takes at most ${SHOWCASE_MAX} ids`)
     .refine((ids) => new Set(ids).size === ids.length, 'must not name an entry twice'),
+  /** The entry the curator moved, when one was (a swap of neighbours reads either way; this says which the log names). */
+  moved: z.uuid('must be an entry id').optional(),
 });
 export type ShowcaseOrderBody = z.input<typeof showcaseOrderBody>;
 

@@ -22,8 +22,8 @@ export function curationRouter(deps: { db: Db; notifier: Pick<Notifier, 'notify'
     res.status(201).json(item satisfies CuratedItem);
   });
   router.put('/moderation/showcase/order', async (req, res) => {
-    const { entryIds } = parseBody(showcaseOrderBody, req.body);
-    res.json((await reorder(db, req.user!, entryIds)) satisfies CuratedItem[]);
+    const { entryIds, moved } = parseBody(showcaseOrderBody, req.body);
+    res.json((await reorder(db, req.user!, entryIds, moved)) satisfies CuratedItem[]);
   });
   router.patch('/moderation/showcase/:entryId', async (req, res) => {
     const { note } = parseBody(showcaseNoteBody, req.body);

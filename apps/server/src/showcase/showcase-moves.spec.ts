@@ -11,6 +11,10 @@ describe('showcase moves', () => {
 
   it('take a swap of neighbours as one move (either entry reads the same; the first is named)', () => {
     expect(showcaseMoves(['a', 'b', 'c'], ['b', 'a', 'c'], titles)).toEqual([{ entryId: 'b', title: 'Basket', from: 2, to: 1 }]);
+    // …unless the curator says which they moved: "move Sine 24 down".
+    expect(showcaseMoves(['a', 'b', 'c'], ['b', 'a', 'c'], titles, 'a')).toEqual([{ entryId: 'a', title: 'Sine 24', from: 1, to: 2 }]);
+    // A claim no single move bears out is not believed.
+    expect(showcaseMoves(['a', 'b', 'c', 'd'], ['c', 'a', 'b', 'd'], titles, 'a')).toEqual([{ entryId: 'c', title: 'Moiré', from: 3, to: 1 }]);
   });
 
   it('list every entry that changed place when no single move explains the new order, and nothing when it is the same', () => {

@@ -96,13 +96,13 @@ export async function unfeature(db: Db, viewer: UserRow, entryId: string): Promi
  * meanwhile). The audit line says what moved: one entry and its places (target: that entry, so the
  * item's own history shows it), or every entry that changed place; the same order writes no line.
  */
-export async function reorder(db: Db, viewer: UserRow, entryIds: string[]): Promise<CuratedItem[]> {
+export async function reorder(db: Db, viewer: UserRow, entryIds: string[], moved?: string): Promise<CuratedItem[]> {
   const curated = await curatedShowcase(db);
   const current = curated.map((i) => i.entry.id);
   if (current.length !== entryIds.length || current.some((id) => !entryIds.includes(id))) {
     throw new HttpError(409, 'showcase_changed', 'The showcase changed while you were ordering it (someone added or removed a bar). Reload and order it again.');
   }
-  const moves = showcaseMoves(current, entryIds, new Map(curated.map((i) => [i.entry.id, i.entry.title])));
+  const moves = showcaseMoves(current, entryIds, new Map(curated.map((i) => [i.entry.id, i.entry.title])), moved);
   if (moves.length === 0) return curated;
   await db.transaction(async (tx) => {
     for (const [position, entryId] of entryIds.entries()) {

@@ -12,6 +12,7 @@ import type {
   Report,
   ReportTarget,
   ReportTargetKind,
+  ShowcaseOrderBody,
 } from '@barwright/contracts';
 import { firstValueFrom } from 'rxjs';
 
@@ -69,8 +70,9 @@ export class ModerationApi {
     return firstValueFrom(this.http.delete<void>(`/api/moderation/showcase/${encodeURIComponent(entryId)}`));
   }
 
-  reorder(entryIds: string[]): Promise<CuratedItem[]> {
-    return firstValueFrom(this.http.put<CuratedItem[]>('/api/moderation/showcase/order', { entryIds }));
+  /** `moved`: the entry the curator moved, so the audit log names it. */
+  reorder(entryIds: string[], moved?: string): Promise<CuratedItem[]> {
+    return firstValueFrom(this.http.put<CuratedItem[]>('/api/moderation/showcase/order', { entryIds, ...(moved ? { moved } : {}) } satisfies ShowcaseOrderBody));
   }
 
   audit(params: Record<string, string>): Promise<AuditPage> {

@@ -1,5 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { DatePipe, NgTemplateOutlet } from '@angular/common';
+import { NgTemplateOutlet } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -16,9 +16,13 @@ import { type AdminUser, type Role, ROLES } from '@barwright/contracts';
 import { map } from 'rxjs';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { Notifier } from '../../../core/error-handling/notifier';
-import { confirmWith } from '../../../shared/confirm-dialog/confirm-dialog';
+import { MatMenuModule } from '@angular/material/menu';
+import { RouterLink } from '@angular/router';
+import { askAccountChange } from './account-change-dialog';
+import { ROLE_POWERS, roleNowText, type AccountChange } from './account-change-wording';
 import { PeopleStore } from './people-store';
 import { filterPeople, pageOfPeople, PeopleSort, sortPeople } from './people-view';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 const WIDE_COLUMNS = ['person', 'role', 'status', 'emailVerified', 'createdAt', 'lastSignInAt', 'actions'];
 const NARROW_COLUMNS = ['person'];
@@ -26,8 +30,8 @@ const NARROW_COLUMNS = ['person'];
 @Component({
   selector: 'bw-people-page',
   imports: [
-    DatePipe, NgTemplateOutlet, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatPaginatorModule,
-    MatProgressBarModule, MatSelectModule, MatSortModule, MatTableModule,
+    DateTextPipe, NgTemplateOutlet, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatMenuModule,
+    MatPaginatorModule, MatProgressBarModule, MatSelectModule, MatSortModule, MatTableModule,
   ],
   providers: [PeopleStore],
   templateUrl: './people-page.html',
@@ -42,6 +46,7 @@ export class PeoplePage {
 
   protected readonly roles = ROLES;
   protected readonly roleLabel: Record<Role, string> = { member: 'Member', moderator: 'Moderator', admin: 'Admin' };
+  protected readonly powers = ROLE_POWERS;
   protected readonly filter = signal('');
   protected readonly sort = signal<PeopleSort>({ active: 'person', direction: 'asc' });
   protected readonly pageIndex = signal(0);
@@ -81,32 +86,35 @@ export class PeoplePage {
     this.pageSize.set(event.pageSize);
   }
 
+  /** Asks to confirm with a reason; applies the role, then offers to undo it (the undo is audited as one). */
   protected async changeRole(user: AdminUser, change: MatSelectChange<Role>): Promise<void> {
+    const from = user.role;
+    const reason = await this.ask(user, { kind: 'role', from, to: change.value });
+    if (reason === null) {
+      change.source.value = from; // the select already shows the choice; put it back
+      return;
+    }
     try {
-      const updated = await this.store.update(user.id, { role: change.value });
-      void this.notifier.tell(`${updated.displayName} is now ${article(updated.role)} ${updated.role}.`, undefined, 4000);
+      const updated = await this.store.update(user.id, { role: change.value, reason });
+      if (await this.notifier.tell(roleNowText(updated.displayName, updated.role), 'Undo', 10_000)) {
+        const undone = await this.store.update(user.id, { role: from, reason: `Undo of: ${reason}`.slice(0, 500), undo: true });
+        void this.notifier.tell(`Undone: ${roleNowText(undone.displayName, undone.role)}`, undefined, 4000);
+      }
     } catch (error) {
-      change.source.value = user.role; // the select already shows the refused choice; put it back
+      change.source.value = from;
       throw error;
     }
   }
 
   protected async toggleSuspension(user: AdminUser): Promise<void> {
     const suspend = !user.suspended;
-    const confirmed = await confirmWith(this.dialog, {
-      title: suspend ? `Suspend ${user.displayName}?` : `Restore ${user.displayName}?`,
-      message: suspend
-        ? `${user.email} is signed out everywhere at once and cannot sign in until an admin restores the account. Their designs stay as they are.`
-        : `${user.email} can sign in again with their password.`,
-      confirmLabel: suspend ? 'Suspend account' : 'Restore account',
-      danger: suspend,
-    });
-    if (!confirmed) return;
-    const updated = await this.store.update(user.id, { suspended: suspend });
+    const reason = await this.ask(user, { kind: suspend ? 'suspend' : 'restore' });
+    if (reason === null) return;
+    const updated = await this.store.update(user.id, { suspended: suspend, ...(reason ? { reason } : {}) });
     void this.notifier.tell(updated.suspended ? `${updated.displayName} is suspended.` : `${updated.displayName} can sign in again.`, undefined, 4000);
   }
-}
 
-function article(role: Role): string {
-  return role === 'admin' ? 'an' : 'a';
+  private ask(user: AdminUser, change: AccountChange): Promise<string | null> {
+    return askAccountChange(this.dialog, { name: user.displayName, email: user.email, change });
+  }
 }

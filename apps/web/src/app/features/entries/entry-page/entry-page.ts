@@ -23,13 +23,14 @@ import { LineageView } from '../lineage/lineage-view';
 import { EntryRating } from '../rating/entry-rating';
 import { openRemixDialog } from '../remix/remix-dialog';
 import { ReportButton } from '../../moderation/report-dialog/report-button';
+import { ModeratorMenu } from '../../moderation/moderator-menu/moderator-menu';
 
 /** The design page of a published bar: drawings, cut plan, downloads, rating, lineage, shop log, comments, history. */
 @Component({
   selector: 'bw-entry-page',
   imports: [
     DatePipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, CommentThread, EntryCard, EntryChangesView, EntryDownloads,
-    EntryDrawings, EntryRating, LineageView, PhotoGrid, ReportButton, RevisionHistory,
+    EntryDrawings, EntryRating, LineageView, PhotoGrid, ModeratorMenu, ReportButton, RevisionHistory,
   ],
   providers: [EntryStore],
   templateUrl: './entry-page.html',

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { AuditEntry } from '@barwright/contracts';
-import { auditLink, auditSentence } from './audit-lines';
+import { auditLink, auditSentence, itemTitle } from './audit-lines';
 
 const entry = (over: Partial<AuditEntry>): AuditEntry => ({
   id: 'a', at: '2026-03-01T10:00:00.000Z', actor: { id: 't', displayName: 'Tobias' }, action: 'item.hide',
@@ -15,6 +15,15 @@ describe('audit log lines', () => {
       'command line changed the role of Maren: new account → admin',
     );
     expect(auditSentence(entry({ action: 'showcase.reorder', target: { kind: 'showcase', id: null, label: 'the showcase' } }))).toBe('Tobias reordered the showcase');
+    expect(auditSentence(entry({ action: 'showcase.reorder', target: { kind: 'entry', id: 'e', label: 'Sine 24' }, details: { moves: [{ entryId: 'e', title: 'Sine 24', from: 3, to: 1 }] } }))).toBe(
+      'Tobias moved “Sine 24” from place 3 to 1 in the showcase',
+    );
+    expect(
+      auditSentence(entry({ action: 'showcase.reorder', details: { moves: [{ entryId: 'a', title: 'A', from: 2, to: 1 }, { entryId: 'b', title: 'B', from: 1, to: 2 }] } })),
+    ).toBe('Tobias reordered the showcase: “A” 2 → 1, “B” 1 → 2');
+    expect(auditSentence(entry({ action: 'user.role', target: { kind: 'user', id: 'm', label: 'Maren' }, details: { from: 'admin', to: 'member', undo: true } }))).toBe(
+      'Tobias undid the role change of Maren: admin → member',
+    );
     expect(auditSentence(entry({ action: 'showcase.feature', target: { kind: 'entry', id: 'e', label: 'Sine 24' }, subject: null }))).toBe('Tobias featured Sine 24');
   });
 
@@ -22,5 +31,11 @@ describe('audit log lines', () => {
     expect(auditLink(entry({}))).toBe('/entries/e');
     expect(auditLink(entry({ target: { kind: 'entry', id: 'x', label: '' } }))).toBe('/entries/x');
     expect(auditLink(entry({ target: { kind: 'user', id: 'u', label: '' } }))).toBeNull();
+  });
+
+  it('name the item a filter is about by its title', () => {
+    expect(itemTitle({ kind: 'entry', label: 'Sine 24' })).toBe('the bar “Sine 24”');
+    expect(itemTitle({ kind: 'comment', label: 'comment on “Sine 24”' })).toBe('comment on “Sine 24”');
+    expect(itemTitle({ kind: 'user', label: 'Maren' })).toBe('the account of Maren');
   });
 });

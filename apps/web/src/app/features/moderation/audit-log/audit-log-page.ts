@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, signal, untracked } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -13,7 +12,8 @@ import { AUDIT_ACTIONS, type AuditPage, type PersonRef } from '@barwright/contra
 import { map } from 'rxjs';
 import { ModerationApi } from '../moderation-api';
 import { filtersFromParams, filtersToParams, hasFilters, NO_FILTERS, type AuditFilters } from './audit-filters';
-import { auditLink, auditSentence } from './audit-lines';
+import { auditLink, auditSentence, itemTitle } from './audit-lines';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 const PAGE_SIZE = 50;
 /** The filter menu's words for each action (the log's own sentence has them in context). */
@@ -26,7 +26,7 @@ const ACTION_NAMES: Record<string, string> = {
 /** The audit log: every moderation and role action, newest first, filtered by what the URL says. */
 @Component({
   selector: 'bw-audit-log-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatPaginatorModule, MatProgressBarModule, MatSelectModule],
+  imports: [DateTextPipe, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatPaginatorModule, MatProgressBarModule, MatSelectModule],
   templateUrl: './audit-log-page.html',
   styleUrl: './audit-log-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,6 +42,13 @@ export class AuditLogPage {
   protected readonly actionNames = ACTION_NAMES;
   protected readonly pageSize = PAGE_SIZE;
   protected readonly filtered = computed(() => hasFilters(this.filters()));
+  /** The item the log is filtered by, named by its title ("the bar “Sine 24”"); its id when no line names it. */
+  protected readonly itemName = computed(() => {
+    const id = this.filters().item;
+    if (!id) return null;
+    const item = this.page()?.item;
+    return item ? itemTitle(item) : `item ${id}`;
+  });
   protected readonly lines = computed(() => (this.page()?.items ?? []).map((e) => ({ entry: e, sentence: auditSentence(e), link: auditLink(e) })));
 
   constructor() {

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -6,13 +5,14 @@ import { RouterLink } from '@angular/router';
 import { REPORT_REASON_LABELS, type ModerationCase } from '@barwright/contracts';
 import type { Decision } from '../moderation-api';
 import { caseTimeline, itemName, reportsSummary } from './case-timeline';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 const KIND_ICONS = { entry: 'view_week', comment: 'chat_bubble_outline', photo: 'photo_camera' } as const;
 
 /** One item at the desk: shown in its context, its open reports and who filed them, its history, and the decisions the viewer may take. */
 @Component({
   selector: 'bw-case-card',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule],
+  imports: [DateTextPipe, RouterLink, MatButtonModule, MatIconModule],
   templateUrl: './case-card.html',
   styleUrl: './case-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

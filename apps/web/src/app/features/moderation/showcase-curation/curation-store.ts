@@ -41,7 +41,7 @@ export class CurationStore {
     this.list.set(moved);
     this.saving.set(true);
     try {
-      this.list.set(await this.api.reorder(moved.map((i) => i.entry.id)));
+      this.list.set(await this.api.reorder(moved.map((i) => i.entry.id), before[from].entry.id));
     } catch (error) {
       await this.load();
       throw error;
