@@ -23,7 +23,7 @@ export interface Choice {
       <mat-form-field class="choice">
         <mat-label>{{ shownLabel() }}</mat-label>
         <mat-select [value]="value()" (selectionChange)="choose.emit($event.value)" [disabled]="session.readOnly()"
-                    [attr.data-testid]="'field-' + path()">
+                    panelClass="bw-choice-panel" [attr.data-testid]="'field-' + path()">
           @for (option of options(); track option.value) {
             <mat-option [value]="option.value" [attr.data-testid]="'option-' + option.value">{{ option.label }}</mat-option>
           }
