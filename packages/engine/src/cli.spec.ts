@@ -136,10 +136,11 @@ describe('barwright CLI (spawned with node)', () => {
       const mms = lengthsIn(mmWarnings[i].message, 'mm');
       expect(inches.length).toBeGreaterThanOrEqual(3);
       expect(inches).toHaveLength(mms.length);
-      inches.forEach((v, k) => expect(v * MM_PER_INCH).toBeCloseTo(mms[k], 3));
-      expect(inches[0]).toBeCloseTo(w.at.xFrom, 4);
-      expect(inches[1]).toBeCloseTo(w.at.xTo, 4);
-      expect(inches.some((v) => Math.abs(v - w.amount) < 1e-5)).toBe(true);
+      // The messages read 0.001 in (0.0001 in below 0.04 in) and 0.01 mm (0.001 mm below 1 mm).
+      inches.forEach((v, k) => expect(Math.abs(v * MM_PER_INCH - mms[k])).toBeLessThan(0.0254 / 2 + 0.005 + 1e-9));
+      expect(inches[0]).toBeCloseTo(w.at.xFrom, 3); // the message reads 0.001 in
+      expect(inches[1]).toBeCloseTo(w.at.xTo, 3);
+      expect(inches.some((v) => Math.abs(v - w.amount) < 0.00006)).toBe(true); // 0.0001 in below 0.04 in
       // The places of one kind are in the file's units too.
       expect(w.first.xFrom * MM_PER_INCH).toBeCloseTo(mmWarnings[i].first.xFrom, 3);
       w.zones.forEach((z: any, k: number) => expect(z.xTo * MM_PER_INCH).toBeCloseTo(mmWarnings[i].zones[k].xTo, 3));

@@ -104,7 +104,7 @@ describe('planCut warnings', () => {
     const plan = planCut(design((d) => (d.plan.stepOver = 0.2)), demoProfile);
     const warning = plan.warnings.find((w) => w.code === 'pass-too-deep');
     expect(warning?.amount).toBeCloseTo(0.2 - 0.0762, 9);
-    expect(warning?.message).toContain('0.0762 mm');
+    expect(warning?.message).toContain('0.076 mm');
   });
 
   it('warns of rubbing when the travel leaves too thin a chip, with the rpm that fixes it', () => {

@@ -111,7 +111,7 @@ describe('cutter placement in words', () => {
     const { placementText } = await import('./cutter-placement');
     const design = sineBar({ offset: 0.5, pivot: 150 });
     expect(placementText(design, 1.505, 'mm')).toBe(
-      '0.5 mm off the centre line, rocking 150 mm from its axis: amplitude +0.33 %, crests and valleys lean 0.0019 mm towards the axis, the pattern moved 0.5 mm along the bar',
+      '0.5 mm off the centre line, rocking 150 mm from its axis: amplitude +0.33 %, crests and valleys lean 0.002 mm towards the axis, the pattern moved 0.5 mm along the bar',
     );
     expect(placementText(sineBar({ offset: -0.5 }), 1.5, 'mm')).toBe('0.5 mm off the centre line, linear motion: the shape unchanged, the pattern moved 0.5 mm back along the bar');
     expect(placementText(sineBar(), 1.5, 'mm')).toBeUndefined();

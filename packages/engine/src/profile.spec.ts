@@ -87,7 +87,7 @@ describe('computeProfile', () => {
   it('says when a caller\'s step is coarser than the design needs, and not when it is fine enough', () => {
     const short: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 10 }, rosette: { baseRadius: 50, layers: [{ lobes: 72, amplitude: 1.5, phase: 0, wave: { shape: 'sine' } }] } };
     const [coarse] = computeProfile(short, { step: 0.01 }).warnings.filter((w) => w.code === 'other');
-    expect(coarse.message).toMatch(/step of 0\.01 mm is coarser than this design needs.*every 1\.3889 mm, 139 points each.*off by up to 1\.4 %.*a step of 0\.00069 mm/);
+    expect(coarse.message).toMatch(/step of 0\.01 mm is coarser than this design needs.*every 1\.39 mm, 139 points each.*off by up to 1\.4 %.*a step of 0\.00069 mm/);
     expect(computeProfile(short, { step: 0.00069 }).warnings.filter((w) => w.code === 'other')).toEqual([]);
   });
 

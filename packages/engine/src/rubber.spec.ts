@@ -135,7 +135,7 @@ describe('rubber warnings', () => {
     const mid = (w: typeof cusp) => (w.at!.xFrom + w.at!.xTo) / 2;
     expect(Math.abs(mid(cusp) / period - Math.round(mid(cusp) / period))).toBeLessThan(0.02);
     expect(Math.abs((mid(valley) / period) % 1 - 0.5)).toBeLessThan(0.02);
-    expect(cusp.message).toMatch(/every 4.1667 mm/);
+    expect(cusp.message).toMatch(/every 4.17 mm/);
   });
 
   it('reports nothing for a point rubber or a smooth rosette the rubber fits', () => {

@@ -4,7 +4,7 @@ import { countText, cutterText, ratingText } from './entry-facts';
 describe('cutterText', () => {
   it('states the cutter in the reader’s units, inch = 25.4 mm exactly', () => {
     expect(cutterText(4.7625, 'mm')).toBe('4.76 mm');
-    expect(cutterText(4.7625, 'in')).toBe('0.1875 in');
+    expect(cutterText(4.7625, 'in')).toBe('0.188 in (3/16)');
     expect(cutterText(6, 'mm')).toBe('6 mm');
   });
 });

@@ -1,4 +1,5 @@
-import { MM_PER_INCH, type MaterialId, type RatingSummary, type Units, type WaveShape } from '@barwright/contracts';
+import { formatLength } from '@barwright/engine';
+import { type MaterialId, type RatingSummary, type Units, type WaveShape } from '@barwright/contracts';
 
 /** Wave shapes as a card names them (short; the studio's fields say more). */
 export const WAVE_NAMES: Readonly<Record<WaveShape, string>> = {
@@ -18,10 +19,9 @@ export const MATERIAL_NAMES: Readonly<Record<MaterialId, string>> = {
   custom: 'Custom material',
 };
 
-/** A cutter diameter given in mm, in the reader's units: "4.76 mm", "0.1875 in". */
+/** A cutter diameter given in mm, in the reader's units, a stock inch size named: "4.76 mm", "0.188 in (3/16)". */
 export function cutterText(mm: number, units: Units): string {
-  if (units === 'in') return `${Number((mm / MM_PER_INCH).toFixed(4))} in`;
-  return `${Number(mm.toFixed(2))} mm`;
+  return formatLength(mm, units, { fraction: true });
 }
 
 /** The mean to one decimal with the count beside it: "4.3 of 5 (12 ratings)", "No ratings yet". */

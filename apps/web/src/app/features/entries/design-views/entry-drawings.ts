@@ -1,26 +1,31 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, untracked } from '@angular/core';
 import type { Design } from '@barwright/contracts';
+import type { Companion } from '@barwright/engine';
+import { BarProfile } from '../../../shared/views/bar-profile/bar-profile';
+import { CutPlan } from '../../../shared/views/cut-plan/cut-plan';
+import { LineStudy } from '../../../shared/views/line-study/line-study';
 import { DesignCompute } from '../../studio/compute/design-compute';
-import { EntryCutPlan } from './entry-cut-plan';
-import { EntryLineStudy } from './entry-line-study';
-import { EntryProfile } from './entry-profile';
 
 /**
  * The drawings of one published revision, computed in the browser by the engine (in the studio's
- * Web Worker): line study flat and lit, bar profile, cut plan with its cautions.
+ * Web Worker) and drawn by the shared views: line study flat and lit, bar profile, cut plan with its cautions.
  */
 @Component({
   selector: 'bw-entry-drawings',
-  imports: [EntryCutPlan, EntryLineStudy, EntryProfile],
+  imports: [BarProfile, CutPlan, LineStudy],
   providers: [DesignCompute],
   template: `
     @if (compute.error(); as error) {
       <p class="bw-form-alert" role="alert">The engine could not draw this design: {{ error }}</p>
     }
     <div class="drawings">
-      <bw-entry-line-study class="study" [study]="views()?.study ?? null" [design]="design()" />
-      <bw-entry-profile class="profile" [profile]="full()?.profile ?? null" [units]="design().units" />
-      <bw-entry-cut-plan class="plan" [plan]="full()?.plan ?? null" [units]="design().units" [working]="compute.working()" />
+      <bw-line-study class="study" [study]="views()?.study ?? null" [units]="design().units" [direction]="design().study.direction"
+                     [period]="views()?.profile?.period ?? null" idPrefix="entry-" />
+      <bw-bar-profile class="profile" [profile]="views()?.profile ?? null" [units]="design().units" [warnings]="full()?.profile?.warnings ?? []"
+                      [crest]="full()?.profile?.crest" [depth]="full()?.plan?.depth ?? null" [other]="views()?.companion ?? null"
+                      [nominal]="views()?.placement?.nominal ?? null" [placement]="views()?.placement?.text ?? ''"
+                      [companion]="companion()" (companionChange)="chooseCompanion($event)" idPrefix="entry-" />
+      <bw-cut-plan class="plan" [plan]="full()?.plan ?? null" [units]="design().units" [working]="compute.working()" idPrefix="entry-" />
     </div>
   `,
   styles: `
@@ -40,13 +45,18 @@ import { EntryProfile } from './entry-profile';
 export class EntryDrawings {
   protected readonly compute = inject(DesignCompute);
   readonly design = input.required<Design>();
-  protected readonly views = computed(() => this.compute.views());
-  protected readonly full = computed(() => this.compute.full());
+  protected readonly views = this.compute.views;
+  protected readonly full = this.compute.full;
+  protected readonly companion = computed(() => this.compute.companion() ?? 'none');
 
   constructor() {
     effect(() => {
       const design = this.design();
       untracked(() => this.compute.request(design));
     });
+  }
+
+  protected chooseCompanion(kind: Companion | 'none'): void {
+    this.compute.setCompanion(kind === 'none' ? null : kind);
   }
 }

@@ -1,41 +1,15 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, planCut, toMm, type Companion, type CrestCurvature, type CutPlan, type EngineWarning, type Profile } from '@barwright/engine';
+import { computeLineStudy, computeProfile, planCut, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
+import type { ProfileData, StudyData } from '../../../shared/views/view-data';
 import { placementViews, type PlacementViews } from './placement-views';
+
+export type { ProfileData, StudyData };
 
 /** How fine to compute: a quick preview (about 200 samples a period) or the engine's own default step. */
 export type ComputeStage = 'preview' | 'full';
 
 /** Samples per period of the preview: a few milliseconds for a typical bar, visually the same curve. */
 export const PREVIEW_SAMPLES_PER_PERIOD = 200;
-
-/** The bar profile as typed arrays (mm), cheap to hand from a worker to the page. */
-export interface ProfileData {
-  period: number;
-  step: number;
-  x: Float64Array;
-  cutter: Float64Array;
-  bar: Float64Array;
-  follower: Float64Array;
-  minRadiusOfCurvature: number;
-  /** The tightest crest, exact geometry: radius, sharp corner or not, where. */
-  crest?: CrestCurvature;
-  warnings: EngineWarning[];
-  /** Cutter and follower radii and the bar's length the profile was computed for, mm. */
-  cutterRadius: number;
-  followerRadius: number;
-  barLength: number;
-}
-
-/** The line study (mm): each line as interleaved x, y pairs. */
-export interface StudyData {
-  spacing: number;
-  width: number;
-  length: number;
-  /** The V-groove's depth (mm) and included angle (degrees). */
-  depth: number;
-  vAngle: number;
-  lines: Float64Array[];
-}
 
 /** Everything the live views draw for one state of the design. */
 export interface DesignViews {

@@ -1,6 +1,6 @@
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
-import { profileDrawing } from '../views/profile-drawing';
+import { profileDrawing } from '../../../shared/views/profile-drawing';
 import { computeDesignViews } from './design-views';
 
 const placed: Design = {

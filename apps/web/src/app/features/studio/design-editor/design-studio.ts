@@ -30,10 +30,8 @@ import { RosettePanel } from '../panels/rosette-panel';
 import { RubberMotionPanel } from '../panels/rubber-motion-panel';
 import { PresenceBar } from '../presence/presence-bar';
 import { StudioStore } from '../studio-store';
-import { BarProfileView } from '../views/bar-profile-view/bar-profile-view';
-import { CutPlanView } from '../views/cut-plan-view/cut-plan-view';
 import { ExportButtons } from '../views/export-buttons/export-buttons';
-import { LineStudyView } from '../views/line-study-view/line-study-view';
+import { StudioViews } from '../views/studio-views';
 
 /** Below this width the parameters and the views share the screen by a switch. */
 const NARROW_QUERY = '(max-width: 959.98px)';
@@ -56,7 +54,7 @@ export const PANELS = [
   imports: [
     RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
     ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
-    FollowerStudyPanel, CutPlanPanel, BarProfileView, LineStudyView, CutPlanView, ExportButtons,
+    FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons,
   ],
   providers: [CollabSession, DesignCompute, StudioStore],
   templateUrl: './design-studio.html',

@@ -41,7 +41,7 @@ describe('designDifferences', () => {
     const now = convertDesignUnits(changed((d) => (d.bar.length = 152.4)), 'in');
     expect(designDifferences(EXAMPLE_DESIGN, now)).toEqual([
       { path: 'units', label: 'Design units', before: 'Millimetres (mm)', after: 'Inches (in)' },
-      { path: 'bar.length', label: 'Bar length', before: '5.90551 in', after: '6 in' },
+      { path: 'bar.length', label: 'Bar length', before: '5.9055 in', after: '6 in' },
     ]);
   });
 

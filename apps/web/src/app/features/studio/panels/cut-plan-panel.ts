@@ -1,12 +1,11 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import type { MaterialId } from '@barwright/contracts';
-import { MATERIAL_PRESETS } from '@barwright/engine';
+import { formatLength, MATERIAL_PRESETS } from '@barwright/engine';
 import { CollabSession } from '../collab/collab-session';
 import { ChoiceField, choicesOf } from '../fields/choice-field/choice-field';
 import { valueAt } from '../fields/design-values';
 import { MATERIAL_LABELS } from '../fields/field-catalogue';
 import { NumberField } from '../fields/number-field/number-field';
-import { cleanNumber } from '../units/field-units';
 
 /** The material and the figures of the cut: step-over, clean-up, travel, and overrides of the material's speeds. */
 @Component({
@@ -53,6 +52,6 @@ export class CutPlanPanel {
   }
 
   private length(mm: number): string {
-    return this.inch() ? `${cleanNumber(Number((mm / 25.4).toFixed(5)))} in` : `${cleanNumber(Number(mm.toFixed(4)))} mm`;
+    return formatLength(mm, this.inch() ? 'in' : 'mm');
   }
 }

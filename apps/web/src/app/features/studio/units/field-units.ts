@@ -1,5 +1,5 @@
 import { MM_PER_INCH, type Design, type Units } from '@barwright/contracts';
-import { fromMm } from '@barwright/engine';
+import { fromMm, roundLength } from '@barwright/engine';
 import type { FieldKind } from '../fields/field-catalogue';
 
 /** The unit written after a value of this kind in a design kept in `units`. */
@@ -71,21 +71,31 @@ function cleanNumbers<T>(value: T): T {
   return value;
 }
 
-/** Decimals worth reading: 0.1 µm in mm, 0.00001 in in inches (as the engine prints lengths); six elsewhere. */
-export function displayDecimals(kind: FieldKind, units: Units): number {
-  if (kind === 'length' || kind === 'speed') return units === 'in' ? 5 : 4;
-  return 6;
+/**
+ * A value rounded for reading or for an entry box, without trailing zeros. Lengths go through the
+ * engine's one length formatter (0.01 mm, 0.001 in, a decimal more below 1 mm); speeds to 0.1 mm/min
+ * or 0.01 in/min (finer than a slide is set); other figures to six decimals. The stored value keeps
+ * every digit: only what is shown is rounded.
+ */
+export function displayNumber(kind: FieldKind, value: number, units: Units): string {
+  return String(roundFor(kind, value, units));
 }
 
-/** A value rounded for reading, without trailing zeros. */
-export function displayNumber(kind: FieldKind, value: number, units: Units): string {
-  return String(Number(value.toFixed(displayDecimals(kind, units))));
+/**
+ * The number shown for a stored value (see displayNumber). `entry`: for an entry box or a comparison
+ * of two values, finer (the engine's ENTRY_DECIMALS), so a value typed exactly (3/16 in, 0.1875) is shown as typed.
+ */
+export function roundFor(kind: FieldKind, value: number, units: Units, entry = false): number {
+  if (!Number.isFinite(value)) return value;
+  if (kind === 'length') return roundLength(value, units, entry);
+  if (kind === 'speed') return +value.toFixed((units === 'in' ? 2 : 1) + (entry ? 1 : 0)) + 0;
+  return +value.toFixed(6) + 0;
 }
 
 /** A value with its unit, for comparisons and messages: `4.7625 mm`, `120°`, `0.5 of a lobe`. */
 export function formatValue(kind: FieldKind, value: number, units: Units): string {
   const suffix = unitSuffix(kind, units);
-  const shown = displayNumber(kind, value, units);
+  const shown = String(roundFor(kind, value, units, true));
   if (!suffix) return shown;
   return suffix === '°' ? `${shown}°` : `${shown} ${suffix}`;
 }

@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSliderModule } from '@angular/material/slider';
 import { fieldMessage } from '../../../../shared/forms/field-message';
 import { CollabSession } from '../../collab/collab-session';
-import { rangeInUnits, sliderStep, unitSuffix } from '../../units/field-units';
+import { rangeInUnits, roundFor, sliderStep, unitSuffix } from '../../units/field-units';
 import { valueAt } from '../design-values';
 import { catalogueKey, FIELDS, pathParts } from '../field-catalogue';
 import { FieldPresence } from '../field-presence/field-presence';
@@ -69,7 +69,10 @@ export class NumberField implements OnInit {
     effect(() => {
       const value = this.docValue();
       untracked(() => {
-        const shown = typeof value === 'number' ? value : null;
+        // The box shows the stored value rounded (50 mm in inches reads 1.9685, and stays 1.96850… in the
+        // document until someone types); a value just typed here is left as typed.
+        if (typeof value === 'number' && value === this.control.value) return;
+        const shown = typeof value === 'number' ? roundFor(this.info().kind, value, this.units(), true) : null;
         if (this.control.value !== shown) this.control.setValue(shown, { emitEvent: false });
       });
     });

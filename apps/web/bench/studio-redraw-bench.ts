@@ -1,0 +1,213 @@
+/*
+ * Studio redraw benchmark, measured from outside in Debian's Chromium:
+ *  - edit to redraw: 30 edits typed into the studio, from the input event to the frame after the last
+ *    view (bar profile, flat and lit study, cut plan) changed, with the main-thread long tasks meanwhile;
+ *  - remote edit: the same edits as seen by a second browser context on the same design, from the
+ *    typing page's input event to the other page's field holding the value, and to its views redrawn.
+ * It starts a real server on a fresh data directory with the demo data (WEB_DIST: the web build to
+ * serve, default dist/web/browser). Run: node --import tsx apps/web/bench/studio-redraw-bench.ts
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type CDPSession, type Page } from '@playwright/test';
+
+const ROOT = path.resolve(import.meta.dirname, '../../..');
+const PORT = Number(process.env.BENCH_PORT ?? 3304);
+const BASE = `http://localhost:${PORT}`;
+const DATA_DIR = path.resolve(ROOT, process.env.BENCH_DATA_DIR ?? '.tmp/bench-studio-redraw');
+const WEB_DIST = path.resolve(ROOT, process.env.WEB_DIST ?? 'dist/web/browser');
+const EDITS = 30;
+const DEMO_PASSWORD = 'marsh-lathe-demo-2026';
+const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const LOBES = 'field-rosette.layers[0].lobes';
+const AMPLITUDE = 'field-rosette.layers[0].amplitude';
+/** A view is taken as drawn once nothing in the drawings changed for this long (ms). */
+const QUIET_MS = 700;
+
+/*
+ * Installed in each page: times of the input events, of the drawings' changes (in the frame after), of
+ * long tasks. Page scripts are strings: tsx would wrap named functions in a helper the page lacks.
+ */
+const INSTRUMENT = `(() => {
+  const bench = (window.bench = { typed: 0, drawn: 0, longTasks: [], fieldAt: 0 });
+  const now = () => performance.timeOrigin + performance.now();
+  document.addEventListener('input', () => (bench.typed = now()), true);
+  const drawing = 'svg, canvas, [data-testid="plan-figures"], [data-testid="profile-warnings"], [data-testid="study-summary"]';
+  new MutationObserver((records) => {
+    const inDrawing = records.some((r) => {
+      const el = r.target instanceof Element ? r.target : r.target.parentElement;
+      return !!(el && el.closest(drawing)) || [...r.addedNodes].some((n) => n instanceof Element && !!n.querySelector('svg, canvas'));
+    });
+    if (inDrawing) requestAnimationFrame(() => (bench.drawn = now()));
+  }).observe(document, { subtree: true, childList: true, attributes: true, characterData: true });
+  new PerformanceObserver((list) => { for (const e of list.getEntries()) bench.longTasks.push(e.duration); }).observe({ type: 'longtask' });
+})()`;
+
+/** In the watching page: notes when the field is given `value` (Angular sets the property; no DOM mutation to observe). */
+const watchField = (testId: string, value: string) => `(() => {
+  const bench = window.bench;
+  bench.fieldAt = 0;
+  bench.drawn = 0;
+  const input = document.querySelector('[data-testid="${testId}"]');
+  const proto = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value');
+  Object.defineProperty(input, 'value', {
+    configurable: true,
+    get: () => proto.get.call(input),
+    set: (v) => {
+      proto.set.call(input, v);
+      if (Number(v) === ${Number(value)} && !bench.fieldAt) bench.fieldAt = performance.timeOrigin + performance.now();
+    },
+  });
+})()`;
+
+interface BenchWindow {
+  bench: { typed: number; drawn: number; longTasks: number[]; fieldAt: number };
+}
+
+async function main(): Promise<void> {
+  if (!fs.existsSync(path.join(WEB_DIST, 'index.html'))) throw new Error(`No web build at ${WEB_DIST}: build it, or set WEB_DIST`);
+  const server = await startServer();
+  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  try {
+    const [editor, watcher] = await twoStudios(browser);
+    const local: number[] = [];
+    const remoteField: number[] = [];
+    const remoteViews: number[] = [];
+    await settle(editor, watcher);
+    await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
+    const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
+    for (let i = 0; i < EDITS; i++) {
+      const [testId, value] = i % 2 === 0 ? [LOBES, String(20 + ((i / 2) % 10))] : [AMPLITUDE, (1 + (i % 7) * 0.1).toFixed(1)];
+      const t = await timeEdit(editor, watcher, testId, value);
+      local.push(t.local);
+      remoteField.push(t.remoteField);
+      remoteViews.push(t.remoteViews);
+    }
+    const longTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
+    if (profiler) await printProfile(profiler);
+    const row = (name: string, xs: number[]) => `${name.padEnd(34)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
+    console.log(`Studio redraw, ${EDITS} edits (lobes and amplitude alternately), Chromium ${browser.version()}, ${WEB_DIST}`);
+    console.log(row('edit to redraw (this page)', local));
+    console.log(`${'long tasks on this page'.padEnd(34)} ${longTasks.length} (longest ${longTasks.length ? Math.max(...longTasks).toFixed(0) : 0} ms)`);
+    console.log(row('remote edit to the field', remoteField));
+    console.log(row('remote edit to the views', remoteViews));
+  } finally {
+    await browser.close();
+    server.kill('SIGTERM');
+  }
+}
+
+/** Types `value` into the editor's field; resolves with the three times in ms. */
+async function timeEdit(editor: Page, watcher: Page, testId: string, value: string) {
+  await watcher.evaluate(watchField(testId, value));
+  await editor.evaluate(() => ((window as unknown as BenchWindow).bench.drawn = 0));
+  await editor.getByTestId(testId).fill(value);
+  await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
+  await watcher.waitForFunction(() => (window as unknown as BenchWindow).bench.fieldAt > 0 && (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 }).catch(async (error) => {
+    const state = await watcher.evaluate((id) => ({ bench: (window as unknown as BenchWindow).bench, value: document.querySelector<HTMLInputElement>(`[data-testid="${id}"]`)?.value, visible: document.visibilityState }), testId);
+    throw new Error(`The other page did not follow the edit of ${testId} to ${value}: ${JSON.stringify(state)}`, { cause: error });
+  });
+  await settle(editor, watcher);
+  const e = await editor.evaluate(() => (window as unknown as BenchWindow).bench);
+  const w = await watcher.evaluate(() => (window as unknown as BenchWindow).bench);
+  return { local: e.drawn - e.typed, remoteField: w.fieldAt - e.typed, remoteViews: w.drawn - e.typed };
+}
+
+/** Waits until neither page has redrawn for QUIET_MS. */
+async function settle(...pages: Page[]): Promise<void> {
+  for (;;) {
+    const last = Math.max(...(await Promise.all(pages.map((p) => p.evaluate(() => (window as unknown as BenchWindow).bench.drawn)))));
+    const now = await pages[0].evaluate(() => performance.timeOrigin + performance.now());
+    if (now - last >= QUIET_MS) return;
+    await new Promise((r) => setTimeout(r, QUIET_MS - (now - last) + 20));
+  }
+}
+
+/** Signs in twice (two contexts, the same member), makes a board and a design, opens it in both. */
+async function twoStudios(browser: Browser): Promise<[Page, Page]> {
+  const pages = await Promise.all([0, 1].map(async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    await context.addInitScript({ content: INSTRUMENT });
+    return context.newPage();
+  }));
+  for (const page of pages) {
+    await page.goto(`${BASE}/account/sign-in`);
+    await page.getByTestId('sign-in-email').fill('maren@example.test');
+    await page.getByTestId('sign-in-password').fill(DEMO_PASSWORD);
+    await page.getByTestId('sign-in-submit').click();
+    await page.getByTestId('account-menu').waitFor();
+  }
+  const [editor, watcher] = pages;
+  await editor.goto(`${BASE}/boards`);
+  await editor.getByTestId('board-create-name').fill(`Redraw bench ${Date.now()}`);
+  await editor.getByTestId('board-create-submit').click();
+  await editor.getByTestId('board-name').waitFor();
+  await editor.getByTestId('design-new').click();
+  await editor.getByTestId('new-design-title').fill('Redraw bench bar');
+  await editor.getByTestId('new-design-preset').click();
+  await editor.getByTestId('new-design-preset-example').click();
+  await editor.getByTestId('new-design-create').click();
+  await editor.getByTestId('studio-title').waitFor();
+  const url = editor.url();
+  await watcher.goto(url);
+  for (const page of pages) {
+    await page.locator('[data-testid="connection-status"][data-status="live"]').waitFor();
+    await page.getByTestId('study-lit').waitFor();
+    await page.waitForFunction((id) => /\d/.test(document.querySelector<HTMLInputElement>(`[data-testid="${id}"]`)?.value ?? ''), LOBES);
+  }
+  return [editor, watcher];
+}
+
+/** With BENCH_PROFILE set: the editing page's JavaScript sampled by Chromium's profiler (CDP), to find the main-thread work. */
+async function startProfile(page: Page): Promise<CDPSession> {
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Profiler.enable');
+  await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+  await cdp.send('Profiler.start');
+  return cdp;
+}
+
+/** The 25 functions with the most self time over the edits (a development build names them). */
+async function printProfile(cdp: CDPSession): Promise<void> {
+  const { profile } = await cdp.send('Profiler.stop');
+  const self = new Map<string, number>();
+  const dt = new Map<number, number>();
+  profile.samples?.forEach((id, k) => dt.set(id, (dt.get(id) ?? 0) + (profile.timeDeltas?.[k] ?? 0)));
+  for (const node of profile.nodes) {
+    const f = node.callFrame;
+    const key = `${f.functionName || '(anonymous)'} ${f.url.split('/').pop()}:${f.lineNumber + 1}`;
+    self.set(key, (self.get(key) ?? 0) + (dt.get(node.id) ?? 0) / 1000);
+  }
+  console.log('Main-thread self time (ms) over the edits:');
+  for (const [key, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`${ms.toFixed(0).padStart(7)}  ${key}`);
+}
+
+async function startServer(): Promise<ChildProcess> {
+  fs.rmSync(DATA_DIR, { recursive: true, force: true });
+  fs.mkdirSync(path.dirname(DATA_DIR), { recursive: true });
+  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/server/src/main.ts'], {
+    cwd: ROOT,
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...process.env, PORT: String(PORT), DATA_DIR, DEMO_DATA: 'true', NODE_ENV: 'test', WEB_DIST },
+  });
+  const deadline = Date.now() + 120_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`The server stopped (exit ${child.exitCode})`);
+    try {
+      if ((await fetch(`${BASE}/api/health`)).ok) return child;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  child.kill('SIGTERM');
+  throw new Error('The server did not answer /api/health within 2 minutes');
+}
+
+function pct(xs: number[], p: number): number {
+  const sorted = [...xs].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+}
+
+await main();
