@@ -193,13 +193,14 @@ export interface RackFile {
 /** A rosette's lengths converted to `units` (inch = 25.4 mm exactly). */
 export function rosetteInUnits(rosette: RosetteObject, from: Units, to: Units): RosetteObject {
   if (from === to) return rosette;
-  const f = to === 'in' ? 1 / MM_PER_INCH : MM_PER_INCH;
+  // Divided, not multiplied by 1/25.4: v / 25.4 is the correctly rounded inch value.
+  const f = (v: number) => (to === 'in' ? v / MM_PER_INCH : v * MM_PER_INCH);
   return {
-    baseRadius: rosette.baseRadius * f,
+    baseRadius: f(rosette.baseRadius),
     layers: rosette.layers.map((l) => ({
       ...l,
-      amplitude: l.amplitude * f,
-      wave: l.wave.shape === 'measured' ? { ...l.wave, points: l.wave.points.map(([a, r]) => [a, r * f] as [number, number]) } : l.wave,
+      amplitude: f(l.amplitude),
+      wave: l.wave.shape === 'measured' ? { ...l.wave, points: l.wave.points.map(([a, r]) => [a, f(r)] as [number, number]) } : l.wave,
     })),
   };
 }

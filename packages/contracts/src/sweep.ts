@@ -24,7 +24,11 @@ export const sweepRosettesSchema = z.discriminatedUnion(
   [
     z.strictObject({ by: z.literal('all') }),
     z.strictObject({ by: z.literal('tags'), tags: rackTagsSchema.refine((t) => t.length > 0, 'needs at least 1 tag') }),
-    z.strictObject({ by: z.literal('picked'), ids: z.array(z.uuid('must be rack rosette ids')).min(1, 'needs at least 1 rosette').max(SWEEP_LIMITS.picked, `takes at most ${SWEEP_LIMITS.picked} rosettes`) }),
+    z.strictObject({ by: z.literal('picked'), ids: z
+        .array(z.uuid('must be rack rosette ids'))
+        .min(1, 'needs at least 1 rosette')
+        .max(SWEEP_LIMITS.picked, `takes at most ${SWEEP_LIMITS.picked} rosettes`)
+        .refine((ids) => new Set(ids.map((id) => id.toLowerCase())).size === ids.length, 'must not repeat a rosette') }),
   ],
   { error: 'must choose rosettes by "all", "tags" or "picked"' },
 );
@@ -128,7 +132,7 @@ export interface SweepCandidate {
  * the candidate's rosette, rubber, travel, cutter and follower. Pure; the same candidate gives the same file.
  */
 export function candidateDesign(c: SweepCandidate): Design {
-  const f = c.units === 'in' ? 1 / MM_PER_INCH : 1;
+  const inUnits = (mm: number) => (c.units === 'in' ? mm / MM_PER_INCH : mm);
   const { rubber, travel, cutter } = c;
   return {
     format: DESIGN_FORMAT,
@@ -137,10 +141,10 @@ export function candidateDesign(c: SweepCandidate): Design {
     rubber: rubber.shape === 'round' ? { shape: 'round', radius: rubber.radius } : { shape: 'flat', width: rubber.width },
     motion: { travelPerRev: travel.travelPerRev, leverRatio: travel.leverRatio },
     cutter: { diameter: cutter.diameter, flutes: cutter.flutes },
-    bar: { length: c.barLength, thickness: EXAMPLE_DESIGN.bar.thickness * f, material: 'a2' },
+    bar: { length: c.barLength, thickness: inUnits(EXAMPLE_DESIGN.bar.thickness), material: 'a2' },
     follower: { radius: c.follower.radius },
     study: { lineSpacing: c.study.lineSpacing, lines: c.study.lines, schedule: c.study.schedule, vAngle: c.study.vAngle, depth: c.study.depth },
-    plan: { stepOver: EXAMPLE_DESIGN.plan.stepOver * f, cleanup: EXAMPLE_DESIGN.plan.cleanup * f, travelSpeed: EXAMPLE_DESIGN.plan.travelSpeed * f },
+    plan: { stepOver: inUnits(EXAMPLE_DESIGN.plan.stepOver), cleanup: inUnits(EXAMPLE_DESIGN.plan.cleanup), travelSpeed: inUnits(EXAMPLE_DESIGN.plan.travelSpeed) },
   };
 }
 
@@ -169,3 +173,43 @@ export const designsBatchBody = z.strictObject({
     .max(DESIGNS_BATCH_MAX, `takes at most ${DESIGNS_BATCH_MAX} designs`),
 });
 export type DesignsBatchBody = z.input<typeof designsBatchBody>;
+
+/** The rack rosettes a sweep takes, in rack order: all, those with any of the tags (any case), or the picked ones. */
+export function chosenRosettes<R extends { id: string; tags: string[] }>(choices: Pick<SweepChoices, 'rosettes'>, rack: readonly R[]): R[] {
+  const pick = choices.rosettes;
+  if (pick.by === 'all') return [...rack];
+  if (pick.by === 'picked') {
+    const ids = new Set(pick.ids.map((id) => id.toLowerCase()));
+    return rack.filter((r) => ids.has(r.id.toLowerCase()));
+  }
+  const tags = new Set(pick.tags.map((t) => t.toLowerCase()));
+  return rack.filter((r) => r.tags.some((t) => tags.has(t.toLowerCase())));
+}
+
+/**
+ * Every candidate of a sweep with its key, rosette by rosette, then rubber, travel and cutter (the
+ * grid's order); the line study uses the first schedule. Deterministic: the same choices and rack
+ * give the same list, so a saved sweep's shortlist keys find their candidates again.
+ */
+export function sweepCandidates(
+  choices: SweepChoices,
+  rack: readonly { id: string; name: string; units: Units; rosette: RosetteObject; tags: string[] }[],
+): { key: CandidateKey; candidate: SweepCandidate }[] {
+  const out: { key: CandidateKey; candidate: SweepCandidate }[] = [];
+  const { lineSpacing, lines, schedules, vAngle, depth } = choices.study;
+  const study = { lineSpacing, lines, schedule: schedules[0], vAngle, depth };
+  for (const r of chosenRosettes(choices, rack)) {
+    const rosette = { name: r.name, units: r.units, rosette: r.rosette };
+    choices.rubbers.forEach((rubber, i) =>
+      choices.travels.forEach((travel, j) =>
+        choices.cutters.forEach((cutter, k) =>
+          out.push({
+            key: { rosetteId: r.id, rubber: i, travel: j, cutter: k },
+            candidate: { units: choices.units, rosette, rubber, travel, cutter, follower: choices.follower, barLength: choices.barLength, study },
+          }),
+        ),
+      ),
+    );
+  }
+  return out;
+}

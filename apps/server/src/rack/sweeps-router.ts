@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { and, desc, eq, sql } from 'drizzle-orm';
-import { sweepBody, sweepCountProblem, SWEEP_LIMITS, type SavedSweep, type SweepChoices, type SweepSummary } from '@barwright/contracts';
+import { chosenRosettes, sweepBody, sweepCountProblem, SWEEP_LIMITS, type SavedSweep, type SweepChoices, type SweepSummary } from '@barwright/contracts';
 import { savedSweeps } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
@@ -24,19 +24,14 @@ const toSaved = (row: Row): SavedSweep => ({
  * How many rosettes the choices take from the member's rack: picked ones must all be theirs, and the
  * whole sweep must stay within SWEEP_MAX_CANDIDATES (400 naming the field and how to narrow it).
  */
-async function chosenRosettes(db: Db, ownerId: string, choices: SweepChoices): Promise<number> {
+async function sweepBars(db: Db, ownerId: string, choices: SweepChoices): Promise<number> {
   const pick = choices.rosettes;
-  let count: number;
   if (pick.by === 'picked') {
     const own = new Set((await ownRosettesAmong(db, ownerId, pick.ids)).map((r) => r.id));
-    const i = pick.ids.findIndex((id) => !own.has(id));
+    const i = pick.ids.findIndex((id) => !own.has(id.toLowerCase()));
     if (i >= 0) throw new HttpError(400, 'invalid_input', 'A picked rosette is not on your rack.', { [`choices.rosettes.ids[${i}]`]: 'is not a rosette of your rack' });
-    count = pick.ids.length;
-  } else {
-    const rows = await rackRosetteRows(db, ownerId);
-    const wanted = pick.by === 'tags' ? new Set(pick.tags.map((t) => t.toLowerCase())) : undefined;
-    count = wanted ? rows.filter((r) => r.tags.some((t) => wanted.has(t.toLowerCase()))).length : rows.length;
   }
+  const count = pick.by === 'picked' ? pick.ids.length : chosenRosettes(choices, await rackRosetteRows(db, ownerId)).length;
   const problem = sweepCountProblem(choices, count);
   if (problem) throw new HttpError(400, 'invalid_input', problem, { choices: problem });
   return count * choices.rubbers.length * choices.travels.length * choices.cutters.length;
@@ -58,7 +53,7 @@ export function sweepsRouter({ db }: { db: Db }): Router {
   router.post('/', async (req, res) => {
     const user = requireUser(req);
     const body = parseBody(sweepBody, req.body);
-    const candidates = await chosenRosettes(db, user.id, body.choices);
+    const candidates = await sweepBars(db, user.id, body.choices);
     const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(savedSweeps).where(eq(savedSweeps.ownerId, user.id));
     if (n >= SWEEP_LIMITS.saved) throw new HttpError(400, 'invalid_input', `You can keep at most ${SWEEP_LIMITS.saved} sweeps; delete some first.`, { sweeps: `at most ${SWEEP_LIMITS.saved} saved sweeps` });
     const [row] = await db.insert(savedSweeps).values({ ownerId: user.id, name: body.name, choices: body.choices, shortlist: body.shortlist, candidates }).returning();
@@ -71,7 +66,7 @@ export function sweepsRouter({ db }: { db: Db }): Router {
     const user = requireUser(req);
     const row = await ownSweep(db, user.id, req.params.id);
     const body = parseBody(sweepBody, req.body);
-    const candidates = await chosenRosettes(db, user.id, body.choices);
+    const candidates = await sweepBars(db, user.id, body.choices);
     const [updated] = await db
       .update(savedSweeps)
       .set({ name: body.name, choices: body.choices, shortlist: body.shortlist, candidates, updatedAt: new Date() })
