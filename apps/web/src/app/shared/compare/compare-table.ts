@@ -1,5 +1,5 @@
 import type { Units } from '@barwright/contracts';
-import { fieldLabel } from '../../features/studio/fields/field-catalogue';
+import { catalogueKey, FIELDS, fieldLabel } from '../../features/studio/fields/field-catalogue';
 import { describeField, flattenDesign, inUnits, unitsOf } from './design-fields';
 
 /** One row of the side-by-side table: a field or a figure, one value per design. */
@@ -13,15 +13,29 @@ export interface CompareRow {
   field: boolean;
 }
 
+/** The catalogue's order (rosette, rubber, motion, cutter, bar, follower, study, plan), layers in turn. */
+const ORDER = Object.keys(FIELDS);
+const LAYER_BLOCK = ORDER.findIndex((key) => key.startsWith('rosette.layers[]'));
+function byCatalogue(a: string, b: string): number {
+  const rank = (path: string) => {
+    const i = ORDER.indexOf(catalogueKey(path));
+    return i < 0 ? ORDER.length : i;
+  };
+  const layer = (path: string) => Number(/layers\[(\d+)\]/.exec(path)?.[1] ?? -1);
+  // The layers' fields stay together as one block where the catalogue lists them, layer by layer.
+  const block = (path: string) => (layer(path) >= 0 ? LAYER_BLOCK : rank(path));
+  return block(a) - block(b) || layer(a) - layer(b) || rank(a) - rank(b) || a.localeCompare(b);
+}
+
 /**
  * Every field of the designs, one row each, values in `units` (each valid design converted, so a
- * units switch alone changes no length), in the order of the first design's file, then fields only
- * the others have. The `units` row itself says what each file was drawn up in.
+ * units switch alone changes no length), in the catalogue's order. The `units` row itself says what
+ * each file was drawn up in.
  */
 export function fieldRows(designs: readonly unknown[], units: Units): CompareRow[] {
   const flat = designs.map((d) => flattenDesign(inUnits(d, units)));
   const own = designs.map(unitsOf);
-  const paths = [...new Set(flat.flatMap((f) => [...f.keys()]))];
+  const paths = [...new Set(flat.flatMap((f) => [...f.keys()]))].sort(byCatalogue);
   return paths.map((path) => {
     const raw = flat.map((f, i) => (path === 'units' ? own[i] : f.get(path)));
     const values = raw.map((v, i) => describeField(path, v, path === 'units' ? own[i] : units));

@@ -1,11 +1,12 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import type { RevisionListItem } from '@barwright/contracts';
+import { DESIGN_DOWNLOADS } from '../../../shared/views/downloads/downloads';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** Every published revision, newest first, each with its own thumbnail and files. */
 @Component({
   selector: 'bw-revision-history',
-  imports: [DatePipe],
+  imports: [DateTextPipe],
   template: `
     <section class="block" aria-labelledby="history-title" data-testid="entry-history">
       <h2 id="history-title">Revision history</h2>
@@ -16,10 +17,11 @@ import type { RevisionListItem } from '@barwright/contracts';
             <div class="text">
               <span class="name">Revision {{ r.number }}@if (r.number === latest()) { <span class="tag">latest</span> }</span>
               <span class="title">{{ r.title }}</span>
-              <span class="by">{{ r.author.displayName }} · <time [attr.datetime]="r.createdAt">{{ r.createdAt | date: 'medium' }}</time></span>
+              <span class="by">{{ r.author.displayName }} · <time [attr.datetime]="r.createdAt">{{ r.createdAt | dateText: 'time' }}</time></span>
               <span class="files">
-                <a [href]="file(r.number, 'svg')" download>SVG</a> · <a [href]="file(r.number, 'pdf')" download>PDF</a> ·
-                <a [href]="file(r.number, 'gcode')" download>G-code</a>
+                @for (d of downloads; track d.format; let last = $last) {
+                  <a [href]="file(r.number, d.format)" download [title]="d.what" [attr.data-testid]="'revision-download-' + d.format">{{ d.label }}</a>@if (!last) { <span aria-hidden="true"> · </span> }
+                }
               </span>
             </div>
           </li>
@@ -77,6 +79,10 @@ import type { RevisionListItem } from '@barwright/contracts';
     .by {
       color: var(--mat-sys-on-surface-variant);
     }
+    .files a {
+      display: inline-block;
+      padding: 0.25rem 0;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -84,6 +90,8 @@ export class RevisionHistory {
   readonly entryId = input.required<string>();
   readonly revisions = input.required<readonly RevisionListItem[]>();
   readonly latest = input.required<number>();
+  /** Every file the design page offers, for each revision. */
+  protected readonly downloads = DESIGN_DOWNLOADS;
 
   protected thumb(n: number): string {
     return `/api/entries/${encodeURIComponent(this.entryId())}/revisions/${n}/thumbnail.svg`;

@@ -21,6 +21,8 @@ import { optionalContract } from '../explore-filters/optional-contract';
 import { activeFilterCount, PAGE_SIZES, paramsFromState, stateFromParams, withChange, type ExploreState } from '../explore-state';
 import { ExploreStore } from '../explore-store';
 import { ExploreTable } from '../explore-table/explore-table';
+import { ComparePick } from '../compare-tray/compare-pick';
+import { CompareTray } from '../compare-tray/compare-tray';
 
 const SORT_LABELS: Record<ExploreSort, string> = {
   relevance: 'Best match',
@@ -35,7 +37,7 @@ const SORT_LABELS: Record<ExploreSort, string> = {
   selector: 'bw-explore-page',
   imports: [
     ReactiveFormsModule, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatIconModule, MatInputModule, MatPaginatorModule,
-    MatProgressBarModule, MatSelectModule, EntryCard, ExploreFilters, ExploreTable,
+    MatProgressBarModule, MatSelectModule, EntryCard, ExploreFilters, ExploreTable, ComparePick, CompareTray,
   ],
   providers: [ExploreStore],
   templateUrl: './explore-page.html',

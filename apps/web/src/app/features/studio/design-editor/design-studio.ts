@@ -1,5 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, OnInit, signal, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, ElementRef, inject, input, OnInit, signal, untracked } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -30,11 +30,14 @@ import { RosettePanel } from '../panels/rosette-panel';
 import { RubberMotionPanel } from '../panels/rubber-motion-panel';
 import { PresenceBar } from '../presence/presence-bar';
 import { StudioStore } from '../studio-store';
+import { LiveSummary } from './live-summary';
 import { ExportButtons } from '../views/export-buttons/export-buttons';
 import { StudioViews } from '../views/studio-views';
 
 /** Below this width the parameters and the views share the screen by a switch. */
 const NARROW_QUERY = '(max-width: 959.98px)';
+/** Below this width the header scrolls away (a phone): a strip with the status and the plan stays in sight instead. */
+const PHONE_QUERY = '(max-width: 599.98px)';
 
 /** The parameter panels, grouped as the trade thinks, with the design paths each holds. */
 export const PANELS = [
@@ -54,7 +57,7 @@ export const PANELS = [
   imports: [
     RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
     ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
-    FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons,
+    FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons, LiveSummary,
   ],
   providers: [CollabSession, DesignCompute, StudioStore],
   templateUrl: './design-studio.html',
@@ -70,10 +73,13 @@ export class DesignStudio implements OnInit {
   private readonly router = inject(Router);
   private readonly notifier = inject(Notifier);
   private readonly dialog = inject(MatDialog);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
 
   readonly designId = input.required<string>();
   protected readonly panels = PANELS;
-  protected readonly narrow = toSignal(inject(BreakpointObserver).observe(NARROW_QUERY).pipe(map((s) => s.matches)), { initialValue: false });
+  private readonly breakpoints = inject(BreakpointObserver);
+  protected readonly narrow = toSignal(this.breakpoints.observe(NARROW_QUERY).pipe(map((s) => s.matches)), { initialValue: false });
+  protected readonly phone = toSignal(this.breakpoints.observe(PHONE_QUERY).pipe(map((s) => s.matches)), { initialValue: false });
   /** On a narrow screen: which half is shown. The views come first. */
   protected readonly pane = signal<'views' | 'parameters'>('views');
   protected readonly problems = computed(() => problemLines(this.session.fieldErrors()));
@@ -114,6 +120,12 @@ export class DesignStudio implements OnInit {
       testId: 'studio-rename',
       save: (title) => this.store.rename(title),
     });
+  }
+
+  /** Brings the full cut plan into view (on a narrow screen, with the views). */
+  protected showPlan(): void {
+    this.pane.set('views');
+    requestAnimationFrame(() => this.host.nativeElement.querySelector('[data-testid="cut-plan"]')?.scrollIntoView({ behavior: 'smooth', block: 'start' }));
   }
 
   /** Publishes the design as it stands (a new entry, or a new revision of its entry), then opens the entry. */

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -10,18 +9,14 @@ import { confirmWith } from '../../../shared/confirm-dialog/confirm-dialog';
 import { askForName } from '../../../shared/name-dialog/name-dialog';
 import { CollabSession } from '../collab/collab-session';
 import { StudioStore } from '../studio-store';
-import { designDifferences, type FieldDifference } from './design-diff';
+import { openCompare } from '../../../shared/compare/compare-dialog';
+import { dateText } from '../../../shared/dates/date-text';
+import { DateTextPipe, READER_LOCALE } from '../../../shared/dates/date-text-pipe';
 
-interface Comparison {
-  versionId: string;
-  differences: FieldDifference[];
-  notesChanged: boolean;
-}
-
-/** Named versions of the design: save one, compare one with now, restore one as a new edit. */
+/** Named versions of the design: save one, compare one with now side by side, restore one as a new edit. */
 @Component({
   selector: 'bw-history-panel',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [DateTextPipe, MatButtonModule, MatIconModule, MatProgressBarModule],
   templateUrl: './history-panel.html',
   styleUrl: './history-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -31,7 +26,7 @@ export class HistoryPanel {
   protected readonly session = inject(CollabSession);
   private readonly dialog = inject(MatDialog);
   private readonly notifier = inject(Notifier);
-  protected readonly comparison = signal<Comparison | null>(null);
+  private readonly locale = inject(READER_LOCALE);
   protected readonly comparing = signal<string | null>(null);
 
   protected async save(): Promise<void> {
@@ -50,20 +45,25 @@ export class HistoryPanel {
     });
   }
 
+  /** The version against the document as it is now (taken when asked, so it does not follow later edits). */
   protected async compare(version: DesignVersion): Promise<void> {
-    if (this.comparison()?.versionId === version.id) return this.comparison.set(null);
     this.comparing.set(version.id);
+    let content: { design: unknown; notes: string };
     try {
-      const content = await this.store.versionContent(version.id);
-      // Compared with the document as it is now, so the list follows live edits only when asked again.
-      this.comparison.set({
-        versionId: version.id,
-        differences: designDifferences(content.design, this.session.design()),
-        notesChanged: content.notes !== this.session.notes.toString(),
-      });
+      content = await this.store.versionContent(version.id);
     } finally {
       this.comparing.set(null);
     }
+    const now = this.session.design();
+    const when = dateText(version.createdAt, this.locale, 'time');
+    await openCompare(this.dialog, {
+      title: `“${version.name}” against now`,
+      sides: [
+        { label: version.name, note: `${version.authorName}, ${when}`, design: content.design, notes: content.notes },
+        { label: 'Now', note: 'the design as it stands', design: now, notes: this.session.notes.toString() },
+      ],
+      units: (now as { units?: 'mm' | 'in' } | null)?.units === 'in' ? 'in' : 'mm',
+    });
   }
 
   protected async restore(version: DesignVersion): Promise<void> {
@@ -74,7 +74,6 @@ export class HistoryPanel {
     });
     if (!confirmed) return;
     await this.store.restoreVersion(version.id);
-    this.comparison.set(null);
     void this.notifier.tell(`“${version.name}” restored as a new edit.`, undefined, 4000);
   }
 }
