@@ -23,7 +23,8 @@ export async function entryThumbnailSvg(design: Design): Promise<string> {
   const study = computeLineStudy(design, profile);
   const { depth, vAngle } = toMm(design).study;
   const window = thumbnailWindow(study, profile.period, depth * Math.tan((vAngle * Math.PI) / 360));
-  const field = computeHeightField({ lines: study.lines, depth, vAngle, window, width: THUMBNAIL_WIDTH_PX, height: THUMBNAIL_HEIGHT_PX, supersample: SUPERSAMPLE });
+  const maxReach = 2 * (study.spacing + lineHeight(study)); // a very wide V still costs a few lines' strips per sample
+  const field = computeHeightField({ lines: study.lines, depth, vAngle, window, width: THUMBNAIL_WIDTH_PX, height: THUMBNAIL_HEIGHT_PX, supersample: SUPERSAMPLE, maxReach });
   const rgba = shadeHeightField(field, THUMBNAIL_LIGHT, 'silver');
   const png = await sharp(Buffer.from(rgba.buffer, rgba.byteOffset, rgba.byteLength), { raw: { width: THUMBNAIL_WIDTH_PX, height: THUMBNAIL_HEIGHT_PX, channels: 4 } })
     .removeAlpha()
@@ -56,4 +57,11 @@ function thumbnailWindow(study: LineStudy, period: number, reach: number): Surfa
   const x0 = Math.max(0, Math.min(period, study.length - width));
   const y0 = low - 2 * reach;
   return { x0, x1: x0 + width, y0, y1: y0 + width / aspect };
+}
+
+/** Peak-to-valley of the first line (mm): every line is the same wave shifted. */
+function lineHeight(study: LineStudy): number {
+  let [low, high] = [Infinity, -Infinity];
+  for (const [, y] of study.lines[0]?.points ?? []) [low, high] = [Math.min(low, y), Math.max(high, y)];
+  return Number.isFinite(low) ? high - low : 0;
 }

@@ -44,6 +44,13 @@ export interface HeightFieldInput {
   height: number;
   /** Samples per pixel along each axis (anti-aliasing): 2 by default, 1 to 8. */
   supersample?: number;
+  /**
+   * Farthest from a line the field is computed (mm); beyond it a sample reads as uncut plate even
+   * where a wider groove still reaches. Bounds the work of grooves far wider than the line spacing
+   * (a V of nearly 180°): between the lines of a study every point lies within the spacing plus the
+   * wave's height of a line, so a cap above that changes only the margins outside the study.
+   */
+  maxReach?: number;
 }
 
 export interface HeightField {
@@ -76,7 +83,7 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
   const cols = width * s;
   const rows = height * s;
   const slope = 1 / Math.tan((input.vAngle * Math.PI) / 360);
-  const reach = Math.max(0, input.depth) / slope; // R: half the groove's width at the surface
+  const reach = Math.min(Math.max(0, input.depth) / slope, input.maxReach ?? Infinity); // R: half the groove's width at the surface
   const dist2 = new Float32Array(cols * rows).fill(reach * reach);
   const facet = new Uint16Array(cols * rows);
   const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
