@@ -2,7 +2,7 @@
  * Engine benchmark: `npm run bench -w packages/engine`. Prints: computeProfile by bar length (it
  * should grow linearly), the engine's envelopes beside clipper-lib's offsetting measured fairly,
  * the lit surface (height field and reshading), a 3-layer compound against the brute-force
- * reference, a line study of 200 lines, and 500 different designs on one core.
+ * reference, a line study of 200 lines, 500 different designs on one core, and the sweep's batch entry point.
  * Times are CPU time (process.cpuUsage), medians of warm runs: the machine may be shared.
  */
 import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
@@ -13,6 +13,7 @@ import { cpuMedian as median, ms } from './bench-timing';
 import { clipperFair } from './clipper-fair';
 import { litSurface } from './lit-surface';
 import { profileScaling } from './profile-scaling';
+import { sweepBatchFigures } from './sweep-batch';
 
 /** A 3-layer coprime compound (24 + 7 + 11 lobes: one repeat a revolution) on the example's 150 mm bar. */
 const COMPOUND: Design = {
@@ -122,3 +123,4 @@ clipperFair();
 compoundFigures();
 studyFigures();
 sweepFigures();
+sweepBatchFigures();
