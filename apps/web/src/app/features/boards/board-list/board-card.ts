@@ -1,13 +1,13 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import type { BoardSummary } from '@barwright/contracts';
 import { ROLE_LABELS } from '../board-roles';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** One board in the lists: its name (the link), your role, owner, design count and last change. */
 @Component({
   selector: 'bw-board-card',
-  imports: [DatePipe, RouterLink],
+  imports: [DateTextPipe, RouterLink],
   template: `
     <article class="card" [class.archived]="board().archived" data-testid="board-card">
       <a class="card-link" [routerLink]="['/boards', board().id]" data-testid="board-card-link">
@@ -20,7 +20,7 @@ import { ROLE_LABELS } from '../board-roles';
       <dl class="facts">
         <div><dt>Owner</dt><dd>{{ board().ownerName }}</dd></div>
         <div><dt>Designs</dt><dd data-testid="board-card-count">{{ board().designCount }}</dd></div>
-        <div><dt>Changed</dt><dd><time [attr.datetime]="board().updatedAt">{{ board().updatedAt | date: 'mediumDate' }}</time></dd></div>
+        <div><dt>Changed</dt><dd><time [attr.datetime]="board().updatedAt">{{ board().updatedAt | dateText }}</time></dd></div>
       </dl>
     </article>
   `,

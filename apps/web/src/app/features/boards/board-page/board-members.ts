@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal, viewChild } from '@angular/core';
 import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -17,13 +16,14 @@ import { formProblem } from '../../../shared/forms/form-problem';
 import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 import { BoardStore } from '../board-store';
 import { ROLE_HINTS, ROLE_LABELS } from '../board-roles';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 type InviteRole = (typeof INVITE_ROLES)[number];
 
 /** Members with their roles, and (for the owner) the invitations still open. */
 @Component({
   selector: 'bw-board-members',
-  imports: [DatePipe, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule],
+  imports: [DateTextPipe, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule],
   templateUrl: './board-members.html',
   styleUrl: './board-members.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -7,11 +6,12 @@ import { canDelete, canEdit, editWindowText } from './comment-rules';
 import { CommentForm } from './comment-form';
 import { CommentsStore } from './comments-store';
 import { ReportButton } from '../../moderation/report-dialog/report-button';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** One comment: its author and time, its text (escaped, links made safe by the contracts' renderer), and its actions. */
 @Component({
   selector: 'bw-comment-item',
-  imports: [DatePipe, MatButtonModule, MatIconModule, CommentForm, ReportButton],
+  imports: [DateTextPipe, MatButtonModule, MatIconModule, CommentForm, ReportButton],
   templateUrl: './comment-item.html',
   styleUrl: './comment-item.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, untracked } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -24,12 +23,13 @@ import { EntryRating } from '../rating/entry-rating';
 import { openRemixDialog } from '../remix/remix-dialog';
 import { ReportButton } from '../../moderation/report-dialog/report-button';
 import { ModeratorMenu } from '../../moderation/moderator-menu/moderator-menu';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** The design page of a published bar: drawings, cut plan, downloads, rating, lineage, shop log, comments, history. */
 @Component({
   selector: 'bw-entry-page',
   imports: [
-    DatePipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, CommentThread, EntryCard, EntryChangesView, EntryDownloads,
+    DateTextPipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, CommentThread, EntryCard, EntryChangesView, EntryDownloads,
     EntryDrawings, EntryRating, LineageView, PhotoGrid, ModeratorMenu, ReportButton, RevisionHistory,
   ],
   providers: [EntryStore],

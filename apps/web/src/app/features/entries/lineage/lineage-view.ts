@@ -1,13 +1,13 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import type { Lineage, LineageNode } from '@barwright/contracts';
 import { lineageRows } from './lineage-rows';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** The remix tree: the chain from the root to this bar, its remixes and theirs, and its siblings, each with a thumbnail. */
 @Component({
   selector: 'bw-lineage-view',
-  imports: [DatePipe, RouterLink],
+  imports: [DateTextPipe, RouterLink],
   templateUrl: './lineage-view.html',
   styleUrl: './lineage-view.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

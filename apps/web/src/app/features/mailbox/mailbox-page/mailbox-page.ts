@@ -1,5 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { DatePipe, DOCUMENT } from '@angular/common';
+import { DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -8,13 +8,14 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { filter, interval, map } from 'rxjs';
 import { MailboxStore } from '../mailbox-store';
 import { MessageView } from '../message-view/message-view';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** New mail shows up by itself: the page asks again this often while the tab is visible. */
 const POLL_MS = 5000;
 
 @Component({
   selector: 'bw-mailbox-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, MessageView],
+  imports: [DateTextPipe, MatButtonModule, MatIconModule, MatProgressBarModule, MessageView],
   providers: [MailboxStore],
   templateUrl: './mailbox-page.html',
   styleUrl: './mailbox-page.scss',

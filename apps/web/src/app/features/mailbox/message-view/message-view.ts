@@ -1,4 +1,4 @@
-import { DatePipe, DOCUMENT } from '@angular/common';
+import { DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -8,11 +8,12 @@ import { RouterLink } from '@angular/router';
 import type { MailboxMessage } from '@barwright/contracts';
 import { messageLinks } from '../message-links';
 import { framedMailHtml } from './framed-mail-html';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** One message: its header, the HTML part in a sandboxed frame, the text part, and its links as buttons. */
 @Component({
   selector: 'bw-message-view',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, MatTabsModule],
+  imports: [DateTextPipe, RouterLink, MatButtonModule, MatIconModule, MatTabsModule],
   templateUrl: './message-view.html',
   styleUrl: './message-view.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,6 +1,5 @@
 import { LiveAnnouncer } from '@angular/cdk/a11y';
 import { CdkDrag, CdkDragDrop, CdkDragHandle, CdkDropList } from '@angular/cdk/drag-drop';
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -18,6 +17,7 @@ import { fieldMessage } from '../../../shared/forms/field-message';
 import { CurationStore } from './curation-store';
 import { FeatureForm } from './feature-form';
 import { movedText } from './move-item';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /**
  * Showcase curation: the featured bars in the order the home page shows them. Reorder by
@@ -26,7 +26,7 @@ import { movedText } from './move-item';
  */
 @Component({
   selector: 'bw-showcase-curation-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, CdkDrag, CdkDragHandle, CdkDropList, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatTooltipModule, FeatureForm],
+  imports: [DateTextPipe, ReactiveFormsModule, RouterLink, CdkDrag, CdkDragHandle, CdkDropList, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatTooltipModule, FeatureForm],
   providers: [CurationStore],
   templateUrl: './showcase-curation-page.html',
   styleUrl: './showcase-curation-page.scss',

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -10,6 +9,7 @@ import { NotificationCenter } from '../../../core/notifications/notification-cen
 import { Notifier } from '../../../core/error-handling/notifier';
 import { KIND_ICONS, KIND_LABELS } from '../notification-list';
 import { NotificationsStore } from '../notifications-store';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 const EMAIL_CHOICES: readonly { mode: EmailMode; label: string; hint: string }[] = [
   { mode: 'immediate', label: 'Each one as it happens', hint: 'one e-mail per notification' },
@@ -20,7 +20,7 @@ const EMAIL_CHOICES: readonly { mode: EmailMode; label: string; hint: string }[]
 /** The member's notifications (live), marking read, and how they arrive by e-mail. */
 @Component({
   selector: 'bw-notifications-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, MatRadioModule],
+  imports: [DateTextPipe, MatButtonModule, MatIconModule, MatProgressBarModule, MatRadioModule],
   providers: [NotificationsStore],
   templateUrl: './notifications-page.html',
   styleUrl: './notifications-page.scss',

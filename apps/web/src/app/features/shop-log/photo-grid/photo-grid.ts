@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, effect, inject, input, output, signal, untracked } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -11,11 +10,12 @@ import { confirmWith } from '../../../shared/confirm-dialog/confirm-dialog';
 import { openPhotoUpload } from '../photo-upload-dialog/photo-upload-dialog';
 import { ShopLogApi, type PhotoTarget } from '../shop-log-api';
 import { ReportButton } from '../../moderation/report-dialog/report-button';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /** The shop log: photos of real cuts (trial cuts and keepers) as a grid, with the upload for members. */
 @Component({
   selector: 'bw-photo-grid',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, ReportButton],
+  imports: [DateTextPipe, RouterLink, MatButtonModule, MatIconModule, ReportButton],
   templateUrl: './photo-grid.html',
   styleUrl: './photo-grid.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
