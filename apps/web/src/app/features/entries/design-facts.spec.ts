@@ -5,10 +5,11 @@ import { setUpFacts } from './design-facts';
 describe('setUpFacts', () => {
   it('lists the set-up in the trade’s words, units beside every length', () => {
     const facts = Object.fromEntries(setUpFacts(EXAMPLE_DESIGN).map((f) => [f.label, f.value]));
-    expect(facts['Rosette']).toBe('24 lobes, sine, 1.5 mm peak to valley');
+    expect(facts['Rosette']).toBe('24 lobes, Sine, 1.5 mm peak to valley');
     expect(facts['End mill']).toBe('4.7625 mm diameter, 2 flutes');
     expect(facts['Rubber']).toBe('round, 1 mm radius');
-    expect(facts['Line study']).toBe('40 lines at 0.45 mm, phase barleycorn (alternate half-period)');
+    expect(facts['Line study']).toBe('40 lines at 0.45 mm');
+    expect(facts['Phase schedule']).toBe('Barleycorn');
     expect(facts['Bar']).toBe('150 mm × 7.9375 mm, A2 tool steel');
   });
 
@@ -20,6 +21,6 @@ describe('setUpFacts', () => {
     };
     const rosette = setUpFacts(design)[0];
     expect(rosette.label).toBe('Rosette (2 layers)');
-    expect(rosette.value).toBe('24 lobes, sine, 1.5 in peak to valley + 3 lobes, pointed, 0.02 in peak to valley');
+    expect(rosette.value).toBe('24 lobes, Sine, 1.5 in peak to valley + 3 lobes, Pointed, 0.02 in peak to valley');
   });
 });

@@ -1,5 +1,5 @@
-import { formatNumber, type Design, type PhaseSchedule } from '@barwright/contracts';
-import { MATERIAL_NAMES, WAVE_NAMES } from '../../shared/entry-facts/entry-facts';
+import { formatNumber, type Design } from '@barwright/contracts';
+import { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from '../../shared/entry-facts/entry-facts';
 
 /** One line of a design's set-up as the design page lists it, units beside the number. */
 export interface SetUpFact {
@@ -7,20 +7,11 @@ export interface SetUpFact {
   value: string;
 }
 
-const SCHEDULE_NAMES: Record<PhaseSchedule['kind'], string> = {
-  none: 'none (plain lines)',
-  alternate: 'barleycorn (alternate half-period)',
-  ramp: 'basket weave (ramp)',
-  sine: 'moiré (sinusoidal)',
-  twist: 'twist (linear)',
-  list: 'a list of phases',
-};
-
 /** The set-up of a bar design in the trade's words, lengths in the file's own units (pure). */
 export function setUpFacts(d: Design): SetUpFact[] {
   const len = (v: number) => `${formatNumber(v)} ${d.units}`;
   const layers = d.rosette.layers;
-  const rosette = layers.map((l) => `${l.lobes} lobes, ${WAVE_NAMES[l.wave.shape].toLowerCase()}, ${len(l.amplitude)} peak to valley`).join(' + ');
+  const rosette = layers.map((l) => `${l.lobes} lobes, ${WAVE_NAMES[l.wave.shape]}, ${len(l.amplitude)} peak to valley`).join(' + ');
   return [
     { label: layers.length > 1 ? `Rosette (${layers.length} layers)` : 'Rosette', value: rosette },
     { label: 'Rosette base radius', value: len(d.rosette.baseRadius) },
@@ -30,7 +21,8 @@ export function setUpFacts(d: Design): SetUpFact[] {
     { label: 'End mill', value: `${len(d.cutter.diameter)} diameter, ${d.cutter.flutes} ${d.cutter.flutes === 1 ? 'flute' : 'flutes'}` },
     { label: 'Bar', value: `${len(d.bar.length)} × ${len(d.bar.thickness)}, ${MATERIAL_NAMES[d.bar.material]}` },
     { label: 'Follower radius', value: len(d.follower.radius) },
-    { label: 'Line study', value: `${d.study.lines} lines at ${len(d.study.lineSpacing)}, phase ${SCHEDULE_NAMES[d.study.schedule.kind]}` },
+    { label: 'Line study', value: `${d.study.lines} lines at ${len(d.study.lineSpacing)}` },
+    { label: 'Phase schedule', value: SCHEDULE_NAMES[d.study.schedule.kind] },
     { label: 'V-cutter', value: `${formatNumber(d.study.vAngle)}° included, ${len(d.study.depth)} deep` },
   ];
 }

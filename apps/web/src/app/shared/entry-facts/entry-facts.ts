@@ -1,23 +1,8 @@
 import { formatLength } from '@barwright/engine';
-import { type MaterialId, type RatingSummary, type Units, type WaveShape } from '@barwright/contracts';
+import { type RatingSummary, type Units } from '@barwright/contracts';
 
-/** Wave shapes as a card names them (short; the studio's fields say more). */
-export const WAVE_NAMES: Readonly<Record<WaveShape, string>> = {
-  sine: 'Sine',
-  pointed: 'Pointed',
-  scallop: 'Scalloped',
-  flat: 'Flat-topped',
-  eccentric: 'Eccentric circle',
-  fourier: 'Fourier series',
-  measured: 'Measured',
-};
-
-export const MATERIAL_NAMES: Readonly<Record<MaterialId, string>> = {
-  acrylic: 'Acrylic',
-  brass: 'Brass',
-  a2: 'A2 tool steel',
-  custom: 'Custom material',
-};
+// The names of waves, materials and phase schedules live in the contracts, one table for the whole app.
+export { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from '@barwright/contracts';
 
 /** A cutter diameter given in mm, in the reader's units, a stock inch size named: "4.76 mm", "0.188 in (3/16)". */
 export function cutterText(mm: number, units: Units): string {

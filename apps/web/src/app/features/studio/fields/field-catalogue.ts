@@ -1,4 +1,4 @@
-import type { MaterialId, ScheduleKind, StudyDirection, WaveShape } from '@barwright/contracts';
+import { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES, type MaterialId, type ScheduleKind, type StudyDirection, type WaveShape } from '@barwright/contracts';
 
 /**
  * What a field of the design file measures, so the editor can show its unit and compare it in the
@@ -60,30 +60,31 @@ export const FIELDS: Readonly<Record<string, FieldInfo>> = {
   'plan.chipLoad': { label: 'Chip load per tooth', kind: 'length', slider: [0.005, 0.2] },
 };
 
+// Names from the one table in the contracts; the menus add a few words on what each is.
 export const WAVE_LABELS: Readonly<Record<WaveShape, string>> = {
-  sine: 'Sine',
-  pointed: 'Pointed (triangle)',
-  scallop: 'Scalloped (arcs meeting in cusps)',
-  flat: 'Flat-topped (clipped)',
-  eccentric: 'Eccentric circle',
-  fourier: 'Fourier series',
-  measured: 'Measured (table of readings)',
+  sine: WAVE_NAMES.sine,
+  pointed: `${WAVE_NAMES.pointed} (triangle)`,
+  scallop: `${WAVE_NAMES.scallop} (arcs meeting in cusps)`,
+  flat: `${WAVE_NAMES.flat} (clipped)`,
+  eccentric: WAVE_NAMES.eccentric,
+  fourier: WAVE_NAMES.fourier,
+  measured: `${WAVE_NAMES.measured} (table of readings)`,
 };
 
 export const SCHEDULE_LABELS: Readonly<Record<ScheduleKind, string>> = {
-  none: 'None (every line in phase)',
-  alternate: 'Alternate half-period (barleycorn)',
-  ramp: 'Triangular ramp (basket weave)',
-  sine: 'Sinusoidal (moiré)',
-  twist: 'Linear (twist)',
-  list: 'A list of phases',
+  none: `${SCHEDULE_NAMES.none} (every line in phase)`,
+  alternate: `${SCHEDULE_NAMES.alternate} (alternate half-period)`,
+  ramp: `${SCHEDULE_NAMES.ramp} (triangular ramp)`,
+  sine: `${SCHEDULE_NAMES.sine} (sinusoidal)`,
+  twist: `${SCHEDULE_NAMES.twist} (linear)`,
+  list: `${SCHEDULE_NAMES.list} (your own phases)`,
 };
 
 export const MATERIAL_LABELS: Readonly<Record<MaterialId, string>> = {
-  acrylic: 'Cast acrylic (trial cut)',
-  brass: 'Free-machining brass',
-  a2: 'A2 tool steel (keeper)',
-  custom: 'Custom (own figures)',
+  acrylic: `${MATERIAL_NAMES.acrylic} (cast, trial cut)`,
+  brass: `${MATERIAL_NAMES.brass} (free-machining)`,
+  a2: `${MATERIAL_NAMES.a2} (keeper)`,
+  custom: `${MATERIAL_NAMES.custom} (own figures)`,
 };
 
 export const PIVOT_LABELS: Readonly<Record<'linear' | 'rocking', string>> = {

@@ -33,7 +33,7 @@ describe('designDifferences', () => {
     const diff = designDifferences(EXAMPLE_DESIGN, now);
     expect(diff).toContainEqual({ path: 'rosette.layers[1].wave.shape', label: 'Layer 2 · Wave shape', before: '—', after: 'Flat-topped (clipped)' });
     expect(diff).toContainEqual({ path: 'rosette.layers[1].amplitude', label: 'Layer 2 · Amplitude, peak to valley', before: '—', after: '0.5 mm' });
-    expect(diff).toContainEqual({ path: 'study.schedule.kind', label: 'Phase schedule', before: 'Alternate half-period (barleycorn)', after: 'Triangular ramp (basket weave)' });
+    expect(diff).toContainEqual({ path: 'study.schedule.kind', label: 'Phase schedule', before: 'Barleycorn (alternate half-period)', after: 'Basket weave (triangular ramp)' });
     expect(diff).toContainEqual({ path: 'study.schedule.steps', label: 'Ramp steps', before: '—', after: '6' });
   });
 
