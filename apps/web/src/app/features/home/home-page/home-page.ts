@@ -1,3 +1,4 @@
+import { NgTemplateOutlet } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -24,7 +25,7 @@ interface NextStep {
 
 @Component({
   selector: 'bw-home-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule, EntryRow, ShowcaseSection],
+  imports: [NgTemplateOutlet, RouterLink, MatButtonModule, MatIconModule, EntryRow, ShowcaseSection],
   providers: [ShowcaseStore],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',

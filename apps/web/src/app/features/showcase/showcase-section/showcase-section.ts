@@ -1,9 +1,10 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import type { ShowcaseItem, Units } from '@barwright/contracts';
+import { showcaseColumns } from './showcase-columns';
 import { cutterText, ratingText, WAVE_NAMES } from '../../../shared/entry-facts/entry-facts';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
 /**
  * The showcase as the home page opens on it: the bars the moderators chose, in their order, each
@@ -11,7 +12,7 @@ import { cutterText, ratingText, WAVE_NAMES } from '../../../shared/entry-facts/
  */
 @Component({
   selector: 'bw-showcase-section',
-  imports: [DatePipe, RouterLink, MatIconModule],
+  imports: [DateTextPipe, RouterLink, MatIconModule],
   templateUrl: './showcase-section.html',
   styleUrl: './showcase-section.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -25,6 +26,9 @@ export class ShowcaseSection {
 
   protected readonly first = computed(() => this.items()?.[0] ?? null);
   protected readonly rest = computed(() => this.items()?.slice(1) ?? []);
+  /** Columns for the cards after the first on a wide screen, and on a tablet. */
+  protected readonly columns = computed(() => showcaseColumns(this.rest().length));
+  protected readonly columnsMid = computed(() => showcaseColumns(this.rest().length, 2));
   protected readonly waveNames = WAVE_NAMES;
   protected readonly cutter = (mm: number) => cutterText(mm, this.units());
   protected readonly rating = ratingText;
