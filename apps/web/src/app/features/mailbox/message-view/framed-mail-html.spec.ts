@@ -1,18 +1,23 @@
 import { describe, expect, it } from 'vitest';
-import { framedMailHtml } from './framed-mail-html';
+import { FRAME_HEAD, framedMailHtml } from './framed-mail-html';
 
 describe('framedMailHtml', () => {
-  it('puts the base element first inside an existing head', () => {
+  it('puts the frame head first inside an existing head', () => {
     expect(framedMailHtml('<!doctype html><html><head lang="en"><title>x</title></head><body>b</body></html>')).toBe(
-      '<!doctype html><html><head lang="en"><base target="_top"><title>x</title></head><body>b</body></html>',
+      `<!doctype html><html><head lang="en">${FRAME_HEAD}<title>x</title></head><body>b</body></html>`,
     );
   });
 
   it('prefixes a fragment', () => {
-    expect(framedMailHtml('<p>Hello</p>')).toBe('<base target="_top"><p>Hello</p>');
+    expect(framedMailHtml('<p>Hello</p>')).toBe(`${FRAME_HEAD}<p>Hello</p>`);
   });
 
   it('does not mistake <header> for <head>', () => {
-    expect(framedMailHtml('<header>h</header>')).toBe('<base target="_top"><header>h</header>');
+    expect(framedMailHtml('<header>h</header>')).toBe(`${FRAME_HEAD}<header>h</header>`);
+  });
+
+  it('sends links to the whole page and lets long addresses break', () => {
+    expect(FRAME_HEAD).toContain('<base target="_top">');
+    expect(FRAME_HEAD).toContain('overflow-wrap:anywhere');
   });
 });
