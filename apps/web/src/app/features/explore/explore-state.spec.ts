@@ -5,12 +5,12 @@ const AUTHOR = '3f1c2a4e-8b9d-4c1e-9f00-1a2b3c4d5e6f';
 
 describe('stateFromParams', () => {
   it('reads every filter from the URL with the contract’s own rules', () => {
-    const s = stateFromParams({ q: 'weave', lobes: '24', wave: 'sine', material: 'a2', cutterMin: '3', cutterMax: '6.35', tags: 'basket-weave,fine', author: AUTHOR, sort: 'top', page: '3', pageSize: '48', view: 'table' });
-    expect(s).toEqual({ q: 'weave', lobes: 24, wave: 'sine', material: 'a2', cutterMin: 3, cutterMax: 6.35, tags: ['basket-weave', 'fine'], author: AUTHOR, sort: 'top', page: 3, pageSize: 48, view: 'table' });
+    const s = stateFromParams({ q: 'weave', lobes: '24', wave: 'sine', material: 'a2', schedule: 'ramp', cutterMin: '3', cutterMax: '6.35', tags: 'basket-weave,fine', author: AUTHOR, sort: 'top', page: '3', pageSize: '48', view: 'table' });
+    expect(s).toEqual({ q: 'weave', lobes: 24, wave: 'sine', material: 'a2', schedule: 'ramp', cutterMin: 3, cutterMax: 6.35, tags: ['basket-weave', 'fine'], author: AUTHOR, sort: 'top', page: 3, pageSize: 48, view: 'table' });
   });
 
   it('drops what the server would refuse instead of failing the page', () => {
-    const s = stateFromParams({ lobes: '0', wave: 'zigzag', material: 'wood', cutterMin: '-1', author: 'maren', page: 'two', pageSize: '500', view: 'cards' });
+    const s = stateFromParams({ lobes: '0', wave: 'zigzag', material: 'wood', schedule: 'spiral', cutterMin: '-1', author: 'maren', page: 'two', pageSize: '500', view: 'cards' });
     expect(s).toEqual(EXPLORE_DEFAULTS);
   });
 

@@ -1,4 +1,4 @@
-import { EXPLORE_PAGE_SIZE_DEFAULT, exploreQuery, type ExploreSort, type MaterialId, type WaveShape } from '@barwright/contracts';
+import { EXPLORE_PAGE_SIZE_DEFAULT, exploreQuery, type ExploreSort, type MaterialId, type ScheduleKind, type WaveShape } from '@barwright/contracts';
 
 /** What Explore shows: the server's query plus how it is laid out. Lives in the URL, so it can be shared. */
 export interface ExploreState {
@@ -6,6 +6,8 @@ export interface ExploreState {
   lobes: number | null;
   wave: WaveShape | null;
   material: MaterialId | null;
+  /** The latest revision's phase schedule. */
+  schedule: ScheduleKind | null;
   /** Cutter (end mill) diameter range, millimetres. */
   cutterMin: number | null;
   cutterMax: number | null;
@@ -24,6 +26,7 @@ export const EXPLORE_DEFAULTS: ExploreState = {
   lobes: null,
   wave: null,
   material: null,
+  schedule: null,
   cutterMin: null,
   cutterMax: null,
   tags: [],
@@ -60,6 +63,7 @@ export function stateFromParams(params: Params): ExploreState {
     lobes: read(shape.lobes, first(params['lobes'])) ?? null,
     wave: read(shape.wave, first(params['wave'])) ?? null,
     material: read(shape.material, first(params['material'])) ?? null,
+    schedule: read(shape.schedule, first(params['schedule'])) ?? null,
     cutterMin: read(shape.cutterMin, first(params['cutterMin'])) ?? null,
     cutterMax: read(shape.cutterMax, first(params['cutterMax'])) ?? null,
     tags: (tagsRaw ? read(shape.tags, tagsRaw) : undefined) ?? [],
@@ -81,6 +85,7 @@ export function paramsFromState(s: ExploreState): Record<string, string | null> 
     lobes: num(s.lobes),
     wave: s.wave,
     material: s.material,
+    schedule: s.schedule,
     cutterMin: num(s.cutterMin),
     cutterMax: num(s.cutterMax),
     tags: s.tags.length ? s.tags.join(',') : null,
@@ -110,5 +115,5 @@ export function withChange(s: ExploreState, change: Partial<ExploreState>): Expl
 
 /** Count of filters set (the search and sort not included), for the "Filters (2)" label. */
 export function activeFilterCount(s: ExploreState): number {
-  return [s.lobes, s.wave, s.material, s.cutterMin, s.cutterMax, s.author].filter((v) => v !== null).length + (s.tags.length ? 1 : 0);
+  return [s.lobes, s.wave, s.material, s.schedule, s.cutterMin, s.cutterMax, s.author].filter((v) => v !== null).length + (s.tags.length ? 1 : 0);
 }

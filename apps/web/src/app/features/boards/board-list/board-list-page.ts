@@ -15,10 +15,11 @@ import { formProblem } from '../../../shared/forms/form-problem';
 import { injectInvalidFocus } from '../../../shared/forms/invalid-focus';
 import { BoardsStore } from '../boards-store';
 import { BoardCard } from './board-card';
+import { RouterLink } from '@angular/router';
 
 @Component({
   selector: 'bw-board-list-page',
-  imports: [BoardCard, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatSlideToggleModule],
+  imports: [BoardCard, RouterLink, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatSlideToggleModule],
   providers: [BoardsStore],
   templateUrl: './board-list-page.html',
   styleUrl: './board-list-page.scss',

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -13,11 +12,13 @@ import { askForName } from '../../../shared/name-dialog/name-dialog';
 import { keptFor } from '../bin-time';
 import { BoardStore } from '../board-store';
 import { askForNewDesign } from '../new-design-dialog/new-design-dialog';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
+import { DesignRowSketch } from './design-row-sketch';
 
 /** The designs on a board, and (for the owner) the bin of deleted designs still restorable. */
 @Component({
   selector: 'bw-board-designs',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, MatMenuModule],
+  imports: [DateTextPipe, RouterLink, MatButtonModule, MatIconModule, MatMenuModule, DesignRowSketch],
   templateUrl: './board-designs.html',
   styleUrl: './board-designs.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

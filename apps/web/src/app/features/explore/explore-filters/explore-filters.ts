@@ -6,9 +6,9 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import { exploreQuery, MATERIALS, WAVE_SHAPES, type MaterialId, type WaveShape } from '@barwright/contracts';
+import { exploreQuery, MATERIALS, SCHEDULE_KINDS, WAVE_SHAPES, type MaterialId, type ScheduleKind, type WaveShape } from '@barwright/contracts';
 import { debounceTime } from 'rxjs';
-import { MATERIAL_NAMES, WAVE_NAMES } from '../../../shared/entry-facts/entry-facts';
+import { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from '../../../shared/entry-facts/entry-facts';
 import { fieldMessage } from '../../../shared/forms/field-message';
 import { addTags } from '../../../shared/publish-dialog/tag-entry';
 import type { ExploreState } from '../explore-state';
@@ -32,6 +32,7 @@ export class ExploreFilters {
     lobes: new FormControl<number | null>(null, optionalContract(exploreQuery.shape.lobes)),
     wave: new FormControl<WaveShape | null>(null),
     material: new FormControl<MaterialId | null>(null),
+    schedule: new FormControl<ScheduleKind | null>(null),
     cutterMin: new FormControl<number | null>(null, optionalContract(exploreQuery.shape.cutterMin)),
     cutterMax: new FormControl<number | null>(null, optionalContract(exploreQuery.shape.cutterMax)),
     tags: new FormControl('', { nonNullable: true }),
@@ -41,6 +42,8 @@ export class ExploreFilters {
   protected readonly waveName = WAVE_NAMES;
   protected readonly materials = MATERIALS;
   protected readonly materialName = MATERIAL_NAMES;
+  protected readonly schedules = SCHEDULE_KINDS;
+  protected readonly scheduleName = SCHEDULE_NAMES;
   protected readonly fieldMessage = fieldMessage;
 
   constructor() {
@@ -56,6 +59,7 @@ export class ExploreFilters {
         sync(c.lobes, s.lobes, !c.lobes.valid || c.lobes.value === s.lobes);
         sync(c.wave, s.wave);
         sync(c.material, s.material);
+        sync(c.schedule, s.schedule);
         sync(c.cutterMin, s.cutterMin, !c.cutterMin.valid || c.cutterMin.value === s.cutterMin);
         sync(c.cutterMax, s.cutterMax, !c.cutterMax.valid || c.cutterMax.value === s.cutterMax);
         sync(c.tags, s.tags.join(', '), addTags([], c.tags.value).tags.join(',') === s.tags.join(','));
@@ -70,7 +74,7 @@ export class ExploreFilters {
 
   protected clearAll(): void {
     this.tagProblem.set(null);
-    this.changed.emit({ lobes: null, wave: null, material: null, cutterMin: null, cutterMax: null, tags: [], author: null });
+    this.changed.emit({ lobes: null, wave: null, material: null, schedule: null, cutterMin: null, cutterMax: null, tags: [], author: null });
   }
 
   private apply(): void {
@@ -88,6 +92,7 @@ export class ExploreFilters {
       lobes: this.form.controls.lobes.valid ? v.lobes : this.state().lobes,
       wave: v.wave,
       material: v.material,
+      schedule: v.schedule,
       cutterMin: min,
       cutterMax: max,
       tags: entry.tags,

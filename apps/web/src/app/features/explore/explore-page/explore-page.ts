@@ -30,6 +30,7 @@ const SORT_LABELS: Record<ExploreSort, string> = {
   newest: 'Newest',
   remixed: 'Most remixed',
   discussed: 'Most discussed',
+  schedule: 'Phase schedule',
 };
 
 /** Explore: every published bar, filtered, searched, sorted and paged on the server; the query lives in the URL. */
@@ -57,7 +58,7 @@ export class ExplorePage {
   protected readonly filtersOpen = signal(false);
   protected readonly filterCount = computed(() => activeFilterCount(this.state()));
   protected readonly pageSizes = PAGE_SIZES;
-  protected readonly sorts = computed<ExploreSort[]>(() => (this.state().q ? ['relevance', 'top', 'newest', 'remixed', 'discussed'] : ['top', 'newest', 'remixed', 'discussed']));
+  protected readonly sorts = computed<ExploreSort[]>(() => (this.state().q ? ['relevance', 'top', 'newest', 'remixed', 'discussed', 'schedule'] : ['top', 'newest', 'remixed', 'discussed', 'schedule']));
   protected readonly sortLabel = SORT_LABELS;
   protected readonly shownSort = computed<ExploreSort>(() => this.state().sort ?? this.store.page()?.sort ?? (this.state().q ? 'relevance' : 'newest'));
   protected readonly summary = computed(() => {

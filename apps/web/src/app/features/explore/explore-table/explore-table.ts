@@ -1,24 +1,21 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import type { EntryCard, Units } from '@barwright/contracts';
-import { cutterText, MATERIAL_NAMES, WAVE_NAMES } from '../../../shared/entry-facts/entry-facts';
+import { cutterText, MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from '../../../shared/entry-facts/entry-facts';
+import { DateTextPipe } from '../../../shared/dates/date-text-pipe';
 
-/** Explore as a table: one bar a row, for comparing figures side by side. Scrolls sideways on a phone. */
+/** Explore as a table: one bar a row, for comparing figures side by side; fits the results column at 1280 px, scrolls sideways on a phone. */
 @Component({
   selector: 'bw-explore-table',
-  imports: [DatePipe, RouterLink],
+  imports: [DateTextPipe, RouterLink],
   template: `
     <div class="scroller" role="region" aria-label="Published bars, as a table" tabindex="0">
       <table data-testid="explore-table">
         <thead>
           <tr>
             <th scope="col">Bar</th>
-            <th scope="col">Author</th>
-            <th scope="col" class="num">Lobes</th>
-            <th scope="col">Wave</th>
-            <th scope="col">Material</th>
-            <th scope="col" class="num">Cutter</th>
+            <th scope="col">Pattern</th>
+            <th scope="col">Cut in</th>
             <th scope="col" class="num">Rating</th>
             <th scope="col" class="num">Remixes</th>
             <th scope="col" class="num">Comments</th>
@@ -29,18 +26,18 @@ import { cutterText, MATERIAL_NAMES, WAVE_NAMES } from '../../../shared/entry-fa
           @for (e of entries(); track e.id) {
             <tr data-testid="explore-row">
               <th scope="row" class="bar">
-                <img [src]="e.thumbnailUrl" alt="" width="64" height="48" loading="lazy" />
-                <a [routerLink]="['/entries', e.id]" data-testid="explore-row-link">{{ e.title }}</a>
+                <img [src]="e.thumbnailUrl" alt="" width="112" height="84" loading="lazy" />
+                <span class="name">
+                  <a [routerLink]="['/entries', e.id]" [title]="e.title" data-testid="explore-row-link">{{ e.title }}</a>
+                  <button type="button" class="author" (click)="authorChosen.emit(e.author)" [attr.aria-label]="'More bars by ' + e.author.displayName">{{ e.author.displayName }}</button>
+                </span>
               </th>
-              <td><button type="button" class="author" (click)="authorChosen.emit(e.author)" [attr.aria-label]="'More bars by ' + e.author.displayName">{{ e.author.displayName }}</button></td>
-              <td class="num">{{ e.lobes }}</td>
-              <td>{{ waveName[e.wave] }}</td>
-              <td>{{ materialName[e.material] }}</td>
-              <td class="num">{{ cutter(e.cutterDiameterMm) }}</td>
+              <td>{{ e.lobes }} lobes, {{ waveName[e.wave] }}@if (e.schedule) {<br /><span class="muted" data-testid="explore-row-schedule">{{ scheduleName[e.schedule] }}</span>}</td>
+              <td>{{ materialName[e.material] }}<br /><span class="muted">{{ cutter(e.cutterDiameterMm) }} cutter</span></td>
               <td class="num">{{ e.rating.mean === null ? '—' : e.rating.mean.toFixed(1) }} <span class="muted">({{ e.rating.count }})</span></td>
               <td class="num">{{ e.remixCount }}</td>
               <td class="num">{{ e.commentCount }}</td>
-              <td><time [attr.datetime]="e.publishedAt">{{ e.publishedAt | date: 'mediumDate' }}</time></td>
+              <td class="date"><time [attr.datetime]="e.publishedAt">{{ e.publishedAt | dateText }}</time></td>
             </tr>
           }
         </tbody>
@@ -56,6 +53,7 @@ export class ExploreTable {
   readonly authorChosen = output<{ id: string; displayName: string }>();
   protected readonly waveName = WAVE_NAMES;
   protected readonly materialName = MATERIAL_NAMES;
+  protected readonly scheduleName = SCHEDULE_NAMES;
 
   protected cutter(mm: number): string {
     return cutterText(mm, this.units());

@@ -1,0 +1,39 @@
+import type { Design } from '@barwright/contracts';
+import { computeLineStudy, computeProfile } from '@barwright/engine';
+import { studyDrawing, type StudyDrawing } from '../views/study-drawing';
+import type { StudyData } from '../views/view-data';
+
+/** Samples per period on the bar: enough for a picture a few centimetres wide, a fraction of the studio's work. */
+const SAMPLES_PER_PERIOD = 60;
+/** Periods shown: enough for the phase schedule to read as a pattern. */
+const PERIODS_SHOWN = 4;
+/** Lines drawn at most, from the first: a small picture shows the pattern, not every line. */
+const LINES_SHOWN = 24;
+
+/**
+ * A small flat line study of a design: a few periods from the middle of the bar, computed by the
+ * engine on a coarse grid. Null when the design cannot be computed (a file that is not valid) (pure).
+ */
+export function designSketchDrawing(design: Design): StudyDrawing | null {
+  try {
+    const perMm = design.units === 'in' ? 25.4 : 1;
+    const lobes = Math.max(1, ...design.rosette.layers.map((l) => l.lobes));
+    const periodMm = (design.motion.travelPerRev * perMm) / lobes;
+    if (!(Number.isFinite(periodMm) && periodMm > 0)) return null; // no grid to sample on
+    const lines = Math.min(design.study.lines, LINES_SHOWN);
+    const small: Design = { ...design, study: { ...design.study, lines } };
+    const profile = computeProfile(small, { step: periodMm / SAMPLES_PER_PERIOD });
+    const study = computeLineStudy(small, profile);
+    const data: StudyData = {
+      spacing: study.spacing,
+      width: study.width,
+      length: study.length,
+      depth: design.study.depth * perMm,
+      vAngle: design.study.vAngle,
+      lines: study.lines.map((line) => Float64Array.from(line.points.flat())),
+    };
+    return studyDrawing(data, PERIODS_SHOWN * profile.period);
+  } catch {
+    return null;
+  }
+}
