@@ -162,6 +162,11 @@ test('a moderator curates the showcase and hides a reported comment; members see
   await expect(tobias.page.getByTestId('nav-badge')).toHaveCount(0);
   await tobias.page.getByTestId('desk-tab-hidden').click();
   await expect(tobias.page.getByTestId('case').filter({ hasText: SPAM }).getByTestId('case-restore')).toBeVisible();
+  // Cancel means cancel: the restore dialog closed with Cancel restores nothing.
+  await tobias.page.getByTestId('case').filter({ hasText: SPAM }).getByTestId('case-restore').click();
+  await tobias.page.getByTestId('decision-cancel').click();
+  await expect(tobias.page.getByRole('dialog')).toHaveCount(0);
+  await expect(tobias.page.getByTestId('case').filter({ hasText: SPAM }).getByTestId('case-hidden')).toBeVisible();
   await shootFromTop(tobias.page, 'moderation-hidden');
 
   // Gone for members and visitors; shown to its author with the reason.

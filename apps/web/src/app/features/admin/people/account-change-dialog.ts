@@ -32,7 +32,8 @@ export interface AccountChangeRequest {
       </form>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close data-testid="account-change-cancel">Cancel</button>
+      <!-- Bare mat-dialog-close would close with "", which reads as a confirmation without a reason. -->
+      <button mat-button type="button" [mat-dialog-close]="undefined" data-testid="account-change-cancel">Cancel</button>
       <button mat-flat-button type="submit" form="account-change-form" [class.danger]="wording.danger" data-testid="account-change-confirm">{{ wording.confirm }}</button>
     </mat-dialog-actions>
   `,

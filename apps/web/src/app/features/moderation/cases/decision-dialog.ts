@@ -56,7 +56,8 @@ export function wordingFor(r: DecisionRequest): Wording {
       </form>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close>Cancel</button>
+      <!-- Bare mat-dialog-close would close with "", which reads as going ahead with an empty note. -->
+      <button mat-button type="button" [mat-dialog-close]="undefined" data-testid="decision-cancel">Cancel</button>
       <button mat-flat-button type="submit" form="decision-form" [class.danger]="wording.danger" data-testid="decision-confirm">{{ wording.confirm }}</button>
     </mat-dialog-actions>
   `,
