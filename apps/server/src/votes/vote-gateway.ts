@@ -3,7 +3,9 @@ import type { Namespace, Server, Socket } from 'socket.io';
 import { userRoom, VOTE_REFUSALS, type RankedDesign, VOTES_NAMESPACE, type VoteClientEvents, type VoteServerEvents } from '@barwright/contracts';
 import type { Db } from '../database/database';
 import { findUserById } from '../auth/users';
-import type { BoardAccessEvents } from '../boards/board-access';
+import { eq } from 'drizzle-orm';
+import { votes as voteTable } from '../../../../db/schema';
+import { boardRoleOf, type BoardAccessEvents } from '../boards/board-access';
 import { isUuid } from '../http/uuid';
 import { overSocketCap, sessionIdOf, sessionRoom, sessionUser, TOO_MANY_SOCKETS } from '../realtime/handshake-session';
 import { DEFAULT_REALTIME_LIMITS, type RealtimeLimits } from '../realtime/realtime-limits';
@@ -109,8 +111,15 @@ export class VoteGateway {
     void socket.leave(voteRoom(voteId));
   }
 
-  /** A role changed or ended on a board: this instance's sockets watching its votes are checked again. */
+  /**
+   * A role changed or ended on a board. A member who is no longer on it leaves the rooms of its votes on
+   * every instance (socketsLeave goes through the adapter); this instance's sockets also forget them.
+   */
   private async recheck(boardId: string, userId?: string) {
+    if (userId && !(await boardRoleOf(this.deps.db, boardId, userId))) {
+      const onBoard = await this.deps.db.select({ id: voteTable.id }).from(voteTable).where(eq(voteTable.boardId, boardId));
+      if (onBoard.length) this.namespace.in(userRoom(userId)).socketsLeave(onBoard.map((v) => voteRoom(v.id)));
+    }
     for (const socket of this.namespace.sockets.values()) {
       if (userId && socket.data.userId !== userId) continue;
       const watched = socket.data.votes as Map<string, string>;
