@@ -12,7 +12,7 @@ import { fileURLToPath } from 'node:url';
 import * as esbuild from 'esbuild';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const outdir = path.join(root, 'dist/server');
+const defaultOutdir = path.join(root, 'dist/server');
 
 /** Bare imports are npm packages (external), except our workspaces, whose package.json points at TypeScript. */
 const npmPackagesExternal = {
@@ -25,7 +25,8 @@ const npmPackagesExternal = {
   },
 };
 
-export async function buildServer({ quiet = false } = {}) {
+/** `outdir`: dist/server unless given (a benchmark may build a copy of its own elsewhere). */
+export async function buildServer({ quiet = false, outdir = defaultOutdir } = {}) {
   const started = performance.now();
   fs.rmSync(outdir, { recursive: true, force: true });
   const result = await esbuild.build({
@@ -54,7 +55,7 @@ export async function buildServer({ quiet = false } = {}) {
   fs.writeFileSync(path.join(outdir, 'package.json'), JSON.stringify({ type: 'module', private: true }, null, 2) + '\n');
   if (!quiet) {
     const bytes = Object.values(result.metafile.outputs).reduce((sum, o) => sum + o.bytes, 0);
-    console.log(`server: dist/server in ${Math.round(performance.now() - started)} ms (${(bytes / 1024).toFixed(0)} kB with source maps)`);
+    console.log(`server: ${path.relative(root, outdir)} in ${Math.round(performance.now() - started)} ms (${(bytes / 1024).toFixed(0)} kB with source maps)`);
   }
   return result;
 }

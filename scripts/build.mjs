@@ -1,4 +1,5 @@
-// `npm run build`: the web app (ng build, into dist/web) and the server (esbuild, into dist/server).
+// `npm run build`: the web app (ng build, into dist/web), the server (esbuild, into dist/server) and the
+// new-database template (dist/pglite-template, only remade when the migrations change).
 // `--if-stale`: only what is missing or older than its sources (what `npm start` uses). Each part
 // leaves a stamp with the time its build began; a source file newer than the stamp makes it stale.
 import fs from 'node:fs';
@@ -29,6 +30,16 @@ export const PARTS = {
     sources: [...shared, 'apps/server/src', 'db', 'seeds', 'scripts/build-server.mjs'],
     tool: 'node_modules/esbuild/package.json',
     build: async () => (await import('./build-server.mjs')).buildServer(),
+  },
+  // A pristine database (initdb + migrations) that a new data directory starts from (database/database.ts).
+  template: {
+    stamp: 'dist/pglite-template/.built',
+    sources: ['db/migrations', 'package-lock.json', 'scripts/pglite-template.mjs'],
+    tool: 'node_modules/@electric-sql/pglite/package.json',
+    build: () => {
+      const status = spawnSync(process.execPath, ['--liftoff-only', path.join(root, 'scripts/pglite-template.mjs')], { cwd: root, stdio: 'inherit' }).status;
+      if (status !== 0) throw new Error(`the new-database template failed (exit ${status})`);
+    },
   },
 };
 
@@ -90,7 +101,7 @@ if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.me
   const ifStale = process.argv.includes('--if-stale');
   const names = process.argv.slice(2).filter((a) => !a.startsWith('--'));
   try {
-    await buildParts(names.length ? names : ['web', 'server'], { ifStale });
+    await buildParts(names.length ? names : ['web', 'server', 'template'], { ifStale });
   } catch (error) {
     console.error(error.message);
     process.exit(1);

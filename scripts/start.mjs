@@ -17,7 +17,7 @@ const compiled = path.join(root, 'dist/server', `${entry}.js`);
 if (!noBuild) {
   const { buildParts } = await import('./build.mjs');
   try {
-    await buildParts(entry === 'main' ? ['web', 'server'] : ['server'], { ifStale: true });
+    await buildParts(entry === 'main' ? ['web', 'server', 'template'] : ['server', 'template'], { ifStale: true });
   } catch (error) {
     console.error(`[barwright] ${error.message}`);
     process.exit(1);

@@ -1,65 +1,56 @@
 /**
- * Foundation figures: cold start on a new and on an existing data directory, the production
- * initial transfer size (gzip, fonts aside), sign-in throughput with argon2id, and /api/health
- * latency with 20 heavy exports in flight (the compute pool's budget), and the compiled server's
- * start against the tsx start.
- * Run with `npm run bench -w apps/server` (after `npm run build` for the transfer size).
+ * Foundation figures, each as a client sees it: spawn to `/api/health/ready` answering 200 for the
+ * compiled server (`node dist/server/main.js`, what `npm start` runs) on a new and on an existing
+ * data directory (medians of several starts), its resident memory idle and at its peak, the initial
+ * transfer as sent (index.html and the files it names, fetched with `Accept-Encoding: br, gzip`, the
+ * bytes on the wire), sign-in throughput with argon2id, and /api/health latency with 20 heavy exports
+ * in flight (the compute pool's budget). Route chunks a page loads later are in the browser benchmark
+ * (apps/web/bench). Run with `npm run bench -w apps/server` after `npm run build`.
  */
 import fs from 'node:fs';
+import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
-import zlib from 'node:zlib';
-import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { healthUnderHeavyExports } from './heavy-export-load';
+import { measureStart, type StartFigures } from './start-memory';
 
 const root = fileURLToPath(new URL('../../../', import.meta.url));
+const COMPILED = 'dist/server/main.js';
+const STARTS = Number(process.env.BENCH_STARTS ?? 3);
+const TARGETS = { existingReadyS: 3, newReadyS: 10, idleMb: 300, newPeakMb: 500 };
 
-/** Starts main.ts through tsx, or with `compiled` the build in dist/server (node alone); `ms` runs from spawn to "ready". */
-function startServer(dataDir: string, port: number, { compiled = false } = {}): Promise<{ ms: number; stop: () => Promise<void> }> {
-  const started = performance.now();
-  const child = spawn(process.execPath, compiled ? ['dist/server/main.js'] : ['--import', 'tsx', 'apps/server/src/main.ts'], {
-    cwd: root,
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, HOST: '127.0.0.1' },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+const startCompiled = (dataDir: string, port: number): Promise<StartFigures> =>
+  measureStart({ cwd: root, args: [COMPILED], env: { DATA_DIR: dataDir }, port, idleMs: 3000, timeoutMs: 180_000 });
+
+/** The GET's bytes as they arrive (no decoding), with the encoding the server chose. */
+function wireBytes(url: string): Promise<{ bytes: number; encoding?: string; body: Buffer }> {
   return new Promise((resolve, reject) => {
-    child.stdout.on('data', (chunk: Buffer) => {
-      if (chunk.toString().includes('ready in')) {
-        resolve({
-          ms: performance.now() - started,
-          stop: () => new Promise((r) => { child.on('exit', () => r()); child.kill('SIGTERM'); }),
-        });
-      }
-    });
-    child.on('exit', (code) => reject(new Error(`server exited with ${code}`)));
+    http.get(url, { headers: { 'accept-encoding': 'br, gzip' } }, (res) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => resolve({ bytes: Buffer.concat(chunks).length, encoding: res.headers['content-encoding'], body: Buffer.concat(chunks) }));
+    }).on('error', reject);
   });
 }
 
-/** Spawn-to-ready of the compiled server against the tsx start on the same data directory, taken in turns. */
-async function compiledAgainstTsx(dataDir: string, port: number, runs = 3) {
-  if (!fs.existsSync(path.join(root, 'dist/server/main.js'))) return undefined;
-  const times = { compiled: [] as number[], tsx: [] as number[] };
-  for (let i = 0; i < runs; i++) {
-    for (const compiled of [true, false]) {
-      const server = await startServer(dataDir, port, { compiled });
-      times[compiled ? 'compiled' : 'tsx'].push(server.ms);
-      await server.stop();
-    }
-  }
-  const median = (xs: number[]) => xs.sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-  return { runs, compiled: median(times.compiled), tsx: median(times.tsx) };
-}
-
-function initialTransfer(): { files: number; gzipKb: number } | undefined {
+/** index.html and the scripts and styles it names, as the server sends them (fonts aside). */
+async function initialTransfer(base: string): Promise<{ files: number; kB: number; rawKB: number; encodings: string } | undefined> {
   const dist = path.join(root, 'dist/web/browser');
   const indexFile = path.join(dist, 'index.html');
   if (!fs.existsSync(indexFile)) return undefined;
   const html = fs.readFileSync(indexFile, 'utf8');
-  const refs = [...html.matchAll(/(?:src|href)="([^"]+\.(?:js|css))"/g)].map((m) => m[1]);
-  let bytes = zlib.gzipSync(html).length;
-  for (const ref of refs) bytes += zlib.gzipSync(fs.readFileSync(path.join(dist, ref))).length;
-  return { files: refs.length + 1, gzipKb: bytes / 1024 };
+  const refs = ['/', ...[...html.matchAll(/(?:src|href)="([^"]+\.(?:js|css))"/g)].map((m) => '/' + m[1].replace(/^\//, ''))];
+  let bytes = 0;
+  let raw = 0;
+  const encodings = new Set<string>();
+  for (const ref of refs) {
+    const got = await wireBytes(base + ref);
+    bytes += got.bytes;
+    encodings.add(got.encoding ?? 'none');
+    raw += fs.statSync(path.join(dist, ref === '/' ? 'index.html' : ref)).size;
+  }
+  return { files: refs.length, kB: bytes / 1024, rawKB: raw / 1024, encodings: [...encodings].join('/') };
 }
 
 async function signInThroughput(port: number, total: number, concurrency: number) {
@@ -81,22 +72,45 @@ async function signInThroughput(port: number, total: number, concurrency: number
   return (total / (performance.now() - started)) * 1000;
 }
 
-const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-bench-'));
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const mb = (x?: number) => (x === undefined ? 'n/a' : `${x.toFixed(0)} MB`);
+if (!fs.existsSync(path.join(root, COMPILED))) {
+  console.error(`${COMPILED} is missing: run \`npm run build\` first`);
+  process.exit(1);
+}
+const base = fs.mkdtempSync(path.join(os.tmpdir(), 'bw-bench-'));
 const port = 3300 + Math.floor(Math.random() * 500);
-const cold = await startServer(dataDir, port);
-await cold.stop();
-const warm = await startServer(dataDir, port);
+const fresh: StartFigures[] = [];
+for (let i = 0; i < Math.max(1, STARTS - 1); i++) {
+  const s = await startCompiled(path.join(base, `new-${i}`), port);
+  fresh.push(s);
+  await s.stop();
+}
+const existingDir = path.join(base, 'new-0');
+const existing: StartFigures[] = [];
+for (let i = 0; i < STARTS; i++) {
+  const s = await startCompiled(existingDir, port);
+  existing.push(s);
+  if (i < STARTS - 1) await s.stop();
+}
+const running = existing[existing.length - 1];
+const url = `http://127.0.0.1:${port}`;
+const transfer = await initialTransfer(url);
 // The sign-in limiter allows 30 per address per window; stay under it so argon2id is what is measured.
 const perSecond = await signInThroughput(port, 25, 4);
-const heavy = await healthUnderHeavyExports(`http://127.0.0.1:${port}`, 'maren@example.test', 'marsh-lathe-demo-2026');
-await warm.stop();
-const starts = await compiledAgainstTsx(dataDir, port);
-fs.rmSync(dataDir, { recursive: true, force: true });
-const transfer = initialTransfer();
+const heavy = await healthUnderHeavyExports(url, 'maren@example.test', 'marsh-lathe-demo-2026');
+await running.stop();
+fs.rmSync(base, { recursive: true, force: true });
 
-console.log(`cold start, new data directory:      ${cold.ms.toFixed(0)} ms (migrate + seed + listen, tsx included)`);
-console.log(`cold start, existing data directory: ${warm.ms.toFixed(0)} ms`);
-console.log(starts ? `cold start, existing data directory, median of ${starts.runs}: compiled (node dist/server/main.js) ${starts.compiled.toFixed(0)} ms, tsx ${starts.tsx.toFixed(0)} ms` : 'compiled start: build the server first (npm run build)');
+const readyNew = median(fresh.map((s) => s.readyMs)) / 1000;
+const readyExisting = median(existing.map((s) => s.readyMs)) / 1000;
+const idle = median(existing.map((s) => s.idleRssMb ?? NaN));
+const peakNew = Math.max(...fresh.map((s) => s.peakRssMb ?? NaN));
+const met = (ok: boolean) => (ok ? 'met' : 'not met');
+console.log(`compiled server, spawn to ready (GET /api/health/ready 200), ${os.cpus().length} cores, load average ${os.loadavg()[0].toFixed(1)}:`);
+console.log(`  new data directory (template + migrations + demo seed): median ${readyNew.toFixed(1)} s of ${fresh.length} (${fresh.map((s) => (s.readyMs / 1000).toFixed(1)).join(', ')}) (target < ${TARGETS.newReadyS} s: ${met(readyNew < TARGETS.newReadyS)})`);
+console.log(`  existing data directory: median ${readyExisting.toFixed(1)} s of ${existing.length} (${existing.map((s) => (s.readyMs / 1000).toFixed(1)).join(', ')}) (target < ${TARGETS.existingReadyS} s: ${met(readyExisting < TARGETS.existingReadyS)})`);
+console.log(`resident memory: idle on the existing demo directory ${mb(idle)} (target < ${TARGETS.idleMb} MB: ${met(idle < TARGETS.idleMb)}); creating a new directory, peak ${mb(peakNew)} (target < ${TARGETS.newPeakMb} MB: ${met(peakNew < TARGETS.newPeakMb)}), then idle ${mb(median(fresh.map((s) => s.idleRssMb ?? NaN)))}`);
 console.log(`/api/health with 20 heavy exports in flight: p95 ${heavy.p95.toFixed(1)} ms, max ${heavy.max.toFixed(1)} ms over ${heavy.probes} probes (after their arrival: p95 ${heavy.settledP95.toFixed(1)} ms; target < 100 ms); exports ${heavy.ok} × 200, ${heavy.busy} × 503${heavy.other ? `, ${heavy.other} other` : ''}`);
 console.log(`sign-in throughput (argon2id m=19 MiB t=2 p=1, ${os.cpus().length} cores): ${perSecond.toFixed(1)} per second`);
-console.log(transfer ? `initial transfer (gzip, fonts aside): ${transfer.gzipKb.toFixed(1)} kB in ${transfer.files} files (target < 250 kB)` : 'initial transfer: build the web app first (npm run build)');
+console.log(transfer ? `initial transfer as sent (index.html and the ${transfer.files - 1} files it names, ${transfer.encodings}; fonts and route chunks aside): ${transfer.kB.toFixed(1)} kB (${transfer.rawKB.toFixed(0)} kB as built; target < 250 kB)` : 'initial transfer: build the web app first (npm run build)');

@@ -140,9 +140,9 @@ export function createApp(deps: AppDeps): express.Express {
   api.use(compression({ threshold: 1024 }));
   api.use(express.json({ limit: '256kb' }));
   api.use(refuseHostileShapes);
-  const openapi = openApiDocument();
+  let openapi: ReturnType<typeof openApiDocument> | undefined; // built when first asked for, not at every start
   api.get('/openapi.json', (_req, res) => {
-    res.json(openapi);
+    res.json((openapi ??= openApiDocument()));
   });
   // A visitor's request reads no session row and writes none (saveUninitialized: false, and the XSRF
   // token needs no session); a signed-in one is read once and its rolling expiry written at most once a minute.

@@ -18,10 +18,8 @@ import { NotifyGateway } from './notifications/notify-gateway';
 import { DIGEST_CHECK_MS, sendDueDigests } from './notifications/digests';
 import { ModerationGateway } from './moderation/moderation-gateway';
 import { VoteGateway } from './votes/vote-gateway';
-import { VoteGateway } from './votes/vote-gateway';
 // Several instances (REDIS_URL): socket.io rooms, the co-editing relay and the rate-limit counters in Redis.
-import { createAdapter } from '@socket.io/redis-streams-adapter';
-import { openRedis } from './cluster/redis-connection';
+// The Redis client and adapter are imported below only when REDIS_URL is set (a one-process start loads neither).
 import { redisRateLimitStores } from './http/rate-limits';
 import { DesignDocStore } from './realtime/design-doc-store';
 import { RedisRelay } from './realtime/redis-relay';
@@ -40,7 +38,8 @@ async function main() {
   for (const line of configWarnings(config)) console.warn(`[barwright] ${line}`);
   const photoStorage = await openPhotoStorage(config);
   const { database, release, fresh } = await openConfiguredDatabase(config, log);
-  const redis = config.redisUrl ? await openRedis(config.redisUrl, log, { prefix: config.redisPrefix }) : undefined;
+  const redis = config.redisUrl ? await (await import('./cluster/redis-connection')).openRedis(config.redisUrl, log, { prefix: config.redisPrefix }) : undefined;
+  const createAdapter = redis && (await import('@socket.io/redis-streams-adapter')).createAdapter;
   // One store for the app and the gateway: each stored update is published to the other instances.
   const designDocStore = new DesignDocStore(database.db, undefined, (designId, seq, update) => relay?.published(designId, seq, update));
   const relay = redis && new RedisRelay(redis, designDocStore, console.error);
@@ -56,7 +55,6 @@ async function main() {
   let notify: NotifyGateway | undefined;
   let moderation: ModerationGateway | undefined;
   let votes: VoteGateway | undefined;
-  let votes: VoteGateway | undefined;
   // Browsers may open the realtime sockets from these origins only (a page on another port of this host may not).
   const origins = allowedOrigins(config.publicUrl, config.extraOrigins);
   const notificationEvents = new NotificationEvents();
@@ -71,13 +69,11 @@ async function main() {
       notify?.disconnectUser(userId);
       moderation?.disconnectUser(userId);
       votes?.disconnectUser(userId);
-      votes?.disconnectUser(userId);
     },
     closeSessionSockets: (sessionId) => {
       gateway?.closeEverywhere({ sessionId }, CLOSE_CODES.unauthorized, 'signed out');
       notify?.disconnectSession(sessionId);
       moderation?.disconnectSession(sessionId);
-      votes?.disconnectSession(sessionId);
       votes?.disconnectSession(sessionId);
     },
     db: database.db,
@@ -100,14 +96,10 @@ async function main() {
   const server = http.createServer(app);
   gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins, store: designDocStore, relay });
   gateway.attach(server);
-  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins, adapter: redis && createAdapter(redis.client, { streamName: `${redis.prefix}:socket.io`, channelPrefix: `${redis.prefix}:socket.io` }) });
+  notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins, adapter: redis && createAdapter && createAdapter(redis.client, { streamName: `${redis.prefix}:socket.io`, channelPrefix: `${redis.prefix}:socket.io` }) });
   notify.attach(server);
   // The desk's live count, a namespace on the notification socket; it drops whoever loses the moderator role.
   moderation = new ModerationGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: (app.locals as AppLocals).moderationEvents });
-  // Live vote rankings, another namespace; votes past their closing time are closed (and members told) every minute.
-  votes = new VoteGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, votes: (app.locals as AppLocals).votes, accessEvents });
-  const voteCloser = setInterval(() => void (app.locals as AppLocals).votes.closeDue().catch(console.error), 60_000);
-  voteCloser.unref();
   // Live vote rankings, another namespace; votes past their closing time are closed (and members told) every minute.
   votes = new VoteGateway({ io: notify.io, db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, votes: (app.locals as AppLocals).votes, accessEvents });
   const voteCloser = setInterval(() => void (app.locals as AppLocals).votes.closeDue().catch(console.error), 60_000);
@@ -145,14 +137,12 @@ async function main() {
       process.exit(1);
     }, SHUTDOWN_DEADLINE_MS).unref();
     clearInterval(digests);
-    clearInterval(voteCloser);
     clearInterval(sweeps);
     clearInterval(voteCloser);
     const httpClosed = closeHttpServer(server, HTTP_DRAIN_MS);
     notify?.io.engine.close(); // transports closed, so socket.io clients reconnect (a server-side disconnect would be final)
     await gateway?.drain(CLOSE_CODES.goingAway, 'server going away');
     moderation?.close();
-    votes?.close();
     votes?.close();
     notify?.close();
     await gateway?.close();

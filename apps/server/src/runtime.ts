@@ -3,7 +3,7 @@ import path from 'node:path';
 import { randomBytes } from 'node:crypto';
 import type { Config } from './config';
 import { lockDataDir } from './database/data-dir-lock';
-import { openDatabase, type Database } from './database/database';
+import { openDatabase, PGLITE_TEMPLATE, type Database } from './database/database';
 import { PhotoFiles } from './shop-log/photo-files';
 import type { PhotoStorage } from './shop-log/photo-storage';
 
@@ -16,7 +16,7 @@ export async function openConfiguredDatabase(config: Config, log: (line: string)
     }
     const pgliteDir = path.join(config.dataDir, 'pglite');
     const fresh = !fs.existsSync(pgliteDir);
-    return { database: await openDatabase({ kind: 'pglite', dataDir: pgliteDir }), release, fresh };
+    return { database: await openDatabase({ kind: 'pglite', dataDir: pgliteDir, template: PGLITE_TEMPLATE }), release, fresh };
   } catch (error) {
     release();
     throw error;

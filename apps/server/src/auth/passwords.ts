@@ -24,18 +24,21 @@ export const dummyVerify = async (password: string) => {
   await verifyPassword(await dummyHash, password);
 };
 
-const estimator = new ZxcvbnFactory({
-  dictionary: { ...common.dictionary, ...en.dictionary },
-  graphs: common.adjacencyGraphs,
-  translations: en.translations,
-});
+// Built on the first check, not at start: ranking the dictionaries takes a noticeable part of a start.
+let estimator: ZxcvbnFactory | undefined;
+const strengthEstimator = () =>
+  (estimator ??= new ZxcvbnFactory({
+    dictionary: { ...common.dictionary, ...en.dictionary },
+    graphs: common.adjacencyGraphs,
+    translations: en.translations,
+  }));
 
 /** zxcvbn score at or above which a password is accepted (0–4; 3 = "safely unguessable" for online attacks). */
 export const MIN_PASSWORD_SCORE = 3;
 
 /** Refuses common and easily guessed passwords (the zxcvbn estimator with its common-password lists). */
 export function passwordWeakness(password: string, userInputs: string[]): string | undefined {
-  const result = estimator.check(password, userInputs);
+  const result = strengthEstimator().check(password, userInputs);
   if (result.score >= MIN_PASSWORD_SCORE) return undefined;
   const hint = result.feedback.warning || result.feedback.suggestions[0];
   return `is too easy to guess${hint ? ` (${hint.replace(/\.$/, '').toLowerCase()})` : ''}; use a longer phrase of unusual words`;
