@@ -71,8 +71,10 @@ export interface HeightField {
   mixedFacets: Uint16Array;
 }
 
-/** Directions a wall can face, per turn (0.088° apart: far below what the eye tells on a wall). */
+/** Directions a wall can face, per turn (0.088° apart: far below what the eye tells on a wall). A power of two. */
 export const FACET_BINS = 4096;
+/** Samples of a pixel whose facings differ by at most this many bins (0.7°) shade as one: their colours differ by less than the eye tells. */
+const SAME_FACING_BINS = 8;
 /** `pixelFacet` of a pixel whose samples differ (an edge or a ridge runs through it). */
 export const MIXED_PIXEL = 0xffff;
 
@@ -95,7 +97,8 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
 /**
  * One pass over the pixels: distances become depths in place (d − dist·slope inside a groove, 0 on
  * the plate), and each pixel gets its facet when its samples share one, else MIXED_PIXEL with its
- * samples' facets copied out in a row (so that reshading reads them in order).
+ * samples' facets copied out in a row (so that reshading reads them in order). Samples facing within
+ * SAME_FACING_BINS of the pixel's first count as the same facing (a wall curving gently across a pixel).
  */
 function finishField(dist2: Float32Array, facet: Uint16Array, f: { width: number; height: number; s: number; depth: number; slope: number }): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
   const { width, height, s, depth, slope } = f;
@@ -112,7 +115,7 @@ function finishField(dist2: Float32Array, facet: Uint16Array, f: { width: number
       for (let j = 0; j < s; j++) {
         for (let i = 0, k = base + j * cols; i < s; i++, k++) {
           const fk = facet[k];
-          if (fk !== first) same = false;
+          if (fk !== first && (fk === 0 || first === 0 || Math.abs(fk - first) > SAME_FACING_BINS)) same = false;
           dist2[k] = fk === 0 ? 0 : Math.max(0, depth - Math.sqrt(dist2[k]) * slope);
         }
       }
@@ -173,22 +176,31 @@ function cutLine(points: readonly Point[], g: Raster, w: SurfaceWindow): void {
     if (next) {
       const [bx, by] = next;
       const inY = Math.max(ay, by) + r >= w.y0 && Math.min(ay, by) - r <= w.y1;
-      if (inY) cutStrip(ax, ay, bx, by, g);
+      if (inY) cutStrip(ax, ay, bx, by, g, prev, i + 2 < n ? points[i + 2] : undefined);
     }
     if (ay + r >= w.y0 && ay - r <= w.y1) cutVertex(ax, ay, prev, next, g);
   }
 }
 
-/** The samples whose nearest point lies inside segment A→B: distance across it, facet by side. */
-function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster): void {
+/**
+ * The samples whose nearest point lies inside segment A→B: the distance across it. The wall's facing
+ * turns smoothly along the segment, from the mean of its and the previous segment's normals at A to
+ * the mean of its and the next one's at B (normal interpolation, B. T. Phong, "Illumination for
+ * computer generated pictures", CACM 18(6), 1975): the lines are polylines standing for smooth
+ * curves, and one facing per segment would show each chord as a flat step of light.
+ */
+function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, prev: Point | undefined, after: Point | undefined): void {
   const len = Math.hypot(bx - ax, by - ay);
   if (!(len > 0)) return;
   const ux = (bx - ax) / len;
   const uy = (by - ay) / len;
   const nx = -uy; // the normal to the left of A→B
   const ny = ux;
-  const left = facetOf(nx, ny);
-  const right = facetOf(-nx, -ny);
+  const here = Math.atan2(ny, nx);
+  const start = prev && (prev[0] !== ax || prev[1] !== ay) ? meanAngle(here, normalAngle(prev[0], prev[1], ax, ay)) : here;
+  const end = after && (after[0] !== bx || after[1] !== by) ? meanAngle(here, normalAngle(bx, by, after[0], after[1])) : here;
+  const turn = wrapAngle(end - start) / len; // radians per mm along the segment
+  const binsPerRad = FACET_BINS / (2 * Math.PI);
   const r = g.reach;
   const r2 = r * r;
   const spread = r * Math.abs(nx);
@@ -223,7 +235,9 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster): vo
       const p = row * g.cols + c;
       if (d2 < g.dist2[p] && d2 < r2) {
         g.dist2[p] = d2;
-        g.facet[p] = across >= 0 ? left : right;
+        const along = ex * ux + (g.y1 - (row + 0.5) * g.dy - ay) * uy;
+        // FACET_BINS is a power of two: & wraps negative bins round too.
+        g.facet[p] = 1 + (Math.round((start + turn * along + (across >= 0 ? 0 : Math.PI)) * binsPerRad) & (FACET_BINS - 1));
       }
     }
   }
@@ -290,6 +304,21 @@ function sectorBox(ix: number, iy: number, ox: number, oy: number, r: number): [
     }
   }
   return [r * Math.min(...xs), r * Math.max(...xs), r * Math.min(...ys), r * Math.max(...ys)];
+}
+
+/** Angle of the left normal of the segment P→Q (radians). */
+function normalAngle(px: number, py: number, qx: number, qy: number): number {
+  return Math.atan2(qx - px, -(qy - py));
+}
+
+/** An angle in (−π, π]. */
+function wrapAngle(a: number): number {
+  return a - 2 * Math.PI * Math.round(a / (2 * Math.PI));
+}
+
+/** The angle half-way from a to b the short way round. */
+function meanAngle(a: number, b: number): number {
+  return a + wrapAngle(b - a) / 2;
 }
 
 /** 1 + the direction (x, y) in FACET_BINS steps of a turn, rounded to the nearest. */
