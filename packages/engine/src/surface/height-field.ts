@@ -229,16 +229,22 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, pre
     if (!(ylo <= yhi)) continue;
     const r0 = Math.max(0, Math.ceil((g.y1 - yhi) / g.dy - 0.5));
     const r1 = Math.min(g.rows - 1, Math.floor((g.y1 - ylo) / g.dy - 0.5));
-    for (let row = r0; row <= r1; row++) {
-      const across = ex * nx + (g.y1 - (row + 0.5) * g.dy - ay) * ny;
+    // Across and the facing (in bins) are linear in the row: stepped, not recomputed.
+    const top = g.y1 - (r0 + 0.5) * g.dy - ay;
+    let across = ex * nx + top * ny;
+    let facing = (start + turn * (ex * ux + top * uy)) * binsPerRad;
+    const stepAcross = -g.dy * ny;
+    const stepFacing = -g.dy * uy * turn * binsPerRad;
+    const dist2 = g.dist2;
+    for (let row = r0, p = r0 * g.cols + c; row <= r1; row++, p += g.cols) {
       const d2 = across * across;
-      const p = row * g.cols + c;
-      if (d2 < g.dist2[p] && d2 < r2) {
-        g.dist2[p] = d2;
-        const along = ex * ux + (g.y1 - (row + 0.5) * g.dy - ay) * uy;
-        // FACET_BINS is a power of two: & wraps negative bins round too.
-        g.facet[p] = 1 + (Math.round((start + turn * along + (across >= 0 ? 0 : Math.PI)) * binsPerRad) & (FACET_BINS - 1));
+      if (d2 < dist2[p] && d2 < r2) {
+        dist2[p] = d2;
+        // FACET_BINS is a power of two: & wraps negative bins round too; the wall below the line faces half a turn away.
+        g.facet[p] = 1 + (Math.round(across >= 0 ? facing : facing + FACET_BINS / 2) & (FACET_BINS - 1));
       }
+      across += stepAcross;
+      facing += stepFacing;
     }
   }
 }
