@@ -48,8 +48,8 @@ export class ComputePool {
     this.pool.on('error', (error) => log(error));
   }
 
-  /** A design file in one format (the design already validated); `title` is the name printed on a PDF, `opposite` adds the opposite blank to it. */
-  exportDesign(design: Design, format: ExportFormat, name: string, extra: { title?: string; opposite?: boolean } = {}): Promise<ExportedFile> {
+  /** A design file in one format (the design already validated); `title` is the design's name printed on a PDF. */
+  exportDesign(design: Design, format: ExportFormat, name: string, extra: { title?: string } = {}): Promise<ExportedFile> {
     return this.run({ kind: 'export', design, format, name, ...extra }, `${format.toUpperCase()} export`) as Promise<ExportedFile>;
   }
 

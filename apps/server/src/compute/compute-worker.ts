@@ -5,7 +5,7 @@ import { entryThumbnailSvg } from '../publishing/entry-thumbnail';
 
 /** A job for a compute worker: the design is already validated against the contracts. */
 export type ComputeTask =
-  | { kind: 'export'; design: Design; format: ExportFormat; name: string; title?: string; opposite?: boolean }
+  | { kind: 'export'; design: Design; format: ExportFormat; name: string; title?: string }
   | { kind: 'thumbnail'; design: Design };
 
 export type ComputeResult = ExportedFile | string;
@@ -15,5 +15,5 @@ export default async function runComputeTask({ task, started }: { task: ComputeT
   started.postMessage('started');
   started.close();
   if (task.kind === 'thumbnail') return entryThumbnailSvg(task.design);
-  return exportDesign(task.design, task.format, { name: task.name, title: task.title, opposite: task.opposite });
+  return exportDesign(task.design, task.format, { name: task.name, title: task.title });
 }

@@ -64,8 +64,8 @@ export function designsRouter(deps: DesignsRouterDeps): Router {
 
   router.get('/:id/export', async (req, res) => {
     const { design } = await requireDesignRole(db, req.params.id, requireUser(req).id, 'viewer');
-    const { format, opposite } = exportQuery(req.query);
-    const file = await deps.compute.exportDesign(validatedDesign(await currentDoc(store, design.id)), format, slug(design.title), { title: design.title, opposite });
+    const { format } = exportQuery(req.query);
+    const file = await deps.compute.exportDesign(validatedDesign(await currentDoc(store, design.id)), format, slug(design.title), { title: design.title });
     res.type(file.mime).attachment(file.filename).send(typeof file.content === 'string' ? file.content : Buffer.from(file.content));
   });
 

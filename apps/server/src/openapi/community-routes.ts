@@ -13,7 +13,7 @@ export const COMMUNITY_ROUTES: OpenApiRoute[] = [
   { method: 'get', path: '/api/entries/{id}/revisions/{n}', summary: 'One revision', tag: 'community' },
   { method: 'get', path: '/api/entries/{id}/thumbnail.svg', summary: 'Line-study thumbnail (SVG)', tag: 'community', file: 'an SVG drawing' },
   { method: 'get', path: '/api/entries/{id}/revisions/{n}/thumbnail.svg', summary: "A revision's thumbnail (SVG)", tag: 'community', file: 'an SVG drawing' },
-  { method: 'get', path: '/api/entries/{id}/export', summary: 'Download a revision as PDF, SVG, line-study SVG, DXF, G-code, CSV or the design file', tag: 'community', file: 'the exported file', query: EXPORT_QUERY_SCHEMA },
+  { method: 'get', path: '/api/entries/{id}/export', summary: 'Download a revision as PDF (pdf-pair: with the opposite blank), SVG, line-study SVG, DXF, G-code, CSV or the design file', tag: 'community', file: 'the exported file', query: EXPORT_QUERY_SCHEMA },
   { method: 'put', path: '/api/entries/{id}/rating', summary: 'Rate 1–5 stars (not your own)', tag: 'community', body: c.ratingBody },
   { method: 'delete', path: '/api/entries/{id}/rating', summary: 'Remove your rating', tag: 'community' },
   { method: 'get', path: '/api/entries/{id}/comments', summary: 'Comments, one level of replies', tag: 'community' },

@@ -64,7 +64,7 @@ export const ROUTES: Route[] = [
   { method: 'post', path: '/api/designs/{id}/duplicate', summary: 'Copy onto the same board (editor)', tag: 'designs', answer: id, status: 201 },
   { method: 'delete', path: '/api/designs/{id}', summary: 'Delete; kept 30 days and restorable (owner)', tag: 'designs', status: 204 },
   { method: 'post', path: '/api/designs/{id}/restore', summary: 'Bring back a deleted design (owner)', tag: 'designs', answer: c.designSummarySchema },
-  { method: 'get', path: '/api/designs/{id}/export', summary: 'Download as PDF (opposite=1 adds the opposite blank), SVG, line-study SVG, DXF, G-code, CSV or the design file', tag: 'designs', file: 'the exported file', query: EXPORT_QUERY_SCHEMA.omit({ revision: true }) },
+  { method: 'get', path: '/api/designs/{id}/export', summary: 'Download as PDF (pdf-pair: with the opposite blank), SVG, line-study SVG, DXF, G-code, CSV or the design file', tag: 'designs', file: 'the exported file', query: EXPORT_QUERY_SCHEMA.omit({ revision: true }) },
   { method: 'get', path: '/api/designs/{id}/versions', summary: 'Named versions, newest first', tag: 'designs', answer: z.array(c.designVersionSchema) },
   { method: 'post', path: '/api/designs/{id}/versions', summary: 'Save the current state as a named version (editor)', tag: 'designs', body: c.createVersionBody, answer: c.designVersionSchema, status: 201 },
   { method: 'get', path: '/api/designs/{id}/versions/{versionId}', summary: 'A version’s design file and notes, for comparing', tag: 'designs', answer: z.object({ design: z.record(z.string(), z.unknown()), notes: z.string() }) },

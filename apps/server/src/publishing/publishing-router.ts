@@ -85,10 +85,9 @@ export function publishingRouter(deps: PublishingRouterDeps): Router {
   });
   router.get('/entries/:id/export', async (req, res) => {
     const entry = await requireVisibleEntry(db, req.params.id, viewerOf(req));
-    const { format, opposite } = exportQuery(req.query);
+    const { format } = exportQuery(req.query);
     const revision = await requireRevision(db, entry, req.query.revision === undefined ? undefined : String(req.query.revision));
-    const key = `${revision.id}:${format}${opposite ? ':opposite' : ''}`;
-    const file = await exports.get(key, () => compute.exportDesign(revision.design, format, slug(revision.title), { title: revision.title, opposite }));
+    const file = await exports.get(`${revision.id}:${format}`, () => compute.exportDesign(revision.design, format, slug(revision.title), { title: revision.title }));
     res.type(file.mime).attachment(file.filename).send(typeof file.content === 'string' ? file.content : Buffer.from(file.content));
   });
   router.delete('/entries/:id', async (req, res) => {

@@ -48,7 +48,7 @@ describe('design file download', () => {
 });
 
 describe('export formats', () => {
-  it('offers every download the web lists: PDF, bar SVG, line-study SVG, DXF, G-code, CSV and the design file', () => {
-    expect([...EXPORT_FORMATS].sort()).toEqual(['csv', 'dxf', 'gcode', 'json', 'pdf', 'study-svg', 'svg']);
+  it('offers every download the web lists: PDF (alone or with the opposite blank), bar SVG, line-study SVG, DXF, G-code, CSV and the design file', () => {
+    expect([...EXPORT_FORMATS].sort()).toEqual(['csv', 'dxf', 'gcode', 'json', 'pdf', 'pdf-pair', 'study-svg', 'svg']);
   });
 });

@@ -18,8 +18,12 @@ import { simplifyPolyline } from './polyline-simplify';
 import { setUpLines } from './set-up-lines';
 import { barSvg } from './svg';
 
-/** Every file a design can be downloaded as: `study-svg` is the line study, `json` the design file the command-line tool reads. */
-export const EXPORT_FORMATS = ['pdf', 'svg', 'study-svg', 'dxf', 'gcode', 'csv', 'json'] as const;
+/**
+ * Every file a design can be downloaded as: `pdf-pair` is the PDF with the opposite blank of the same
+ * cut added (the shown-and-opposite pair), `study-svg` the line study, `json` the design file the
+ * command-line tool reads.
+ */
+export const EXPORT_FORMATS = ['pdf', 'pdf-pair', 'svg', 'study-svg', 'dxf', 'gcode', 'csv', 'json'] as const;
 export type ExportFormat = (typeof EXPORT_FORMATS)[number];
 
 export interface ExportedFile {
@@ -37,12 +41,11 @@ export interface ExportOptions {
   profile?: Profile;
   /** Paper for the PDF template; default A4 for mm designs, Letter for inch designs. */
   paper?: Paper;
-  /** PDF: add the opposite blank of the same cut (the shown-and-opposite pair). */
-  opposite?: boolean;
 }
 
 const FILE_TYPES: Readonly<Record<ExportFormat, { suffix: string; mime: string }>> = {
   pdf: { suffix: '.pdf', mime: 'application/pdf' },
+  'pdf-pair': { suffix: '-shown-and-opposite.pdf', mime: 'application/pdf' },
   svg: { suffix: '.svg', mime: 'image/svg+xml' },
   'study-svg': { suffix: '-line-study.svg', mime: 'image/svg+xml' },
   dxf: { suffix: '.dxf', mime: 'image/vnd.dxf' },
@@ -76,14 +79,15 @@ export async function exportDesign(design: Design, format: ExportFormat, options
     case 'gcode':
       return { filename, mime, content: gcodeFor(design, mm, profile, title) };
     case 'pdf':
-      return { filename, mime, content: await pdfFor(design, mm, profile, title, options) };
+    case 'pdf-pair':
+      return { filename, mime, content: await pdfFor(design, mm, profile, title, options, format === 'pdf-pair') };
   }
 }
 
-async function pdfFor(design: Design, mm: Design, profile: Profile, title: string, options: ExportOptions): Promise<Uint8Array> {
+async function pdfFor(design: Design, mm: Design, profile: Profile, title: string, options: ExportOptions, pair: boolean): Promise<Uint8Array> {
   const plan = planCut(design, profile);
   const preset = MATERIAL_PRESETS[design.bar.material];
-  const opposite = options.opposite ? oppositeProfile(design) : undefined;
+  const opposite = pair ? oppositeProfile(design) : undefined;
   return barPdf({
     name: options.title ?? options.name ?? 'Bar design',
     title,

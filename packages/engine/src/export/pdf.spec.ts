@@ -13,9 +13,9 @@ import { PAGE_MARGIN_MM } from './pdf-tiles';
 /** PDF user space: 1 unit = 1/72 in (ISO 32000-1 §8.3.2.3); inch = 25.4 mm (NIST). */
 const PT_PER_MM = 72 / 25.4;
 
-async function pdfOf(design = demoDesign, profile = demoProfile, options: { opposite?: boolean } = {}): Promise<Uint8Array> {
-  const file = await exportDesign(design, 'pdf', { profile, title: 'Guild reference bar', ...options });
-  expect(file).toMatchObject({ filename: 'bar.pdf', mime: 'application/pdf' });
+async function pdfOf(design = demoDesign, profile = demoProfile, format: 'pdf' | 'pdf-pair' = 'pdf'): Promise<Uint8Array> {
+  const file = await exportDesign(design, format, { profile, title: 'Guild reference bar' });
+  expect(file).toMatchObject({ filename: format === 'pdf' ? 'bar.pdf' : 'bar-shown-and-opposite.pdf', mime: 'application/pdf' });
   return file.content as Uint8Array;
 }
 
@@ -105,9 +105,9 @@ describe('PDF template', () => {
     expect(first).not.toContain('- none');
   });
 
-  it('adds the opposite blank at 1:1 and in the enlarged period when asked', async () => {
+  it('adds the opposite blank at 1:1 and in the enlarged period as the shown-and-opposite PDF', async () => {
     const without = await textOf(await pdfOf());
-    const bytes = await pdfOf(demoDesign, computeProfile(demoDesign), { opposite: true });
+    const bytes = await pdfOf(demoDesign, computeProfile(demoDesign), 'pdf-pair');
     const { text, pages } = await textOf(bytes);
     expect(pages).toBe(without.pages + 1);
     expect(text).toContain('Opposite blank, turned over (cut edge on top). Tile 1 of 1');

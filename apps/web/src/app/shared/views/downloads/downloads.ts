@@ -13,6 +13,7 @@ export interface DownloadChoice {
 /** The design's files, as the server exports them (`EXPORT_FORMATS` in the engine, each listed once here). */
 export const DESIGN_DOWNLOADS: readonly DownloadChoice[] = [
   { format: 'pdf', label: 'PDF', what: 'printable 1:1 template: set-up, period, line study, cut plan', icon: 'picture_as_pdf' },
+  { format: 'pdf-pair', label: 'PDF pair', what: 'the same, with the opposite blank of the cut at 1:1', icon: 'flip' },
   { format: 'svg', label: 'SVG', what: 'drawing of the bar, in mm', icon: 'draw' },
   { format: 'study-svg', label: 'Study SVG', what: 'the line study as a drawing', icon: 'texture' },
   { format: 'dxf', label: 'DXF', what: 'R12 polylines for CAD', icon: 'architecture' },
