@@ -135,7 +135,8 @@ export function steepestSlope(points: readonly Point[]): number {
   return steepest;
 }
 
-function heightSpan(y: Float64Array): number {
+/** Peak-to-valley of typed heights, mm (0 when empty): `peakToValley` without the Point arrays. */
+export function heightSpan(y: Float64Array): number {
   if (y.length === 0) return 0;
   let lo = Infinity;
   let hi = -Infinity;

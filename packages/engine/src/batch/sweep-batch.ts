@@ -1,7 +1,7 @@
 import { candidateDesign, type Design, type SweepCandidate } from '@barwright/contracts';
-import { planCut, peakToValley } from '../cut-plan';
+import { heightSpan, planCut, peakToValley } from '../cut-plan';
 import { periodProfile } from '../period-profile';
-import { computeProfile } from '../profile';
+import { computeProfile, profileSamples } from '../profile';
 import type { EngineWarning, Profile } from '../types';
 
 /**
@@ -43,9 +43,11 @@ export function designFigures(design: Design, profile: Profile): CandidateFigure
   const plan = planCut(design, profile);
   const cutterRadius = (design.units === 'in' ? 25.4 : 1) * (design.cutter.diameter / 2);
   const losses = profile.warnings.filter((w) => DETAIL_CODES.includes(w.code));
+  const typed = profileSamples(profile);
   return {
     period: profile.period,
-    barHeight: peakToValley(profile.barEdge),
+    // The typed bar edge when the profile has it: the same numbers without building its Point array.
+    barHeight: typed ? heightSpan(typed.bar) : peakToValley(profile.barEdge),
     crestRadius: profile.minRadiusOfCurvature,
     cutterRadius,
     crestBelowCutter: profile.minRadiusOfCurvature < cutterRadius,
