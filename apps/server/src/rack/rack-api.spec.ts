@@ -73,6 +73,18 @@ describe.each(drivers)('rack API on %s', (driver) => {
     expect((await maren.get('/api/rack')).body.rosettes).toEqual([]);
   });
 
+  it('holds at most 200 rosettes: one more is refused naming the limit, an import that would pass it stores nothing', async () => {
+    const me = (await maren.get('/api/auth/me')).body.id;
+    await database.db.insert(rackRosettes).values(Array.from({ length: 199 }, (_, i) => ({ ownerId: me, name: `R${i}`, units: 'mm' as const, rosette: sine24 })));
+    expect((await maren.post('/api/rack/rosettes', { name: 'The last', rosette: sine24 })).status).toBe(201);
+    const full = await maren.post('/api/rack/rosettes', { name: 'One too many', rosette: sine24 });
+    expect(full.status).toBe(400);
+    expect(full.body.error.fields.rosettes).toBe('a rack holds at most 200 rosettes');
+    const file = { format: RACK_FORMAT, rosettes: [{ name: 'More', units: 'mm', rosette: sine24 }], shop: { units: 'mm', ...shop } };
+    expect((await maren.post('/api/rack/import?mode=add', file)).body.error.fields.rosettes).toMatch(/at most 200 rosettes \(1 more asked for\)/);
+    expect((await maren.get('/api/rack')).body.rosettes).toHaveLength(200);
+  });
+
   it('keeps the shop with its units, checking lengths after conversion', async () => {
     const saved = await maren.send('put', '/api/rack/shop', shop);
     expect(saved.status).toBe(200);

@@ -20,8 +20,8 @@ export const toRackRosette = (row: RackRosetteRow): RackRosette => ({
   updatedAt: row.updatedAt.toISOString(),
 });
 
-const rackFull = (more = 1) =>
-  new HttpError(400, 'invalid_input', `A rack holds at most ${RACK_LIMITS.rosettes} rosettes; delete some first.`, { rosettes: `a rack holds at most ${RACK_LIMITS.rosettes} rosettes${more > 1 ? ` (${more} more asked for)` : ''}` });
+const rackFull = (asked?: number) =>
+  new HttpError(400, 'invalid_input', `A rack holds at most ${RACK_LIMITS.rosettes} rosettes; delete some first.`, { rosettes: `a rack holds at most ${RACK_LIMITS.rosettes} rosettes${asked === undefined ? '' : ` (${asked} more asked for)`}` });
 
 export async function rackRosetteRows(db: Db | Tx, ownerId: string): Promise<RackRosetteRow[]> {
   return db.select().from(rackRosettes).where(eq(rackRosettes.ownerId, ownerId)).orderBy(asc(rackRosettes.createdAt), asc(rackRosettes.id));
