@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import AxeBuilder from '@axe-core/playwright';
 import { expect, type Page } from '@playwright/test';
 import { SCREEN_DIR } from './screens';
@@ -31,7 +32,7 @@ export async function checkScreen(page: Page, name: string): Promise<ScreenProbl
   }
   for (const ground of ['paper', 'dark'] as const) {
     await setGround(page, ground);
-    problems.accessibility.push(...(await axeProblems(page)).map((p) => `${ground}: ${p}`));
+    problems.accessibility.push(...(await axeProblems(page, `${name} ${ground}`)).map((p) => `${ground}: ${p}`));
   }
   await setGround(page, 'paper');
   await page.setViewportSize({ width: 1280, height: HEIGHT[1280] });
@@ -80,9 +81,14 @@ async function sidewaysOverflow(page: Page): Promise<string[]> {
   });
 }
 
-/** Serious and critical axe-core violations, one line each with the first elements concerned. */
-async function axeProblems(page: Page): Promise<string[]> {
+/**
+ * Serious and critical axe-core violations, one line each with the first elements concerned. Every
+ * violation, minor and moderate too, is listed in .tmp/screens/axe.log for a person to read.
+ */
+async function axeProblems(page: Page, label: string): Promise<string[]> {
   const result = await new AxeBuilder({ page }).withTags(AXE_TAGS).analyze();
+  const all = result.violations.map((v) => `${v.id} (${v.impact}, ${v.nodes.length})`).join(', ') || 'none';
+  fs.appendFileSync(`${SCREEN_DIR}/axe.log`, `${label}: ${result.passes.length} rules passed; violations: ${all}\n`);
   return result.violations
     .filter((v) => FAILING_IMPACTS.has(v.impact ?? ''))
     .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);

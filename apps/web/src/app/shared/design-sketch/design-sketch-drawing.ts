@@ -7,6 +7,8 @@ import type { StudyData } from '../views/view-data';
 const SAMPLES_PER_PERIOD = 60;
 /** Periods shown: enough for the phase schedule to read as a pattern. */
 const PERIODS_SHOWN = 4;
+/** The widest stroke drawn, as a fraction of the drawing's width. */
+const FINEST_STROKE = 1 / 300;
 /** Lines drawn at most, from the first: a small picture shows the pattern, not every line. */
 const LINES_SHOWN = 24;
 
@@ -32,7 +34,9 @@ export function designSketchDrawing(design: Design): StudyDrawing | null {
       vAngle: design.study.vAngle,
       lines: study.lines.map((line) => Float64Array.from(line.points.flat())),
     };
-    return studyDrawing(data, PERIODS_SHOWN * profile.period);
+    const drawing = studyDrawing(data, PERIODS_SHOWN * profile.period);
+    // At a few centimetres across, true-width grooves run together: a fine ink line shows the pattern.
+    return { ...drawing, stroke: Math.min(drawing.stroke, drawing.width * FINEST_STROKE) };
   } catch {
     return null;
   }

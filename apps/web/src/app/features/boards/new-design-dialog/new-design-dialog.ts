@@ -77,7 +77,7 @@ export type CreateDesign = (title: string, preset: DesignPreset) => Promise<stri
     }
     .choices {
       display: grid;
-      grid-template-columns: repeat(auto-fill, minmax(8.5rem, 1fr));
+      grid-template-columns: repeat(3, minmax(0, 1fr));
       gap: 0.75rem;
     }
     .choice {
