@@ -111,13 +111,10 @@ describe('computeLineStudy', () => {
     }
   });
 
-  it('draws 200 lines quickly (well under 100 ms here; the benchmark reports the real figure)', () => {
+  it('draws 200 lines (its time is the benchmark's to report, not a test's)', () => {
     const design = { ...EXAMPLE_DESIGN, study: { ...EXAMPLE_DESIGN.study, lines: 200 } };
     const profile = computeProfile(design, { step: 0.01 });
-    computeLineStudy(design, profile);
-    const t = performance.now();
     const study = computeLineStudy(design, profile);
-    expect(performance.now() - t).toBeLessThan(100);
     expect(study.lines).toHaveLength(200);
   });
 });

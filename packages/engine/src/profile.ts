@@ -49,9 +49,13 @@ export interface BarSamples {
  */
 export function computeProfile(design: Design, options: ProfileOptions = {}): Profile {
   const samples = computeBarSamples(design, options);
+  // The paths hold their places (key order, as JSON shows them) and become lazy just below.
   const profile = {
     period: samples.grid.period,
     step: samples.grid.step,
+    cutterPath: [],
+    barEdge: [],
+    followerPath: [],
     minRadiusOfCurvature: samples.minRadiusOfCurvature,
     crest: samples.crest,
     ...(samples.leadIn ? { leadIn: samples.leadIn, leadOut: samples.leadOut } : {}),
