@@ -77,6 +77,7 @@ async function main(): Promise<void> {
     await settle(editor, watcher);
     await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
     const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
+    if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
     for (let i = 0; i < EDITS; i++) {
       const [testId, value] = i % 2 === 0 ? [LOBES, String(20 + ((i / 2) % 10))] : [AMPLITUDE, (1 + (i % 7) * 0.1).toFixed(1)];
       const t = await timeEdit(editor, watcher, testId, value);
@@ -86,6 +87,7 @@ async function main(): Promise<void> {
     }
     const longTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
     if (profiler) await printProfile(profiler);
+    if (process.env.BENCH_TRACE) printTrace(await browser.stopTracing());
     const row = (name: string, xs: number[]) => `${name.padEnd(34)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
     console.log(`Studio redraw, ${EDITS} edits (lobes and amplitude alternately), Chromium ${browser.version()}, ${WEB_DIST}`);
     console.log(row('edit to redraw (this page)', local));
@@ -181,6 +183,26 @@ async function printProfile(cdp: CDPSession): Promise<void> {
   }
   console.log('Main-thread self time (ms) over the edits:');
   for (const [key, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`${ms.toFixed(0).padStart(7)}  ${key}`);
+}
+
+/** With BENCH_TRACE set: the editing page's main-thread time by kind of work (Chromium's trace events, own time). */
+function printTrace(buffer: Buffer): void {
+  type Event = { name: string; ph: string; ts: number; dur?: number; pid: number; tid: number; args?: { name?: string } };
+  const events = (JSON.parse(buffer.toString()) as { traceEvents: Event[] }).traceEvents;
+  const main = events.find((e) => e.name === 'thread_name' && e.args?.name === 'CrRendererMain');
+  const mine = events.filter((e) => main && e.pid === main.pid && e.tid === main.tid && e.ph === 'X' && e.dur).sort((a, b) => a.ts - b.ts);
+  // Own time: an event's duration less that of the events nested in it.
+  const own = new Map<string, number>();
+  const stack: Event[] = [];
+  for (const e of mine) {
+    while (stack.length && stack[stack.length - 1].ts + stack[stack.length - 1].dur! <= e.ts) stack.pop();
+    const parent = stack[stack.length - 1];
+    if (parent) own.set(parent.name, (own.get(parent.name) ?? 0) - e.dur!);
+    own.set(e.name, (own.get(e.name) ?? 0) + e.dur!);
+    stack.push(e);
+  }
+  console.log('Main-thread own time by kind (ms) over the edits:');
+  for (const [name, us] of [...own].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`${(us / 1000).toFixed(0).padStart(7)}  ${name}`);
 }
 
 async function startServer(): Promise<ChildProcess> {

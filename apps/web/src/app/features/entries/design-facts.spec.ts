@@ -6,11 +6,11 @@ describe('setUpFacts', () => {
   it('lists the set-up in the trade’s words, units beside every length', () => {
     const facts = Object.fromEntries(setUpFacts(EXAMPLE_DESIGN).map((f) => [f.label, f.value]));
     expect(facts['Rosette']).toBe('24 lobes, Sine, 1.5 mm peak to valley');
-    expect(facts['End mill']).toBe('4.7625 mm diameter, 2 flutes');
+    expect(facts['End mill']).toBe('4.76 mm diameter, 2 flutes');
     expect(facts['Rubber']).toBe('round, 1 mm radius');
     expect(facts['Line study']).toBe('40 lines at 0.45 mm');
     expect(facts['Phase schedule']).toBe('Barleycorn');
-    expect(facts['Bar']).toBe('150 mm × 7.9375 mm, A2 tool steel');
+    expect(facts['Bar']).toBe('150 mm × 7.94 mm, A2 tool steel');
   });
 
   it('names every layer of a compound rosette, in inches for an inch file', () => {

@@ -1,4 +1,5 @@
 import { formatNumber, type Design } from '@barwright/contracts';
+import { roundLength } from '@barwright/engine';
 import { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from '../../shared/entry-facts/entry-facts';
 
 /** One line of a design's set-up as the design page lists it, units beside the number. */
@@ -9,7 +10,8 @@ export interface SetUpFact {
 
 /** The set-up of a bar design in the trade's words, lengths in the file's own units (pure). */
 export function setUpFacts(d: Design): SetUpFact[] {
-  const len = (v: number) => `${formatNumber(v)} ${d.units}`;
+  // Lengths through the one length formatter: the file's value (already in its units) rounded for reading.
+  const len = (v: number) => `${roundLength(v, d.units)} ${d.units}`;
   const layers = d.rosette.layers;
   const rosette = layers.map((l) => `${l.lobes} lobes, ${WAVE_NAMES[l.wave.shape]}, ${len(l.amplitude)} peak to valley`).join(' + ');
   return [

@@ -4,19 +4,30 @@
  * see at that width is lost. Returns x, y pairs.
  */
 export function thinForDrawing(x: ArrayLike<number>, y: ArrayLike<number>, from: number, to: number, buckets: number): Float64Array {
-  const out: number[] = [];
+  // At most four samples a bucket, plus the one before the window and the one past it.
+  const out = new Float64Array(8 * (buckets + 2));
+  let n = 0;
   const width = (to - from) / buckets;
   let i = 0;
   while (i < x.length && x[i] < from) i++;
   if (i > 0) i--; // one sample before the window, so the line reaches its edge
-  let bucket = -1;
+  let bucket = NaN;
   let first = -1;
   let low = -1;
   let high = -1;
   let last = -1;
+  const keep = (k: number) => {
+    out[n++] = x[k];
+    out[n++] = y[k];
+  };
+  // The bucket's first, lowest, highest and last samples, in order, each once (no allocation: this runs per bucket).
   const flush = () => {
     if (first < 0) return;
-    for (const k of [...new Set([first, low, high, last])].sort((a, b) => a - b)) out.push(x[k], y[k]);
+    const [a, b] = low < high ? [low, high] : [high, low];
+    keep(first);
+    if (a !== first) keep(a);
+    if (b !== a && b !== first) keep(b);
+    if (last !== b && last !== a && last !== first) keep(last);
   };
   for (; i < x.length; i++) {
     const b = Math.floor((x[i] - from) / width);
@@ -32,7 +43,7 @@ export function thinForDrawing(x: ArrayLike<number>, y: ArrayLike<number>, from:
     if (x[i] > to) break;
   }
   flush();
-  return Float64Array.from(out);
+  return out.slice(0, n);
 }
 
 /** Pairs from an interleaved x, y array (the worker's line format), thinned the same way. */

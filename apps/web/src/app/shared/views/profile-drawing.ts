@@ -52,8 +52,8 @@ export interface Dimension {
 
 /** Drawing width in viewBox units; the SVG scales to its box. */
 const WIDTH = 1000;
-/** Samples kept per drawing for each path: several per pixel of a wide screen. */
-const BUCKETS = 1400;
+/** Buckets per drawing for each path: about one a pixel of a wide view, each keeping its crest and valley. */
+const BUCKETS = 800;
 /** The whole bar is drawn about this high, as a fraction of its width. */
 const WHOLE_ASPECT = 0.22;
 
@@ -143,8 +143,8 @@ function dimensionsFor(d: DimensionInput): Dimension[] {
   if (crest !== null && crest + d.period <= d.to && d.period > 0) {
     const x1 = round((crest - d.from) * d.sx);
     const x2 = round((crest + d.period - d.from) * d.sx);
-    const y = round(Math.max(12, d.ys(Math.max(d.barHigh, d.blankTop ?? -Infinity)) - 14));
-    dims.push({ kind: 'period', x1, y1: y, x2, y2: y, mm: d.period, labelX: round((x1 + x2) / 2), labelY: round(y - 6) });
+    const y = round(Math.max(30, d.ys(Math.max(d.barHigh, d.blankTop ?? -Infinity)) - 14));
+    dims.push({ kind: 'period', x1, y1: y, x2, y2: y, mm: d.period, labelX: round((x1 + x2) / 2), labelY: round(y - 16) });
   }
   if (d.blankTop !== null) {
     const [y1, y2] = [d.ys(d.blankTop), d.ys(d.barLow)];

@@ -3,12 +3,19 @@ import type { ComputeReply, ComputeRequest } from './compute-messages';
 import { computeDesignViews, transferables, type ComputeStage } from './design-views';
 
 /*
- * The engine off the page's thread. For each request: a quick preview, then the full computation.
+ * The engine off the page's thread. For each request: a quick preview, then the full computation
+ * (the full alone while it is fast).
  * Requests that arrive meanwhile replace the waiting one, so a slider dragged fast computes only
  * the latest value; between the two stages the worker yields so a newer request can overtake.
  */
 let latest: ComputeRequest | null = null;
 let running = false;
+/**
+ * A full computation that took less than this (ms) is not preceded by a preview: the page would
+ * otherwise draw twice in a row for one edit, the preview adding nothing one frame before the full.
+ */
+const PREVIEW_WORTH_MS = 40;
+let lastFullMs = Infinity;
 
 addEventListener('message', (event: MessageEvent<ComputeRequest>) => {
   latest = event.data;
@@ -20,9 +27,12 @@ async function work(): Promise<void> {
   while (latest) {
     const request = latest;
     latest = null;
-    for (const stage of ['preview', 'full'] as ComputeStage[]) {
+    const stages: ComputeStage[] = lastFullMs < PREVIEW_WORTH_MS ? ['full'] : ['preview', 'full'];
+    for (const stage of stages) {
       if (latest) break; // overtaken: start on the newer design
+      const started = performance.now();
       reply(request.id, stage, request);
+      if (stage === 'full') lastFullMs = performance.now() - started;
       await new Promise((resolve) => setTimeout(resolve, 0));
     }
   }

@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, planCut, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
+import { computeLineStudy, computeProfile, planCut, profileSamples, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
 import type { ProfileData, StudyData } from '../../../shared/views/view-data';
 import { placementViews, type PlacementViews } from './placement-views';
 
@@ -50,7 +50,14 @@ export function previewStep(design: Design): number {
   return (design.motion.travelPerRev * perMm) / lobes / PREVIEW_SAMPLES_PER_PERIOD;
 }
 
+/**
+ * The profile's paths as typed arrays: the engine's own (copied, since they are handed over to the
+ * page) when it kept them, so no Point array is built; from the Point arrays otherwise.
+ */
 function profileData(p: Profile): Omit<ProfileData, 'cutterRadius' | 'followerRadius' | 'barLength'> {
+  const rest = { period: p.period, step: p.step, minRadiusOfCurvature: p.minRadiusOfCurvature, crest: p.crest, warnings: p.warnings };
+  const typed = profileSamples(p);
+  if (typed) return { ...rest, x: typed.x.slice(), cutter: typed.cutter.slice(), bar: typed.bar.slice(), follower: typed.follower.slice() };
   const n = p.barEdge.length;
   const x = new Float64Array(n);
   const cutter = new Float64Array(n);
@@ -62,16 +69,16 @@ function profileData(p: Profile): Omit<ProfileData, 'cutterRadius' | 'followerRa
     cutter[i] = p.cutterPath[i][1];
     follower[i] = p.followerPath[i][1];
   }
-  return { period: p.period, step: p.step, x, cutter, bar, follower, minRadiusOfCurvature: p.minRadiusOfCurvature, crest: p.crest, warnings: p.warnings };
+  return { ...rest, x, cutter, bar, follower };
 }
 
 function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'depth' | 'vAngle'> {
-  const lines = s.lines.map((line) => {
-    const xy = new Float64Array(line.points.length * 2);
-    line.points.forEach(([x, y], i) => {
-      xy[2 * i] = x;
-      xy[2 * i + 1] = y;
-    });
+  const lines = s.lines.map(({ points }) => {
+    const xy = new Float64Array(points.length * 2);
+    for (let i = 0; i < points.length; i++) {
+      xy[2 * i] = points[i][0];
+      xy[2 * i + 1] = points[i][1];
+    }
     return xy;
   });
   return { spacing: s.spacing, width: s.width, length: s.length, lines };

@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { computeProfile, cutterPlacement, peakToValley, placementText, toMm, type Profile } from '@barwright/engine';
+import { computeProfile, cutterPlacement, placementText, profileSamples, toMm, type Profile } from '@barwright/engine';
 
 /** The cutter's placement shown as a before and after: the nominal cutter path and the figures. */
 export interface PlacementViews {
@@ -16,7 +16,13 @@ export function placementViews(design: Design, profile: Profile): PlacementViews
   const { offset: _offset, ...cutter } = design.cutter;
   const { pivot: _pivot, ...motion } = design.motion;
   const before = computeProfile({ ...design, cutter, motion }, { step: profile.step });
-  const nominal = new Float64Array(profile.cutterPath.length);
-  for (let i = 0; i < nominal.length; i++) nominal[i] = before.cutterPath[Math.min(i, before.cutterPath.length - 1)][1];
-  return { nominal, text: placementText(mm, peakToValley(profile.cutterPath), design.units) ?? '' };
+  // The typed arrays where the engine kept them (no Point array built), the Point arrays otherwise.
+  const after = profileSamples(profile)?.cutter ?? Float64Array.from(profile.cutterPath, (p) => p[1]);
+  const was = profileSamples(before)?.cutter ?? Float64Array.from(before.cutterPath, (p) => p[1]);
+  const nominal = new Float64Array(after.length);
+  for (let i = 0; i < nominal.length; i++) nominal[i] = was[Math.min(i, was.length - 1)];
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const y of after) [lo, hi] = [Math.min(lo, y), Math.max(hi, y)];
+  return { nominal, text: placementText(mm, hi - lo, design.units) ?? '' };
 }

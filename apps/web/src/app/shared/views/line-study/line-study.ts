@@ -2,18 +2,18 @@ import { ChangeDetectionStrategy, Component, computed, input, signal } from '@an
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import type { StudyDirection, Units } from '@barwright/contracts';
 import { formatLength } from '@barwright/engine';
-import { LitSurface } from '../lit-surface/lit-surface';
 import { studyDirectionNote } from '../study-direction-note';
-import { studyDrawing, type StudyWindow } from '../study-drawing';
+import { StudyPlates } from '../study-plates/study-plates';
+import { windowRange, type StudyWindow } from '../study-drawing';
 import type { StudyData } from '../view-data';
 
 /** The windows about the middle, mm: round figures in each unit (½ in = 12.7 mm exactly). */
 const WINDOWS_MM: Readonly<Record<Units, readonly [number, number]>> = { mm: [15, 40], in: [12.7, 38.1] };
 
-/** The line study: what the bar engraves on the straight-line machine, drawn flat (ink at true scale) and lit (metal). */
+/** The line study: what the bar engraves on the straight-line machine, drawn flat (ink at true scale) and lit (metal), with its figures. */
 @Component({
   selector: 'bw-line-study',
-  imports: [MatButtonToggleModule, LitSurface],
+  imports: [MatButtonToggleModule, StudyPlates],
   templateUrl: './line-study.html',
   styleUrl: './line-study.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,10 +33,6 @@ export class LineStudy {
     const choice = this.choice();
     return choice === 'whole' ? 'whole' : WINDOWS_MM[this.units()][choice === 'narrow' ? 0 : 1];
   });
-  protected readonly drawing = computed(() => {
-    const study = this.study();
-    return study ? studyDrawing(study, this.window()) : null;
-  });
   protected readonly summary = computed(() => {
     const study = this.study();
     if (!study) return '';
@@ -44,8 +40,10 @@ export class LineStudy {
     return `${study.lines.length} lines ${len(study.spacing)} apart, grooves ${len(study.width)} wide (a ${study.vAngle}° V-cutter ${len(study.depth)} deep)`;
   });
   protected readonly span = computed(() => {
-    const d = this.drawing();
-    return d ? `from ${formatLength(d.from, this.units())} to ${formatLength(d.to, this.units())}` : '';
+    const study = this.study();
+    if (!study) return '';
+    const [from, to] = windowRange(study, this.window());
+    return `from ${formatLength(from, this.units())} to ${formatLength(to, this.units())}`;
   });
   protected readonly windows = computed(() => {
     const units = this.units();

@@ -2,7 +2,7 @@ import { studyBounds, windowRange, type StudyWindow } from '../study-drawing';
 import type { StudyData } from '../view-data';
 
 /** The plate window drawn (mm, y up) and its size on screen (CSS px). */
-export interface LitFrame {
+export interface PlateFrame {
   x0: number;
   x1: number;
   y0: number;
@@ -13,16 +13,16 @@ export interface LitFrame {
   cropped: boolean;
 }
 
-/** Tallest the lit plate is drawn (CSS px); a taller window shows its middle lines. */
-export const LIT_MAX_HEIGHT_PX = 360;
+/** Tallest a plate is drawn (CSS px); a taller window shows its middle lines. */
+export const PLATE_MAX_HEIGHT_PX = 360;
 
-/** The window of the lit plate at true scale across `widthCss` pixels (pure). */
-export function litFrame(study: Pick<StudyData, 'lines' | 'length' | 'width' | 'spacing'>, window: StudyWindow, widthCss: number): LitFrame | null {
+/** The window of the plates (flat and lit) at true scale across `widthCss` pixels (pure). */
+export function plateFrame(study: Pick<StudyData, 'lines' | 'length' | 'width' | 'spacing'>, window: StudyWindow, widthCss: number): PlateFrame | null {
   if (widthCss <= 0) return null;
   const [x0, x1] = windowRange(study, window);
   const [low, high] = studyBounds(study, x0, x1);
   const perPx = (x1 - x0) / widthCss;
-  const heightCss = Math.round(Math.min(LIT_MAX_HEIGHT_PX, Math.max(48, (high - low) / perPx)));
+  const heightCss = Math.round(Math.min(PLATE_MAX_HEIGHT_PX, Math.max(48, (high - low) / perPx)));
   const span = heightCss * perPx;
   const cropped = span < high - low;
   const y0 = cropped ? (low + high) / 2 - span / 2 : low;

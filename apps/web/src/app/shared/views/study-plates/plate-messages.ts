@@ -1,0 +1,34 @@
+import type { MetalTint, SurfaceLight, SurfaceWindow } from '@barwright/engine';
+
+/** Page → plate worker. */
+export type PlateRequest =
+  /** The two canvases to paint, handed over once (OffscreenCanvas). */
+  | { kind: 'canvases'; flat: OffscreenCanvas; lit: OffscreenCanvas }
+  /**
+   * A new study or window: its grooves (x, y pairs, mm), the window and its size in device pixels, and
+   * the flat plate's ink, ground and least stroke (device px). Draws the flat plate, then computes the lit one.
+   */
+  | {
+      kind: 'surface';
+      id: number;
+      lines: Float64Array[];
+      width: number;
+      depth: number;
+      vAngle: number;
+      window: SurfaceWindow;
+      widthPx: number;
+      heightPx: number;
+      ink: string;
+      ground: string;
+      hairlinePx: number;
+    }
+  /** A new light or metal: reshades the lit plate held, without computing its surface again. */
+  | { kind: 'light'; id: number; light: SurfaceLight; tint: MetalTint };
+
+/** Plate worker → page: request `id` is on the canvas named; `fieldMs` is 0 for a reshade. */
+export interface PlateReply {
+  id: number;
+  plate: 'flat' | 'lit';
+  fieldMs: number;
+  paintMs: number;
+}

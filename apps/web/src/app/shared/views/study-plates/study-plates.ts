@@ -1,0 +1,153 @@
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, model, signal, untracked, viewChild } from '@angular/core';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatSliderModule } from '@angular/material/slider';
+import { METAL_TINTS, type MetalTint } from '@barwright/engine';
+import type { StudyWindow } from '../study-drawing';
+import type { StudyData } from '../view-data';
+import { linesInWindow, plateFrame } from './plate-frame';
+import type { PlateReply, PlateRequest } from './plate-messages';
+
+const TINT_LABELS: Readonly<Record<MetalTint, string>> = { silver: 'Silver', gold: 'Gold', brass: 'Brass' };
+/** Thinnest line drawn on the flat plate, CSS px. */
+const HAIRLINE_PX = 1;
+
+/**
+ * The line study's two plates over one window at true scale: flat (ink lines as wide as the grooves)
+ * and lit (the engine's height field of the grooves, shaded as polished metal under a light you move,
+ * in the metal you choose). Both are drawn in a worker on OffscreenCanvases, so the page's thread
+ * only hands over the lines; moving the light reshades without computing the surface again.
+ */
+@Component({
+  selector: 'bw-study-plates',
+  imports: [MatButtonToggleModule, MatSliderModule],
+  templateUrl: './study-plates.html',
+  styleUrl: './study-plates.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class StudyPlates {
+  private readonly flatCanvas = viewChild.required<ElementRef<HTMLCanvasElement>>('flat');
+  private readonly litCanvas = viewChild.required<ElementRef<HTMLCanvasElement>>('lit');
+  readonly study = input.required<StudyData>();
+  readonly window = input.required<StudyWindow>();
+  /** The period on the bar (mm), written on the flat plate as a fingerprint of what is drawn. */
+  readonly period = input<number | null>(null);
+  readonly idPrefix = input('');
+
+  protected readonly tints = METAL_TINTS.map((value) => ({ value, label: TINT_LABELS[value] }));
+  /** The metal and the light: bound from outside when several plates share one light (compare). */
+  readonly tint = model<MetalTint>('silver');
+  readonly azimuth = model(60);
+  readonly elevation = model(35);
+  /** False: the plates alone, the light set from outside. */
+  readonly controls = input(true);
+  private readonly cssWidth = signal(0);
+  protected readonly supported = signal(true);
+  /** The newest request each plate shows (for tests and benchmarks: the plate is drawn when it equals `requested`). */
+  protected readonly flatShown = signal(0);
+  protected readonly litShown = signal(0);
+  protected readonly requested = signal(0);
+  protected readonly frame = computed(() => plateFrame(this.study(), this.window(), this.cssWidth()));
+  protected readonly shownLines = computed(() => (this.frame()?.cropped ? 'the middle lines of the study' : 'every line of the study'));
+
+  private worker: Worker | null = null;
+  private nextId = 0;
+  /** The flat plate's ink and ground as the page resolves them (read once a size: reading styles forces a style pass). */
+  private colours: { ink: string; ground: string } | null = null;
+
+  constructor() {
+    const destroyRef = inject(DestroyRef);
+    afterNextRender(() => {
+      this.worker = startWorker(this.flatCanvas().nativeElement, this.litCanvas().nativeElement);
+      if (!this.worker) {
+        this.supported.set(false);
+        return;
+      }
+      this.worker.addEventListener('message', (event: MessageEvent<PlateReply>) => {
+        const reply = event.data;
+        (reply.plate === 'flat' ? this.flatShown : this.litShown).set(reply.id);
+      });
+      const observer = new ResizeObserver(([entry]) => {
+        this.colours = null;
+        this.cssWidth.set(Math.floor(entry.contentRect.width));
+      });
+      observer.observe(this.flatCanvas().nativeElement.parentElement!);
+      destroyRef.onDestroy(() => observer.disconnect());
+    });
+    destroyRef.onDestroy(() => this.worker?.terminate());
+    // A new study or window: new plates (the light goes first, so the first lit paint is right).
+    effect(() => {
+      const frame = this.frame();
+      const study = this.study();
+      if (!frame) return;
+      untracked(() => {
+        this.sendLight();
+        const ratio = Math.min(2, globalThis.devicePixelRatio || 1);
+        const reach = study.depth / Math.tan((study.vAngle * Math.PI) / 360) + study.spacing;
+        const lines = linesInWindow(study.lines, frame.x0, frame.x1, reach);
+        const colours = this.colours ?? this.readColours();
+        const id = ++this.nextId;
+        this.requested.set(id);
+        this.post({
+          kind: 'surface', id, lines, width: study.width, depth: study.depth, vAngle: study.vAngle,
+          window: { x0: frame.x0, x1: frame.x1, y0: frame.y0, y1: frame.y1 },
+          widthPx: Math.round(frame.widthCss * ratio), heightPx: Math.round(frame.heightCss * ratio),
+          ...colours,
+          hairlinePx: HAIRLINE_PX * ratio,
+        }, lines.map((l) => l.buffer as ArrayBuffer));
+      });
+    });
+    effect(() => {
+      this.azimuth();
+      this.elevation();
+      this.tint();
+      untracked(() => this.sendLight());
+    });
+  }
+
+  protected drag(event: PointerEvent): void {
+    if (event.buttons !== 1 && event.type !== 'pointerdown') return;
+    const box = (event.currentTarget as HTMLElement).getBoundingClientRect();
+    const dx = event.clientX - (box.left + box.width / 2);
+    const dy = box.top + box.height / 2 - event.clientY;
+    if (Math.hypot(dx, dy) > 4) this.azimuth.set(Math.round(((Math.atan2(dy, dx) * 180) / Math.PI + 360) % 360));
+  }
+
+  protected setAzimuth(event: Event): void {
+    this.azimuth.set(Number((event.target as HTMLInputElement).value));
+  }
+
+  protected setElevation(event: Event): void {
+    this.elevation.set(Number((event.target as HTMLInputElement).value));
+  }
+
+  protected setTint(tint: MetalTint): void {
+    this.tint.set(tint);
+  }
+
+  private readColours(): { ink: string; ground: string } {
+    const style = getComputedStyle(this.flatCanvas().nativeElement);
+    this.colours = { ink: style.color, ground: style.backgroundColor };
+    return this.colours;
+  }
+
+  private sendLight(): void {
+    this.post({ kind: 'light', id: this.nextId, light: { azimuthDeg: this.azimuth(), elevationDeg: this.elevation() }, tint: this.tint() });
+  }
+
+  private post(request: PlateRequest, transfer: Transferable[] = []): void {
+    this.worker?.postMessage(request, transfer);
+  }
+}
+
+/** The plates' worker, holding both canvases; null where a browser has no OffscreenCanvas or module workers. */
+function startWorker(flat: HTMLCanvasElement, lit: HTMLCanvasElement): Worker | null {
+  if (typeof Worker === 'undefined' || typeof flat.transferControlToOffscreen !== 'function') return null;
+  try {
+    const worker = new Worker(new URL('./study-plates.worker', import.meta.url), { type: 'module', name: 'study-plates' });
+    const [f, l] = [flat.transferControlToOffscreen(), lit.transferControlToOffscreen()];
+    worker.postMessage({ kind: 'canvases', flat: f, lit: l } satisfies PlateRequest, [f, l]);
+    return worker;
+  } catch {
+    return null;
+  }
+}

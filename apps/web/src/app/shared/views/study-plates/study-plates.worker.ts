@@ -1,0 +1,93 @@
+/// <reference lib="webworker" />
+import { computeHeightField, shadeHeightField, type HeightField, type MetalTint, type Point, type SurfaceLight } from '@barwright/engine';
+import type { PlateReply, PlateRequest } from './plate-messages';
+
+/*
+ * The line study's two plates, drawn off the page's thread into the OffscreenCanvases they were
+ * handed: the flat one (ink lines at true scale, the groove's width) at once, then the lit one (the
+ * engine's height field of the grooves, shaded as metal). A light or metal change only reshades the
+ * lit plate. Messages that arrive while it works replace the waiting ones of their kind, so a slider
+ * dragged fast paints only its newest position.
+ */
+type Surface = Extract<PlateRequest, { kind: 'surface' }>;
+let flat: OffscreenCanvas | null = null;
+let lit: OffscreenCanvas | null = null;
+let field: HeightField | null = null;
+let light: SurfaceLight = { azimuthDeg: 60, elevationDeg: 35 };
+let tint: MetalTint = 'silver';
+let pendingSurface: Surface | null = null;
+let pendingLight: Extract<PlateRequest, { kind: 'light' }> | null = null;
+let scheduled = false;
+
+addEventListener('message', (event: MessageEvent<PlateRequest>) => {
+  const request = event.data;
+  if (request.kind === 'canvases') ({ flat, lit } = request);
+  else if (request.kind === 'surface') pendingSurface = request;
+  else pendingLight = request;
+  schedule();
+});
+
+function schedule(): void {
+  if (scheduled) return;
+  scheduled = true;
+  setTimeout(work, 0);
+}
+
+function work(): void {
+  scheduled = false;
+  let id = 0;
+  if (pendingLight) {
+    ({ light, tint, id } = pendingLight);
+    pendingLight = null;
+  }
+  let fieldMs = 0;
+  if (pendingSurface) {
+    const s = pendingSurface;
+    pendingSurface = null;
+    drawFlat(s);
+    if (pendingSurface) return schedule(); // overtaken while drawing: start on the newer one
+    const started = performance.now();
+    field = computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx });
+    fieldMs = performance.now() - started;
+    id = Math.max(id, s.id);
+  }
+  if (!field || !lit) return;
+  const started = performance.now();
+  const rgba = shadeHeightField(field, light, tint);
+  if (lit.width !== field.width || lit.height !== field.height) [lit.width, lit.height] = [field.width, field.height];
+  lit.getContext('2d')?.putImageData(new ImageData(rgba as Uint8ClampedArray<ArrayBuffer>, field.width, field.height), 0, 0);
+  self.postMessage({ id, plate: 'lit', fieldMs, paintMs: performance.now() - started } satisfies PlateReply);
+}
+
+/** The flat plate: each engraved line in ink, as wide as its groove (at least a hairline), at true scale. */
+function drawFlat(s: Surface): void {
+  if (!flat) return;
+  const started = performance.now();
+  if (flat.width !== s.widthPx || flat.height !== s.heightPx) [flat.width, flat.height] = [s.widthPx, s.heightPx];
+  const ctx = flat.getContext('2d');
+  if (!ctx) return;
+  const sx = s.widthPx / (s.window.x1 - s.window.x0);
+  const sy = s.heightPx / (s.window.y1 - s.window.y0);
+  ctx.fillStyle = s.ground;
+  ctx.fillRect(0, 0, s.widthPx, s.heightPx);
+  ctx.strokeStyle = s.ink;
+  ctx.lineWidth = Math.max(s.width * sx, s.hairlinePx);
+  ctx.lineJoin = 'round';
+  ctx.beginPath();
+  for (const xy of s.lines) {
+    for (let i = 0; i < xy.length; i += 2) {
+      const px = (xy[i] - s.window.x0) * sx;
+      const py = (s.window.y1 - xy[i + 1]) * sy;
+      if (i === 0) ctx.moveTo(px, py);
+      else ctx.lineTo(px, py);
+    }
+  }
+  ctx.stroke();
+  self.postMessage({ id: s.id, plate: 'flat', fieldMs: 0, paintMs: performance.now() - started } satisfies PlateReply);
+}
+
+function toPoints(xy: Float64Array): { points: Point[] } {
+  const points: Point[] = new Array(xy.length / 2);
+  for (let i = 0; i < points.length; i++) points[i] = [xy[2 * i], xy[2 * i + 1]];
+  return { points };
+}
