@@ -111,7 +111,7 @@ describe('computeLineStudy', () => {
     }
   });
 
-  it('draws 200 lines (its time is the benchmark's to report, not a test's)', () => {
+  it('draws 200 lines (the benchmark reports its time)', () => {
     const design = { ...EXAMPLE_DESIGN, study: { ...EXAMPLE_DESIGN.study, lines: 200 } };
     const profile = computeProfile(design, { step: 0.01 });
     const study = computeLineStudy(design, profile);
