@@ -8,11 +8,16 @@ import { SCREEN_DIR, shoot } from './helpers/screens';
 const LOBES = 'field-rosette.layers[0].lobes';
 const REMIX_TITLE = 'Twenty-four sine, acrylic trial with a 4 mm cutter';
 
-/** Waits until every lit plate of the comparison has been painted at least once. */
+/** Waits until every plate of the comparison, flat and lit, shows the newest study it was given. */
 async function platesPainted(page: Page, count: number): Promise<void> {
-  const plates = page.getByTestId('compare-lit');
-  await expect(plates).toHaveCount(count);
-  for (let i = 0; i < count; i++) await expect(plates.nth(i)).not.toHaveAttribute('data-painted', '0', { timeout: 20_000 });
+  for (const id of ['compare-study-flat', 'compare-study-lit']) {
+    const plates = page.getByTestId(id);
+    await expect(plates).toHaveCount(count);
+    for (let i = 0; i < count; i++) {
+      await expect(plates.nth(i)).not.toHaveAttribute('data-drawn', '0', { timeout: 20_000 });
+      await expect(async () => expect(await plates.nth(i).getAttribute('data-drawn')).toBe(await plates.nth(i).getAttribute('data-requested'))).toPass();
+    }
+  }
 }
 
 /** The dialog at 1280 and 360 px, from its top and scrolled to its table (it scrolls inside itself). */
@@ -54,16 +59,16 @@ test('Explore: three bars picked into the tray open side by side at one scale un
   await expect(dialog.getByTestId('compare-column')).toHaveCount(3);
   await platesPainted(page, 3);
   // One scale: the flat studies are drawn over the same window at the same width.
-  const widths = await dialog.getByTestId('compare-flat').evaluateAll((svgs) => svgs.map((s) => Math.round(s.getBoundingClientRect().width)));
+  const widths = await dialog.getByTestId('compare-study-flat').evaluateAll((svgs) => svgs.map((s) => Math.round(s.getBoundingClientRect().width)));
   expect(new Set(widths).size).toBe(1);
   await expect(dialog.getByTestId('figure-row').first()).toBeVisible();
   await expect(dialog.getByTestId('diff-row').first()).toBeVisible();
   await expect(dialog.locator('td.changed').first()).toBeVisible();
   // One light: moving it relights every plate.
-  const before = await page.getByTestId('compare-lit').evaluateAll((c) => c.map((x) => x.getAttribute('aria-label')));
+  const before = await page.getByTestId('compare-study-lit').evaluateAll((c) => c.map((x) => x.getAttribute('aria-label')));
   await dialog.getByTestId('compare-light').fill('200');
-  await expect(page.getByTestId('compare-lit').first()).toHaveAttribute('aria-label', /lit from 200°/);
-  await expect(page.getByTestId('compare-lit').nth(2)).toHaveAttribute('aria-label', /lit from 200°/);
+  await expect(page.getByTestId('compare-study-lit').first()).toHaveAttribute('aria-label', /lit from 200°/);
+  await expect(page.getByTestId('compare-study-lit').nth(2)).toHaveAttribute('aria-label', /lit from 200°/);
   expect(before[0]).not.toContain('200°');
   await shootDialog(page, 'compare-explore');
   await page.getByTestId('compare-close').click();
@@ -86,9 +91,14 @@ test('design page: a remix beside its parent, every download in the revision his
   await shootDialog(page, 'compare-remix-parent');
   await page.getByTestId('compare-close').click();
 
+  // The lineage offers the same beside any bar of the chain.
+  await page.getByTestId('lineage-compare').first().click();
+  await expect(dialog.getByTestId('compare-column')).toHaveCount(2);
+  await page.getByTestId('compare-close').click();
+
   // Every download, for each revision.
   const revision = page.getByTestId('entry-revision').first();
-  for (const format of ['pdf', 'svg', 'study-svg', 'dxf', 'gcode', 'csv', 'json']) await expect(revision.getByTestId(`revision-download-${format}`)).toHaveCount(1);
+  for (const format of ['pdf', 'pdf-pair', 'svg', 'study-svg', 'dxf', 'gcode', 'csv', 'json']) await expect(revision.getByTestId(`revision-download-${format}`)).toHaveCount(1);
   const svg = await page.request.get((await revision.getByTestId('revision-download-study-svg').getAttribute('href'))!);
   const study = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(await svg.text()).svg;
   expect(study.title).toMatch(/^Line study: \d+ lines at /);

@@ -3,9 +3,9 @@ import { RouterLink } from '@angular/router';
 import { parseDesign, type Units } from '@barwright/contracts';
 import { formatLength } from '@barwright/engine';
 import { DesignCompute } from '../../features/studio/compute/design-compute';
-import { LitSurface } from '../views/lit-surface/lit-surface';
+import { StudyPlates } from '../views/study-plates/study-plates';
 import { formatMinutes } from '../views/plan-figures';
-import { studyDrawing, type StudyWindow } from '../views/study-drawing';
+import type { StudyWindow } from '../views/study-drawing';
 import type { CompareLight, CompareSide } from './compare-side';
 import { warningName } from './warning-names';
 
@@ -16,13 +16,13 @@ export interface ColumnFigure {
 }
 
 /**
- * One design of a comparison: its line study flat and lit over the window every column shows, at the
- * same true scale (equal columns, equal windows) and under the comparison's one light. Computed in its
+ * One design of a comparison: its line study flat and lit (the shared plates) over the window every
+ * column shows, at the same true scale (equal columns, equal windows) and under the comparison's one light. Computed in its
  * own worker; it hands its figures (period, depth, passes, time, warnings) up to the table.
  */
 @Component({
   selector: 'bw-compare-column',
-  imports: [RouterLink, LitSurface],
+  imports: [RouterLink, StudyPlates],
   providers: [DesignCompute],
   template: `
     <header class="head">
@@ -35,19 +35,10 @@ export interface ColumnFigure {
     </header>
     @if (!valid()) {
       <p class="bw-muted invalid">This design file holds a value the engine cannot take, so it is not drawn; its fields are in the table.</p>
-    } @else if (drawing(); as d) {
-      <!-- Width-fitted, so every column's scale is the same; a tall study shows its middle lines (slice crops, never rescales). -->
-      <svg class="flat" [attr.viewBox]="'0 0 ' + d.width + ' ' + d.height" [style.aspect-ratio]="d.width + ' / ' + d.height"
-           preserveAspectRatio="xMidYMid slice" role="img"
-           [attr.aria-label]="'Line study of ' + side().label + ', flat, at the same scale as the others'" data-testid="compare-flat">
-        <rect class="ground" x="0" y="0" [attr.width]="d.width" [attr.height]="d.height" />
-        <g class="lines" [attr.stroke-width]="d.stroke">
-          @for (line of d.lines; track $index) { <polyline [attr.points]="line" /> }
-        </g>
-      </svg>
-      <bw-lit-surface [study]="compute.views()!.study" [window]="window()" [controls]="false" testId="compare-lit"
-                      [azimuth]="light().azimuth" (azimuthChange)="moveLight({ azimuth: $event })"
-                      [elevation]="light().elevation" (elevationChange)="moveLight({ elevation: $event })" [tint]="light().tint" />
+    } @else if (compute.views()?.study; as study) {
+      <bw-study-plates [study]="study" [window]="window()" [controls]="false" idPrefix="compare-"
+                       [azimuth]="light().azimuth" (azimuthChange)="moveLight({ azimuth: $event })"
+                       [elevation]="light().elevation" (elevationChange)="moveLight({ elevation: $event })" [tint]="light().tint" />
     } @else {
       <div class="placeholder" role="status">Working out the line study…</div>
     }
@@ -66,10 +57,6 @@ export class CompareColumn {
 
   private readonly parsed = computed(() => parseDesign(this.side().design));
   protected readonly valid = computed(() => this.parsed().ok);
-  protected readonly drawing = computed(() => {
-    const study = this.compute.views()?.study;
-    return study ? studyDrawing(study, this.window()) : null;
-  });
 
   /** Dragging across any plate moves the one light of the comparison. */
   protected moveLight(change: Partial<CompareLight>): void {

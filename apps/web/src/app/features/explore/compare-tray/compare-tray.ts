@@ -12,6 +12,8 @@ import { ComparePicks, MAX_PICKS } from './compare-picks';
   imports: [MatButtonModule, MatIconModule],
   template: `
     @if (picks.picks().length > 0) {
+      <!-- Room at the foot of the page, so the tray never hides the last cards or the pages. -->
+      <div class="room" aria-hidden="true"></div>
       <aside class="tray" aria-label="Bars picked for comparing" data-testid="compare-tray">
         <ul class="picked">
           @for (p of picks.picks(); track p.id) {
