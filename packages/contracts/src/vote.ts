@@ -7,7 +7,7 @@ import { isoInstant } from './instant';
  *   POST /api/boards/:id/votes        CreateVoteBody → 201 { id }   (owner or editor)
  *   GET  /api/boards/:id/votes        → VoteSummary[]               (members)
  *   GET  /api/votes/:id               → Vote                        (members)
- *   GET  /api/votes/:id/next-pair     → VotePair, or 204 when the member has answered every pair
+ *   GET  /api/votes/:id/next-pair     → VotePair, or 204 when the member has answered every pair (or the vote has closed)
  *   PUT  /api/votes/:id/answers       VoteAnswerBody → Vote         (members; one answer per member per pair, changeable until closed)
  *   POST /api/votes/:id/close         → Vote                        (owner or editor)
  * Live: the socket.io namespace VOTES_NAMESPACE; a client emits `vote:watch` with a vote id (checked

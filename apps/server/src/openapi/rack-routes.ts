@@ -29,7 +29,7 @@ export const RACK_ROUTES: OpenApiRoute[] = [
   { method: 'post', path: '/api/boards/{id}/votes', summary: 'Open a vote over 3–30 designs of the board (editor)', tag: 'votes', body: c.createVoteBody, answer: id, status: 201 },
   { method: 'get', path: '/api/boards/{id}/votes', summary: "The board's votes, newest first (members)", tag: 'votes' },
   { method: 'get', path: '/api/votes/{id}', summary: 'A vote with its Bradley–Terry ranking (members)', tag: 'votes' },
-  { method: 'get', path: '/api/votes/{id}/next-pair', summary: 'The next pair to answer, the least compared first; 204 when you have answered every pair', tag: 'votes' },
+  { method: 'get', path: '/api/votes/{id}/next-pair', summary: 'The next pair to answer, the least compared first; 204 when you have answered every pair or the vote has closed', tag: 'votes' },
   { method: 'put', path: '/api/votes/{id}/answers', summary: 'Answer a pair (one answer per member per pair, changeable until it closes; 409 when closed)', tag: 'votes', body: c.voteAnswerBody },
   { method: 'post', path: '/api/votes/{id}/close', summary: 'Close a vote now (editor)', tag: 'votes' },
 ];

@@ -95,6 +95,7 @@ describe.each(drivers)('votes API on %s', (driver) => {
     const late = await c.viewer.send('put', `/api/votes/${voteId}/answers`, { a: x, b: y, pick: 'b' });
     expect(late.status).toBe(409);
     expect(late.body.error.code).toBe('vote_closed');
+    expect((await c.owner.get(`/api/votes/${voteId}/next-pair`)).status).toBe(204);
     expect((await c.viewer.get(`/api/votes/${voteId}`)).body.ranking).toEqual(vote.ranking);
   });
 

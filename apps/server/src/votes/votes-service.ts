@@ -72,10 +72,12 @@ export class VotesService {
     return this.describe(await this.closeIfDue(vote), userId);
   }
 
-  /** The next pair for this member: of the pairs they have not answered, one of the least compared by everyone; undefined when none is left. */
+  /** The next pair for this member: of the pairs they have not answered, one of the least compared by everyone; undefined when none is left or the vote has closed. */
   async nextPair(voteId: string, userId: string): Promise<VotePair | undefined> {
     const { db } = this.deps;
-    const { vote } = await requireVote(db, voteId, userId);
+    const { vote: found } = await requireVote(db, voteId, userId);
+    const vote = await this.closeIfDue(found);
+    if (vote.closedAt) return undefined; // a closed vote takes no more answers
     const answers = await this.answers(vote.id);
     const mine = new Set(answers.filter((a) => a.userId === userId).map((a) => `${a.lowId} ${a.highId}`));
     const times = new Map<string, number>();
