@@ -59,7 +59,7 @@ describe('the sweep batch', () => {
     );
   }, 120_000);
 
-  it('hands out the typed arrays’ buffers for transfer, three per candidate', () => {
+  it('hands out the typed arrays’ buffers for transfer, three per candidate, and refuses an invalid candidate by its fields', () => {
     const c: SweepCandidate = {
       units: 'mm',
       rosette: { name: 'Sine 24', units: 'mm', rosette: EXAMPLE_DESIGN.rosette },
@@ -70,8 +70,10 @@ describe('the sweep batch', () => {
       barLength: 150,
       study: EXAMPLE_DESIGN.study,
     };
-    const batch = computeBatch([c, c]);
+    const tooBig = { ...c, rubber: { shape: 'round' as const, radius: 60 } };
+    const batch = computeBatch([c, tooBig, c]);
     expect(batchTransferables(batch)).toHaveLength(6);
-    expect(batch[0]).toEqual(batch[1]);
+    expect(batch[0]).toEqual(batch[2]);
+    expect(batch[1]).toEqual({ ok: false, message: expect.stringMatching(/^rubber\.radius must not be larger than the rosette's base radius/) });
   });
 });

@@ -1,4 +1,4 @@
-import { candidateDesign, type Design, type SweepCandidate } from '@barwright/contracts';
+import { candidateDesign, parseDesign, type Design, type SweepCandidate } from '@barwright/contracts';
 import { heightSpan, planCut, peakToValley } from '../cut-plan';
 import { periodProfile } from '../period-profile';
 import { computeProfile, profileSamples } from '../profile';
@@ -71,11 +71,14 @@ export function computeCandidate(candidate: SweepCandidate, options: BatchOption
 }
 
 /**
- * The sweep's batch entry point: each candidate computed in turn; a candidate the engine refuses
- * (a design outside what the engine computes) comes back with its message instead of stopping the batch.
+ * The sweep's batch entry point: each candidate's design file checked as a file is (a rubber larger
+ * than the rosette, a bar past the complexity bounds: refused with the fields named, not computed),
+ * then computed in turn; one the engine refuses comes back with its message instead of stopping the batch.
  */
 export function computeBatch(candidates: readonly SweepCandidate[], options: BatchOptions = {}): BatchItem[] {
-  return candidates.map((candidate) => {
+  return candidates.map((candidate): BatchItem => {
+    const checked = parseDesign(candidateDesign(candidate));
+    if (!checked.ok) return { ok: false, message: checked.errors.map((e) => `${e.path} ${e.message}`).join('; ') };
     try {
       return { ok: true, result: computeCandidate(candidate, options) };
     } catch (error) {
