@@ -147,6 +147,7 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
   await expect(maren.getByTestId('diff-row')).toContainText('30');
   await expect(maren.getByTestId('diff-row')).toContainText('36');
   await shootFromTop(maren, 'studio-history');
+  await maren.getByTestId('compare-close').click(); // the comparison opens side by side in a dialog
   await maren.getByTestId('version-restore').click();
   await maren.getByTestId('confirm-accept').click();
   await expect(maren.getByTestId(LOBES)).toHaveValue('30');
