@@ -22,11 +22,16 @@ export function keptRows(x: ArrayLike<number>, columns: readonly ArrayLike<numbe
     let worst = -1;
     let worstError = tolerance;
     const span = x[b] - x[a];
-    for (let i = a + 1; i < b; i++) {
-      const t = span === 0 ? 0 : (x[i] - x[a]) / span;
-      for (const y of columns) {
-        const error = Math.abs(y[i] - (y[a] + t * (y[b] - y[a])));
-        if (error > worstError) [worst, worstError] = [i, error];
+    for (let c = 0; c < columns.length; c++) {
+      const y = columns[c];
+      const ya = y[a];
+      const slope = span === 0 ? 0 : (y[b] - ya) / span;
+      for (let i = a + 1; i < b; i++) {
+        const error = Math.abs(y[i] - (ya + slope * (x[i] - x[a])));
+        if (error > worstError) {
+          worst = i;
+          worstError = error;
+        }
       }
     }
     if (worst < 0) continue;

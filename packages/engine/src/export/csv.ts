@@ -1,4 +1,5 @@
 import { MM_PER_INCH, type Units } from '@barwright/contracts';
+import { profileSamples } from '../profile';
 import type { Profile } from '../types';
 import { keptRows } from './csv-rows';
 import { fixed } from './number-format';
@@ -15,6 +16,16 @@ const DECIMALS: Readonly<Record<Units, number>> = { mm: 5, in: 6 };
 export function profileCsv(profile: Profile, units: Units, tolerance: number): string {
   const scale = units === 'in' ? 1 / MM_PER_INCH : 1;
   const num = (mm: number) => fixed(mm * scale, DECIMALS[units]);
+  const { x, columns } = profileColumns(profile);
+  const rows = [`x_${units},cutter_path_y_${units},bar_edge_y_${units},follower_y_${units}`];
+  for (const i of keptRows(x, columns, tolerance)) rows.push(`${num(x[i])},${num(columns[0][i])},${num(columns[1][i])},${num(columns[2][i])}`);
+  return rows.join('\r\n') + '\r\n';
+}
+
+/** x and the three paths as typed arrays: the profile's own when it carries them, else read from its points. */
+function profileColumns(profile: Profile): { x: Float64Array; columns: Float64Array[] } {
+  const typed = profileSamples(profile);
+  if (typed) return { x: typed.x, columns: [typed.cutter, typed.bar, typed.follower] };
   const count = Math.min(profile.cutterPath.length, profile.barEdge.length, profile.followerPath.length);
   const x = new Float64Array(count);
   const columns = [new Float64Array(count), new Float64Array(count), new Float64Array(count)];
@@ -24,7 +35,5 @@ export function profileCsv(profile: Profile, units: Units, tolerance: number): s
     columns[1][i] = profile.barEdge[i][1];
     columns[2][i] = profile.followerPath[i][1];
   }
-  const rows = [`x_${units},cutter_path_y_${units},bar_edge_y_${units},follower_y_${units}`];
-  for (const i of keptRows(x, columns, tolerance)) rows.push(`${num(x[i])},${num(columns[0][i])},${num(columns[1][i])},${num(columns[2][i])}`);
-  return rows.join('\r\n') + '\r\n';
+  return { x, columns };
 }
