@@ -13,11 +13,11 @@ export interface AccountChangeWording {
   danger: boolean;
 }
 
-/** What each role may do, in one sentence each (the People page's intro and its dialogs say the same). */
+/** What each role may do, as a phrase after the person (the People page's list of roles and its dialogs say the same). */
 export const ROLE_POWERS: Readonly<Record<Role, string>> = {
-  member: 'Members design bars on their boards, publish, rate, comment and remix.',
-  moderator: 'Moderators also work the moderation desk: reports, hidden items, the showcase and the audit log.',
-  admin: 'Admins also manage people on this page: roles, including admin, and suspensions.',
+  member: 'designs bars on their boards, publishes, rates, comments and remixes.',
+  moderator: 'also works the moderation desk: reports, hidden items, the showcase and the audit log.',
+  admin: 'also manages people on this page: roles, admin included, and suspensions.',
 };
 
 const ROLE_NAMES: Readonly<Record<Role, string>> = { member: 'a member', moderator: 'a moderator', admin: 'an admin' };
@@ -30,7 +30,7 @@ export function accountChangeWording(name: string, email: string, change: Accoun
   switch (change.kind) {
     case 'role': {
       const gains = rank(change.to) > rank(change.from);
-      const what = gains ? ROLE_POWERS[change.to] : `${name} loses what ${ROLE_NAMES[change.from]} may do at once.`;
+      const what = gains ? `As ${ROLE_NAMES[change.to]}, ${name} ${ROLE_POWERS[change.to]}` : `${name} loses what ${ROLE_NAMES[change.from]} may do at once.`;
       return {
         title: change.to === 'member' ? `Make ${name} a member again?` : `Make ${name} ${ROLE_NAMES[change.to]}?`,
         message: `${what} The change applies at once; you can undo it right after.`,

@@ -46,7 +46,8 @@ export class PeoplePage {
 
   protected readonly roles = ROLES;
   protected readonly roleLabel: Record<Role, string> = { member: 'Member', moderator: 'Moderator', admin: 'Admin' };
-  protected readonly powers = ROLE_POWERS;
+  /** "Designs bars on their boards, …": the role's powers as a sentence of its own. */
+  protected readonly powerOf = (role: Role) => ROLE_POWERS[role].charAt(0).toUpperCase() + ROLE_POWERS[role].slice(1);
   protected readonly filter = signal('');
   protected readonly sort = signal<PeopleSort>({ active: 'person', direction: 'asc' });
   protected readonly pageIndex = signal(0);

@@ -24,7 +24,8 @@ describe('audit log lines', () => {
     expect(auditSentence(entry({ action: 'user.role', target: { kind: 'user', id: 'm', label: 'Maren' }, details: { from: 'admin', to: 'member', undo: true } }))).toBe(
       'Tobias undid the role change of Maren: admin → member',
     );
-    expect(auditSentence(entry({ action: 'showcase.feature', target: { kind: 'entry', id: 'e', label: 'Sine 24' }, subject: null }))).toBe('Tobias featured Sine 24');
+    expect(auditSentence(entry({ action: 'showcase.feature', target: { kind: 'entry', id: 'e', label: 'Sine 24' }, subject: null }))).toBe('Tobias featured “Sine 24”');
+    expect(auditSentence(entry({ action: 'showcase.unfeature', target: { kind: 'entry', id: 'e', label: 'Sine 24' }, subject: null }))).toBe('Tobias took “Sine 24” out of the showcase');
   });
 
   it('link to the entry the line is about', () => {

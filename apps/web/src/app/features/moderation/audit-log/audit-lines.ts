@@ -4,7 +4,11 @@ import { AUDIT_ACTION_LABELS, type AuditEntry } from '@barwright/contracts';
 export function auditSentence(e: AuditEntry): string {
   const verb = AUDIT_ACTION_LABELS[e.action];
   const by = e.subject && e.target.kind !== 'user' ? ` (by ${e.subject.displayName})` : '';
+  // A bar's title in quotes, as a comment's label ("comment on “Sine 24”") already has it.
+  const what = e.target.kind === 'entry' ? `“${e.target.label}”` : e.target.label;
   switch (e.action) {
+    case 'showcase.unfeature':
+      return `${e.actor.displayName} took ${what} out of the showcase`;
     case 'showcase.reorder':
       return `${e.actor.displayName} ${reorderText(e.details['moves'])}`;
     case 'user.role': {
@@ -13,10 +17,10 @@ export function auditSentence(e: AuditEntry): string {
     }
     case 'report.dismiss': {
       const n = Number(e.details['reports'] ?? 0);
-      return `${e.actor.displayName} dismissed ${n === 1 ? 'the report' : `${n} reports`} on ${e.target.label}${by}`;
+      return `${e.actor.displayName} dismissed ${n === 1 ? 'the report' : `${n} reports`} on ${what}${by}`;
     }
     default:
-      return `${e.actor.displayName} ${verb} ${e.target.label}${by}`;
+      return `${e.actor.displayName} ${verb} ${what}${by}`;
   }
 }
 
