@@ -41,8 +41,20 @@ test.describe.configure({ timeout: 240_000 });
 test('every screen a visitor reaches', async ({ page }) => {
   await page.setViewportSize({ width: 1280, height: 800 });
   await visit(page, '/', 'every-home-visitor', (p) => expect(p.getByTestId('showcase')).toBeVisible());
+  // What Barwright is for, above the fold of a 1280 × 800 screen.
+  const pitch = await page.locator('#home-title').boundingBox();
+  console.log(`home pitch for a visitor at y ${Math.round(pitch!.y)} px`);
+  expect.soft(pitch!.y + pitch!.height).toBeLessThan(800);
+  // The dark ground as the footer's toggle sets it: the logo's tile keeps its steel.
+  await page.getByTestId('ground-toggle').click();
+  await page.screenshot({ path: '.tmp/screens/every-home-visitor-dark-1280.png' });
+  await page.getByTestId('ground-toggle').click();
   await visit(page, '/explore', 'every-explore-grid', (p) => expect(p.getByTestId('explore-grid')).toBeVisible());
   await visit(page, '/explore?view=table', 'every-explore-table', (p) => expect(p.getByTestId('explore-table')).toBeVisible());
+  // At 1280 px the table fits its column: every heading, Comments and Published included, in sight.
+  const fit = await page.locator('bw-explore-table .scroller').evaluate((el) => ({ table: el.scrollWidth, box: el.clientWidth }));
+  console.log(`explore table at 1280 px: ${fit.table} px in a ${fit.box} px box`);
+  expect.soft(fit.table).toBeLessThanOrEqual(fit.box);
   // Browsing by phase schedule: the demo's one moiré, named in its row.
   await page.goto('/explore?view=table&schedule=sine');
   await expect(page.getByTestId('explore-row')).toHaveCount(1);

@@ -8,7 +8,7 @@ const SAMPLES_PER_PERIOD = 60;
 /** Periods shown: enough for the phase schedule to read as a pattern. */
 const PERIODS_SHOWN = 4;
 /** The widest stroke drawn, as a fraction of the drawing's width. */
-const FINEST_STROKE = 1 / 300;
+const FINEST_STROKE = 1 / 200;
 /** Lines drawn at most, from the first: a small picture shows the pattern, not every line. */
 const LINES_SHOWN = 24;
 
