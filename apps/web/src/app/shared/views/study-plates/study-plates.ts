@@ -41,6 +41,7 @@ export class StudyPlates {
   /** False: the plates alone, the light set from outside. */
   readonly controls = input(true);
   private readonly cssWidth = signal(0);
+  private readonly themeChanges = signal(0);
   protected readonly supported = signal(true);
   /** The newest request each plate shows (for tests and benchmarks: the plate is drawn when it equals `requested`). */
   protected readonly flatShown = signal(0);
@@ -51,7 +52,7 @@ export class StudyPlates {
 
   private worker: Worker | null = null;
   private nextId = 0;
-  /** The flat plate's ink and ground as the page resolves them (read once a size: reading styles forces a style pass). */
+  /** The flat plate's ink and ground as the page resolves them (read once, and again when the theme changes: reading styles forces a style pass). */
   private colours: { ink: string; ground: string } | null = null;
 
   constructor() {
@@ -66,18 +67,25 @@ export class StudyPlates {
         const reply = event.data;
         (reply.plate === 'flat' ? this.flatShown : this.litShown).set(reply.id);
       });
-      const observer = new ResizeObserver(([entry]) => {
-        this.colours = null;
-        this.cssWidth.set(Math.floor(entry.contentRect.width));
-      });
+      const observer = new ResizeObserver(([entry]) => this.cssWidth.set(Math.floor(entry.contentRect.width)));
       observer.observe(this.flatCanvas().nativeElement.parentElement!);
-      destroyRef.onDestroy(() => observer.disconnect());
+      // The ground toggle (light or dark) changes a class or attribute high up: read the colours again, redraw.
+      const theme = new MutationObserver(() => {
+        this.colours = null;
+        this.themeChanges.update((n) => n + 1);
+      });
+      for (const el of [document.documentElement, document.body]) theme.observe(el, { attributes: true, attributeFilter: ['class', 'data-theme', 'style'] });
+      destroyRef.onDestroy(() => {
+        observer.disconnect();
+        theme.disconnect();
+      });
     });
     destroyRef.onDestroy(() => this.worker?.terminate());
     // A new study or window: new plates (the light goes first, so the first lit paint is right).
     effect(() => {
       const frame = this.frame();
       const study = this.study();
+      this.themeChanges();
       if (!frame) return;
       untracked(() => {
         this.sendLight();
