@@ -22,6 +22,7 @@ export { type LineStudy, computeLineStudy, vGrooveWidth } from './line-study';
 export { linePhase, reducedPhase } from './phase-schedule';
 export { type LineStudySvgOptions, lineStudySvg } from './line-study-svg';
 export { EXPORT_FORMATS, type ExportFormat, type ExportedFile, type ExportOptions, exportDesign } from './export';
+export { GCODE_STANDARD, GCODE_SUMMARY } from './export/gcode-standard';
 export { type CutPlan, type CutPlanOptions, planCut, peakToValley, steepestSlope, LEAD_CLEARANCE_MM, RETURN_SPEED_FACTOR } from './cut-plan';
 export { type CutCheckInput, cutPlanWarnings } from './cut-plan-warnings';
 export { SAFETY_CAUTIONS, SHORT_CAUTION, setUpReminders } from './cut-plan-notes';

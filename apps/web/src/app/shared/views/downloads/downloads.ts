@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
+import { GCODE_SUMMARY } from '@barwright/engine';
 
 /** One file a design can be downloaded as. `format` is the export route's `format` parameter. */
 export interface DownloadChoice {
@@ -17,7 +18,7 @@ export const DESIGN_DOWNLOADS: readonly DownloadChoice[] = [
   { format: 'svg', label: 'SVG', what: 'drawing of the bar, in mm', icon: 'draw' },
   { format: 'study-svg', label: 'Study SVG', what: 'the line study as a drawing', icon: 'texture' },
   { format: 'dxf', label: 'DXF', what: 'R12 polylines for CAD', icon: 'architecture' },
-  { format: 'gcode', label: 'G-code', what: 'RS-274 program for the passes', icon: 'precision_manufacturing' },
+  { format: 'gcode', label: 'G-code', what: GCODE_SUMMARY, icon: 'precision_manufacturing' }, // the command line's words too
   { format: 'csv', label: 'CSV', what: 'the profile’s points, to 0.001 mm', icon: 'table_view' },
   { format: 'json', label: 'Design file', what: 'the design itself, for the command line', icon: 'data_object' },
 ];
