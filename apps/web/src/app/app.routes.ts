@@ -11,6 +11,8 @@ export const routes: Routes = [
   { path: 'explore', loadChildren: () => import('./features/explore/explore.routes').then((m) => m.EXPLORE_ROUTES) },
   { path: 'entries', loadChildren: () => import('./features/entries/entries.routes').then((m) => m.ENTRIES_ROUTES) },
   { path: 'notifications', loadChildren: () => import('./features/notifications/notifications.routes').then((m) => m.NOTIFICATIONS_ROUTES) },
+  { path: 'rack', loadChildren: () => import('./features/rack/rack.routes').then((m) => m.RACK_ROUTES) },
+  { path: 'votes', loadChildren: () => import('./features/votes/votes.routes').then((m) => m.VOTES_ROUTES) },
   { path: 'rosettes', loadChildren: () => import('./features/rosettes/rosettes.routes').then((m) => m.ROSETTES_ROUTES) },
   // Moderation: the desk (reports, hidden items, showcase curation, audit log), for moderators and admins.
   { path: 'moderation', loadChildren: () => import('./features/moderation/moderation.routes').then((m) => m.MODERATION_ROUTES) },

@@ -1,7 +1,7 @@
 import { Routes } from '@angular/router';
-import { authGuard } from '../../core/auth/auth-guard';
 
+// The measured-rosette import lives under the rack now; old addresses still arrive there.
 export const ROSETTES_ROUTES: Routes = [
-  { path: '', pathMatch: 'full', redirectTo: 'measured' },
-  { path: 'measured', title: 'Measured rosette', canActivate: [authGuard], loadComponent: () => import('./measured-page/measured-page').then((m) => m.MeasuredPage) },
+  { path: '', pathMatch: 'full', redirectTo: '/rack/measured' },
+  { path: 'measured', redirectTo: '/rack/measured' },
 ];

@@ -12,11 +12,11 @@ describe('navLinksFor', () => {
   });
 
   it('shows Moderation to moderators and admins', () => {
-    expect(navLinksFor({ isAdmin: false, isModerator: true, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Boards', 'Moderation']);
+    expect(navLinksFor({ isAdmin: false, isModerator: true, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Boards', 'Rack', 'Moderation']);
     expect(navLinksFor({ isAdmin: true, localMail: false, signedIn: true, openReports: 3 }).find((l) => l.label === 'Moderation')?.badge).toBe(3);
   });
 
-  it('shows Boards to signed-in members only', () => {
-    expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Boards']);
+  it('shows Boards and the rack to signed-in members only', () => {
+    expect(navLinksFor({ isAdmin: false, localMail: false, signedIn: true }).map((l) => l.label)).toEqual(['Home', 'Explore', 'Boards', 'Rack']);
   });
 });

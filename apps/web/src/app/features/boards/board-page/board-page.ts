@@ -14,10 +14,11 @@ import { BoardStore } from '../board-store';
 import { ROLE_HINTS, ROLE_LABELS } from '../board-roles';
 import { BoardDesigns } from './board-designs';
 import { BoardMembers } from './board-members';
+import { BoardVotes } from '../../votes/board-votes/board-votes';
 
 @Component({
   selector: 'bw-board-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule, MatMenuModule, MatProgressBarModule, BoardDesigns, BoardMembers],
+  imports: [RouterLink, MatButtonModule, MatIconModule, MatMenuModule, MatProgressBarModule, BoardDesigns, BoardMembers, BoardVotes],
   providers: [BoardStore],
   templateUrl: './board-page.html',
   styleUrl: './board-page.scss',

@@ -33,6 +33,7 @@ import { StudioStore } from '../studio-store';
 import { LiveSummary } from './live-summary';
 import { ExportButtons } from '../views/export-buttons/export-buttons';
 import { StudioViews } from '../views/studio-views';
+import { StudioRackActions } from '../../rack/studio-rack-actions/studio-rack-actions';
 
 /** Below this width the parameters and the views share the screen by a switch. */
 const NARROW_QUERY = '(max-width: 959.98px)';
@@ -57,7 +58,7 @@ export const PANELS = [
   imports: [
     RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
     ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
-    FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons, LiveSummary,
+    FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons, LiveSummary, StudioRackActions,
   ],
   providers: [CollabSession, DesignCompute, StudioStore],
   templateUrl: './design-studio.html',
