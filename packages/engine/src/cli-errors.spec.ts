@@ -2,6 +2,7 @@ import { EXAMPLE_DESIGN } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { EXIT_OK, EXIT_USAGE, runCli, type CliIo } from './cli';
 import { GCODE_STANDARD, GCODE_SUMMARY } from './export/gcode-standard';
+import { EXPORT_FORMATS } from './export/index';
 import { fromMm } from './units';
 
 /** Runs the CLI in-process against an in-memory file system. */
@@ -61,7 +62,7 @@ describe('CLI errors name the field and exit with code 2', () => {
       [['profile', 'd.json', '--step', 'fine'], /--step: must be a number between 0\.001 and 150 mm \(got "fine"\)/],
       [['profile', 'd.json', '--step', '0'], /--step: must be a number/],
       [['export', 'd.json'], /export needs --format/],
-      [['export', 'd.json', '--format', 'stl'], /--format: must be one of svg, dxf, gcode, csv, pdf/],
+      [['export', 'd.json', '--format', 'stl'], new RegExp(`--format: must be one of ${EXPORT_FORMATS.join(', ')} \\(got "stl"\\)`)],
     ];
     for (const [argv, message] of expectations) {
       const result = await run(argv, files);
@@ -145,7 +146,8 @@ describe('CLI commands in-process', () => {
 
   it('names the G-code format the way the web does, from one place', async () => {
     const help = (await run(['help', 'export'])).stdout;
-    expect(help).toContain(`gcode: ${GCODE_SUMMARY}`);
+    expect(help).toContain(`gcode      ${GCODE_SUMMARY}`);
+    for (const format of EXPORT_FORMATS) expect(help).toMatch(new RegExp(`^ {17}${format} +\\S`, 'm')); // every format explained
     expect(GCODE_SUMMARY).toContain(GCODE_STANDARD);
     expect(help).not.toMatch(/RS274NGC/);
   });

@@ -6,6 +6,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { toMm } from './units';
+import { EXPORT_FORMATS } from './export/index';
 
 const ENGINE = fileURLToPath(new URL('..', import.meta.url));
 const ROOT = join(ENGINE, '../..');
@@ -64,7 +65,7 @@ describe('barwright CLI (spawned with node)', () => {
   it('prints help for each command', async () => {
     const run = await barwright(['export', '--help']);
     expect(run.code).toBe(0);
-    expect(run.stdout).toContain('Usage: barwright export FILE --format svg|dxf|gcode|csv|pdf');
+    expect(run.stdout).toContain(`Usage: barwright export FILE --format ${EXPORT_FORMATS.join('|')}`);
   });
 
   it('plans the demo bar: 30–40 minutes in A2 (common practice), lengths in mm', async () => {

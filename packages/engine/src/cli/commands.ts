@@ -87,13 +87,25 @@ const planCommand: Command = {
   },
 };
 
+/** What each export format holds, for `barwright help export` (the format list itself is the engine's EXPORT_FORMATS). */
+const FORMAT_HELP: Readonly<Record<ExportFormat, string>> = {
+  pdf: 'a 1:1 printable template with the set-up and the cut plan',
+  'pdf-pair': 'the same, with the opposite blank of the cut at 1:1',
+  svg: 'bar outline at 1:1 in mm',
+  'study-svg': 'the line study as a drawing',
+  dxf: 'R12 drawing',
+  gcode: GCODE_SUMMARY,
+  csv: 'the profile\'s points',
+  json: 'the design file itself',
+};
+
 const exportCommand: Command = {
-  summary: 'write the bar as svg, dxf, gcode, csv or pdf',
-  usage: 'barwright export FILE --format svg|dxf|gcode|csv|pdf [--out OUT]',
+  summary: `write the bar as ${EXPORT_FORMATS.join(', ')}`,
+  usage: `barwright export FILE --format ${EXPORT_FORMATS.join('|')} [--out OUT]`,
   details: [
-    `  --format F   svg: bar outline at 1:1 in mm; dxf: R12 drawing; gcode: ${GCODE_SUMMARY};`,
-    '               csv: the profile; pdf: a 1:1 printable template with the cut plan',
-    '  --out OUT    file to write (default bar.svg, bar.dxf, bar.nc, bar.csv or bar.pdf)',
+    '  --format F   one of:',
+    ...EXPORT_FORMATS.map((format) => `                 ${format.padEnd(10)} ${FORMAT_HELP[format]}`),
+    '  --out OUT    file to write (default bar followed by the format\'s ending: bar.svg, bar.nc, …)',
     'DXF, G-code and CSV are in the file\'s units.',
   ].join('\n'),
   options: { format: { type: 'string' }, out: { type: 'string' } },
