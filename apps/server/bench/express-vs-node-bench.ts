@@ -18,6 +18,7 @@ import { explorePage } from '../src/explore/explore-query';
 import { openTestDatabase } from '../src/testing/test-database';
 import { startTestServer } from '../src/testing/test-app';
 import { seedExplore } from './explore-bench-seed';
+import { withLiveness } from '../src/http/liveness';
 
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 5);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 4);
@@ -30,7 +31,8 @@ async function serve() {
   const database = await openTestDatabase('pglite');
   await seedExplore(database.db, { members: 200, entries: 2_000, ratingsPerEntry: 5 });
   const server = await startTestServer(database);
-  const express = http.createServer(server.app);
+  // As main.ts serves it: liveness answered by the listener before Express, everything else by Express.
+  const express = http.createServer(withLiveness(server.app, database.kind));
   // The bare server answers the same two paths with the same bodies: health as is, Explore through the
   // same query schema and query function.
   const bare = http.createServer((req, res) => {

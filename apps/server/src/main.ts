@@ -1,6 +1,7 @@
 import http from 'node:http';
 import { createApp, type AppLocals } from './app';
 import { closeHttpServer } from './http/graceful-close';
+import { withLiveness } from './http/liveness';
 import { ComputePool } from './compute/compute-pool';
 import { BoardAccessEvents } from './boards/board-access';
 import { CLOSE_CODES } from '@barwright/contracts';
@@ -93,7 +94,7 @@ async function main() {
     trustProxy: config.trustProxy,
     rateLimitStore: redis && redisRateLimitStores(redis.prefix, (args) => redis.client.sendCommand(args)),
   });
-  const server = http.createServer(app);
+  const server = http.createServer(withLiveness(app, database.kind));
   gateway = new CollabGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, accessEvents, origins, store: designDocStore, relay });
   gateway.attach(server);
   notify = new NotifyGateway({ db: database.db, sessionParser: (app.locals as AppLocals).sessionParser, events: notificationEvents, origins, adapter: redis && createAdapter && createAdapter(redis.client, { streamName: `${redis.prefix}:socket.io`, channelPrefix: `${redis.prefix}:socket.io` }) });

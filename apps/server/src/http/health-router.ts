@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { sql } from 'drizzle-orm';
 import type { Health, Readiness } from '@barwright/contracts';
 import type { Db } from '../database/database';
+import { livenessAnswer } from './liveness';
 
 /** One dependency's probe: resolves when it answers. */
 export type ReadinessCheck = () => Promise<unknown>;
@@ -41,10 +42,10 @@ export function healthRouter(deps: HealthDeps): Router {
   const router = Router();
   const checks: Record<string, ReadinessCheck> = { database: () => deps.db.execute(sql`select 1`), ...deps.readinessChecks };
   // Liveness is probed often and its answer never changes: written once, sent as it is (no ETag to hash).
-  const alive = JSON.stringify({ status: 'ok', database: deps.databaseKind } satisfies Health);
-  const aliveHeaders = { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': String(Buffer.byteLength(alive)), 'Cache-Control': 'no-store' };
+  // The server's listener answers it before Express (http/liveness.ts); this route serves an app mounted alone.
+  const alive = livenessAnswer(deps.databaseKind);
   router.get('/health', (_req, res) => {
-    res.writeHead(200, aliveHeaders).end(alive);
+    res.writeHead(200, alive.headers).end(alive.body);
   });
   router.get('/health/ready', async (_req, res) => {
     const names = Object.keys(checks);
