@@ -11,7 +11,6 @@ import { firstValueFrom } from 'rxjs';
 import { ApiError } from '../../../core/http/api-error';
 import { Notifier } from '../../../core/error-handling/notifier';
 import { confirmWith } from '../../../shared/confirm-dialog/confirm-dialog';
-import { DesignFromRosetteDialog } from '../design-from-rosette/design-from-rosette-dialog';
 import { RackApi } from '../rack-api';
 import { rackFieldLabel } from '../rack-field-label';
 import { rackTags } from '../rack-tags';
@@ -83,7 +82,9 @@ export class RackPage {
   }
 
   protected async newDesign(r: RackRosette): Promise<void> {
-    const ref = this.dialog.open<DesignFromRosetteDialog, RackRosette, string>(DesignFromRosetteDialog, { data: r, width: '28rem', maxWidth: '96vw' });
+    // Loaded when asked for: the design file's unit conversion brings the engine's index, which the rack itself does not need.
+    const { DesignFromRosetteDialog } = await import('../design-from-rosette/design-from-rosette-dialog');
+    const ref = this.dialog.open<InstanceType<typeof DesignFromRosetteDialog>, RackRosette, string>(DesignFromRosetteDialog, { data: r, width: '28rem', maxWidth: '96vw' });
     const id = await firstValueFrom(ref.afterClosed());
     if (id) await this.router.navigate(['/studio', id]);
   }
