@@ -1,5 +1,5 @@
 import { formatNumber, type Design } from '@barwright/contracts';
-import { roundLength } from '@barwright/engine';
+import { roundLength } from '@barwright/engine/length-format';
 import { MATERIAL_NAMES, SCHEDULE_NAMES, WAVE_NAMES } from '../../shared/entry-facts/entry-facts';
 
 /** One line of a design's set-up as the design page lists it, units beside the number. */

@@ -1,4 +1,4 @@
-import { formatLength } from '@barwright/engine';
+import { formatLength } from '@barwright/engine/length-format';
 import { type RatingSummary, type Units } from '@barwright/contracts';
 
 // The names of waves, materials and phase schedules live in the contracts, one table for the whole app.
