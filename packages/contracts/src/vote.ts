@@ -13,11 +13,13 @@ import { isoInstant } from './instant';
  * Live: the socket.io namespace VOTES_NAMESPACE; a client emits `vote:watch` with a vote id (checked
  * on every message) and hears `vote:ranking` whenever an answer arrives or the vote closes.
  */
-export const VOTE_LIMITS = { questionMax: 200, minDesigns: 3, maxDesigns: 30, maxDays: 90 } as const;
+export const VOTE_LIMITS = { questionMax: 200, minDesigns: 3, maxDesigns: 30, maxDays: 90, openedPerBoardPerDay: 20 } as const;
 export const VOTE_PICKS = ['a', 'b', 'tie'] as const;
 export type VotePick = (typeof VOTE_PICKS)[number];
 
 const designId = z.uuid('must be design ids');
+/** A uuid may arrive in either letter case; two ids are the same design when they match ignoring it. */
+const sameId = (x: string, y: string) => x.toLowerCase() === y.toLowerCase();
 
 export const createVoteBody = z.strictObject({
   question: z.string({ error: 'is required' }).trim().min(1, 'is required').max(VOTE_LIMITS.questionMax, `must be at most ${VOTE_LIMITS.questionMax} characters`),
@@ -25,7 +27,7 @@ export const createVoteBody = z.strictObject({
     .array(designId, { error: 'must be a list of design ids' })
     .min(VOTE_LIMITS.minDesigns, `needs at least ${VOTE_LIMITS.minDesigns} designs`)
     .max(VOTE_LIMITS.maxDesigns, `takes at most ${VOTE_LIMITS.maxDesigns} designs`)
-    .refine((ids) => new Set(ids).size === ids.length, 'must not repeat a design'),
+    .refine((ids) => new Set(ids.map((id) => id.toLowerCase())).size === ids.length, 'must not repeat a design'),
   /** When it closes by itself; in the future, within VOTE_LIMITS.maxDays. */
   closesAt: isoInstant(),
 });
@@ -33,7 +35,7 @@ export type CreateVoteBody = z.infer<typeof createVoteBody>;
 
 export const voteAnswerBody = z
   .strictObject({ a: designId, b: designId, pick: z.enum(VOTE_PICKS, { error: 'must be "a", "b" or "tie"' }) })
-  .refine((p) => p.a !== p.b, { path: ['b'], message: 'must be another design than a' });
+  .refine((p) => !sameId(p.a, p.b), { path: ['b'], message: 'must be another design than a' });
 export type VoteAnswerBody = z.infer<typeof voteAnswerBody>;
 
 export interface RankedDesign {

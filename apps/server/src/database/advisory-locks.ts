@@ -17,6 +17,10 @@ export const ADVISORY_LOCKS = {
   photoAllowance: 7301,
   /** With the member (hashtext of the user id): one change of the rack's rosette count (add, import) at a time. */
   rack: 7501,
+  /** With the member (hashtext of the user id): a saved sweep is counted and stored in one step. */
+  sweeps: 7502,
+  /** With the board (hashtext of the board id): the day's votes are counted and one opened in one step. */
+  votes: 7503,
 } as const;
 
 /** Waits for the transaction-scoped lock (key, hashtext(id)); it is released when the transaction ends. */

@@ -26,7 +26,7 @@ export const RACK_ROUTES: OpenApiRoute[] = [
   { method: 'put', path: '/api/rack/sweeps/{id}', summary: 'Change a saved sweep', tag: 'rack', body: c.sweepBody },
   { method: 'delete', path: '/api/rack/sweeps/{id}', summary: 'Delete a saved sweep', tag: 'rack', status: 204 },
   { method: 'post', path: '/api/boards/{id}/designs/batch', summary: 'Create a shortlist as bar designs in one request, all or nothing (editor)', tag: 'designs', body: c.designsBatchBody, answer: z.object({ ids: z.array(z.string()) }), status: 201 },
-  { method: 'post', path: '/api/boards/{id}/votes', summary: 'Open a vote over 3–30 designs of the board (editor)', tag: 'votes', body: c.createVoteBody, answer: id, status: 201 },
+  { method: 'post', path: '/api/boards/{id}/votes', summary: 'Open a vote over 3–30 designs of the board (editor; at most 20 a day a board, then 429)', tag: 'votes', body: c.createVoteBody, answer: id, status: 201 },
   { method: 'get', path: '/api/boards/{id}/votes', summary: "The board's votes, newest first (members)", tag: 'votes' },
   { method: 'get', path: '/api/votes/{id}', summary: 'A vote with its Bradley–Terry ranking (members)', tag: 'votes' },
   { method: 'get', path: '/api/votes/{id}/next-pair', summary: 'The next pair to answer, the least compared first; 204 when you have answered every pair or the vote has closed', tag: 'votes' },

@@ -6,6 +6,7 @@ import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
 import { HttpError, notFound } from '../http/http-error';
 import { isUuid } from '../http/uuid';
+import { ADVISORY_LOCKS, advisoryXactLock } from '../database/advisory-locks';
 import { parseBody } from '../http/validate';
 import { ownRosettesAmong, rackRosetteRows } from './rack-service';
 
@@ -54,9 +55,14 @@ export function sweepsRouter({ db }: { db: Db }): Router {
     const user = requireUser(req);
     const body = parseBody(sweepBody, req.body);
     const candidates = await sweepBars(db, user.id, body.choices);
-    const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(savedSweeps).where(eq(savedSweeps.ownerId, user.id));
-    if (n >= SWEEP_LIMITS.saved) throw new HttpError(400, 'invalid_input', `You can keep at most ${SWEEP_LIMITS.saved} sweeps; delete some first.`, { sweeps: `at most ${SWEEP_LIMITS.saved} saved sweeps` });
-    const [row] = await db.insert(savedSweeps).values({ ownerId: user.id, name: body.name, choices: body.choices, shortlist: body.shortlist, candidates }).returning();
+    const row = await db.transaction(async (tx) => {
+      // Counted and stored in one step, so requests sent together cannot all pass the count.
+      await advisoryXactLock(tx, ADVISORY_LOCKS.sweeps, user.id);
+      const [{ n }] = await tx.select({ n: sql<number>`count(*)::int` }).from(savedSweeps).where(eq(savedSweeps.ownerId, user.id));
+      if (n >= SWEEP_LIMITS.saved) throw new HttpError(400, 'invalid_input', `You can keep at most ${SWEEP_LIMITS.saved} sweeps; delete some first.`, { sweeps: `at most ${SWEEP_LIMITS.saved} saved sweeps` });
+      const [inserted] = await tx.insert(savedSweeps).values({ ownerId: user.id, name: body.name, choices: body.choices, shortlist: body.shortlist, candidates }).returning();
+      return inserted;
+    });
     res.status(201).json(toSaved(row));
   });
   router.get('/:id', async (req, res) => {

@@ -1,10 +1,11 @@
-import { and, asc, desc, eq, inArray, isNull, lte } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, inArray, isNull, lte, sql } from 'drizzle-orm';
 import { VOTE_LIMITS, type CreateVoteBody, type Vote, type VotePair, type VoteSummary } from '@barwright/contracts';
 import { boardMembers, boards, designs, users, voteAnswers, votes, type VoteRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { requireBoardRole } from '../boards/board-access';
 import { HttpError, notFound } from '../http/http-error';
 import { isUuid } from '../http/uuid';
+import { ADVISORY_LOCKS, advisoryXactLock } from '../database/advisory-locks';
 import type { Notifier } from '../notifications/notifier';
 import { allPairs, rankDesigns, storedPair, type StoredAnswer } from './vote-ranking';
 import type { VoteEvents } from './vote-events';
@@ -56,7 +57,20 @@ export class VotesService {
     if (closesAt.getTime() <= Date.now()) fields.closesAt = 'must be in the future';
     else if (closesAt.getTime() > Date.now() + VOTE_LIMITS.maxDays * DAY_MS) fields.closesAt = `must be within ${VOTE_LIMITS.maxDays} days`;
     if (Object.keys(fields).length) throw new HttpError(400, 'invalid_input', `Check the highlighted fields: ${Object.entries(fields).map(([p, m]) => `${p} ${m}`).join('; ')}`, fields);
-    const [row] = await db.insert(votes).values({ boardId, question: body.question, designIds: ids, createdBy: user.id, closesAt }).returning();
+    const row = await db.transaction(async (tx) => {
+      // Every opening tells every member (by e-mail too): a day's openings per board are bounded, counted
+      // and used in one step.
+      await advisoryXactLock(tx, ADVISORY_LOCKS.votes, boardId);
+      const [{ n }] = await tx
+        .select({ n: sql<number>`count(*)::int` })
+        .from(votes)
+        .where(and(eq(votes.boardId, boardId), gt(votes.createdAt, new Date(Date.now() - DAY_MS))));
+      if (n >= VOTE_LIMITS.openedPerBoardPerDay) {
+        throw new HttpError(429, 'too_many_votes', `A board opens at most ${VOTE_LIMITS.openedPerBoardPerDay} votes a day; try again tomorrow or close and reuse one.`);
+      }
+      const [inserted] = await tx.insert(votes).values({ boardId, question: body.question, designIds: ids, createdBy: user.id, closesAt }).returning();
+      return inserted;
+    });
     await this.tellMembers(row, user, 'vote-opened');
     return { id: row.id };
   }
@@ -101,12 +115,19 @@ export class VotesService {
     const fields: Record<string, string> = {};
     if (!inVote.has(body.a.toLowerCase())) fields.a = 'is not a design of this vote';
     if (!inVote.has(body.b.toLowerCase())) fields.b = 'is not a design of this vote';
-    if (Object.keys(fields).length) throw new HttpError(400, 'invalid_input', 'Both designs must be in the vote.', fields);
+    if (body.a.toLowerCase() === body.b.toLowerCase()) fields.b = 'must be another design than a';
+    if (Object.keys(fields).length) throw new HttpError(400, 'invalid_input', 'Both designs must be in the vote, and differ.', fields);
     const stored = storedPair(body.a, body.b, body.pick);
-    await db
-      .insert(voteAnswers)
-      .values({ voteId: vote.id, userId, ...stored })
-      .onConflictDoUpdate({ target: [voteAnswers.voteId, voteAnswers.userId, voteAnswers.lowId, voteAnswers.highId], set: { pick: stored.pick, answeredAt: new Date() } });
+    await db.transaction(async (tx) => {
+      // The vote's row locked while the answer is stored: a close arriving at the same moment waits, and
+      // an answer arriving after it finds the vote closed.
+      const [locked] = await tx.select({ closedAt: votes.closedAt }).from(votes).where(eq(votes.id, vote.id)).for('update');
+      if (locked?.closedAt) throw new HttpError(409, 'vote_closed', 'This vote has closed; answers are no longer taken.');
+      await tx
+        .insert(voteAnswers)
+        .values({ voteId: vote.id, userId, ...stored })
+        .onConflictDoUpdate({ target: [voteAnswers.voteId, voteAnswers.userId, voteAnswers.lowId, voteAnswers.highId], set: { pick: stored.pick, answeredAt: new Date() } });
+    });
     const detail = await this.describe(vote, userId);
     this.events.emit('ranking', { voteId: vote.id, boardId: vote.boardId, ranking: detail.ranking, answers: detail.answers, closed: false });
     return detail;
