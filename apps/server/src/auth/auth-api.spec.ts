@@ -257,4 +257,17 @@ describe('sign-in rate limits', () => {
     for (let i = 0; i < 3; i++) others.push((await c.post('/api/auth/sign-in', { email: `other${i}@example.test`, password: 'x' })).status);
     expect(others.at(-1)).toBe(429);
   });
+
+  it('does not count successful sign-ins against the address (a club signing in from one workshop)', async () => {
+    const emails = ['ada@example.test', 'bo@example.test', 'cy@example.test'];
+    for (const email of emails) await makeUser(database, email);
+    const fresh = await startTestServer(database, { rateLimits: { signInPerAccount: 3, signInPerAddress: 2 } });
+    try {
+      const statuses = [];
+      for (let i = 0; i < 8; i++) statuses.push((await new Client(fresh.app).post('/api/auth/sign-in', { email: emails[i % 3], password: TEST_PASSWORD })).status);
+      expect(statuses).toEqual(Array(8).fill(200));
+    } finally {
+      await fresh.close();
+    }
+  });
 });

@@ -4,7 +4,10 @@ import { normalEmail } from '../auth/users';
 import type { ApiErrorBody } from '@barwright/contracts';
 
 export interface RateLimitSettings {
-  /** Sign-in attempts per address per window. */
+  /**
+   * Failed sign-ins per address per window. Successful ones are not counted: a club signing in together from
+   * one workshop's address (one router) is not an attack, guessing passwords is.
+   */
   signInPerAddress: number;
   /** Failed sign-ins per account (e-mail) per window. */
   signInPerAccount: number;
@@ -57,7 +60,7 @@ export function createRateLimits(s: RateLimitSettings, storeFor?: RateLimitStore
   const base = { windowMs: s.windowMs, standardHeaders: 'draft-8' as const, legacyHeaders: false, handler: tooMany };
   const store = (prefix: string) => (storeFor ? { store: storeFor(prefix) } : {});
   return {
-    signInByAddress: rateLimit({ ...base, limit: s.signInPerAddress, ...store('sign-in-address') }),
+    signInByAddress: rateLimit({ ...base, limit: s.signInPerAddress, skipSuccessfulRequests: true, ...store('sign-in-address') }),
     signInByAccount: rateLimit({
       ...base,
       ...store('sign-in-account'),
