@@ -1,17 +1,11 @@
 import type { Role } from '@barwright/contracts';
+import type { ReasonWording } from '../../../shared/reason-dialog/reason-dialog';
 
 /** A change the People page asks an admin to confirm. */
 export type AccountChange = { kind: 'role'; from: Role; to: Role } | { kind: 'suspend' } | { kind: 'restore' };
 
-export interface AccountChangeWording {
-  title: string;
-  message: string;
-  /** The reason field's label; the reason goes into the audit log. */
-  label: string;
-  required: boolean;
-  confirm: string;
-  danger: boolean;
-}
+/** The confirm dialog's words; the reason goes into the audit log. */
+export type AccountChangeWording = ReasonWording;
 
 /** What each role may do, as a phrase after the person (the People page's list of roles and its dialogs say the same). */
 export const ROLE_POWERS: Readonly<Record<Role, string>> = {

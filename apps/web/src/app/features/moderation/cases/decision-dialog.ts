@@ -1,12 +1,6 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialog, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
+import type { MatDialog } from '@angular/material/dialog';
 import { MODERATION_REASON_MAX } from '@barwright/contracts';
-import { firstValueFrom } from 'rxjs';
-import { fieldMessage } from '../../../shared/forms/field-message';
+import { askReason, type ReasonWording } from '../../../shared/reason-dialog/reason-dialog';
 import type { Decision } from '../moderation-api';
 
 export interface DecisionRequest {
@@ -16,17 +10,8 @@ export interface DecisionRequest {
   authorName: string;
 }
 
-interface Wording {
-  title: string;
-  message: string;
-  label: string;
-  required: boolean;
-  confirm: string;
-  danger: boolean;
-}
-
 /** What each decision asks for: hiding and suspending need a reason; the others take an optional note for the log. */
-export function wordingFor(r: DecisionRequest): Wording {
+export function wordingFor(r: DecisionRequest): ReasonWording {
   switch (r.decision) {
     case 'hide':
       return { title: `Hide ${r.itemName}?`, message: `Members and visitors no longer see it. ${r.authorName} still does, with your reason beside it. Nothing is deleted; it can be restored.`, label: `Reason, shown to ${r.authorName}`, required: true, confirm: 'Hide', danger: true };
@@ -39,62 +24,11 @@ export function wordingFor(r: DecisionRequest): Wording {
   }
 }
 
-/** Asks for the words that go with a decision at the desk; closes with them, or with nothing when cancelled. */
-@Component({
-  selector: 'bw-decision-dialog',
-  imports: [ReactiveFormsModule, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule],
-  template: `
-    <h2 mat-dialog-title>{{ wording.title }}</h2>
-    <mat-dialog-content>
-      <p class="bw-muted">{{ wording.message }}</p>
-      <form id="decision-form" (submit)="$event.preventDefault(); decide()" novalidate>
-        <mat-form-field class="words">
-          <mat-label>{{ wording.label }}</mat-label>
-          <textarea matInput [formControl]="words" rows="3" [attr.maxlength]="max" data-testid="decision-words"></textarea>
-          <mat-error>{{ fieldMessage('The reason', words.errors) }}</mat-error>
-        </mat-form-field>
-      </form>
-    </mat-dialog-content>
-    <mat-dialog-actions align="end">
-      <!-- Bare mat-dialog-close would close with "", which reads as going ahead with an empty note. -->
-      <button mat-button type="button" [mat-dialog-close]="undefined" data-testid="decision-cancel">Cancel</button>
-      <button mat-flat-button type="submit" form="decision-form" [class.danger]="wording.danger" data-testid="decision-confirm">{{ wording.confirm }}</button>
-    </mat-dialog-actions>
-  `,
-  styles: `
-    .words {
-      width: 100%;
-    }
-    .danger {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
-    }
-  `,
-  changeDetection: ChangeDetectionStrategy.OnPush,
-})
-export class DecisionDialog {
-  private readonly request = inject<DecisionRequest>(MAT_DIALOG_DATA);
-  private readonly ref = inject<MatDialogRef<DecisionDialog, string>>(MatDialogRef);
-  protected readonly wording = wordingFor(this.request);
-  protected readonly max = MODERATION_REASON_MAX;
-  protected readonly words = new FormControl('', {
-    nonNullable: true,
-    validators: [Validators.maxLength(MODERATION_REASON_MAX), ...(this.wording.required ? [Validators.required] : [])],
+/** Asks for the words that go with a decision at the desk; resolves them, or null when cancelled. */
+export function askDecision(dialog: MatDialog, request: DecisionRequest): Promise<string | null> {
+  return askReason(dialog, {
+    wording: wordingFor(request),
+    max: MODERATION_REASON_MAX,
+    testIds: { field: 'decision-words', cancel: 'decision-cancel', confirm: 'decision-confirm' },
   });
-  protected readonly fieldMessage = fieldMessage;
-
-  protected decide(): void {
-    this.words.setValue(this.words.value.trim());
-    if (this.words.invalid) {
-      this.words.markAsTouched();
-      return;
-    }
-    this.ref.close(this.words.value);
-  }
-}
-
-/** Opens the dialog; resolves the words given, or null when cancelled. */
-export async function askDecision(dialog: MatDialog, request: DecisionRequest): Promise<string | null> {
-  const ref = dialog.open<DecisionDialog, DecisionRequest, string>(DecisionDialog, { data: request, width: '30rem', maxWidth: 'calc(100vw - 2rem)', autoFocus: 'first-tabbable' });
-  return (await firstValueFrom(ref.afterClosed())) ?? null;
 }
