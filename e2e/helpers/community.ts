@@ -40,6 +40,8 @@ export async function publishFromBoard(page: Page, boardId: string, designTitle:
   await page.goto(`/boards/${boardId}`);
   const row = page.getByTestId('design-row').filter({ hasText: designTitle });
   await row.getByTestId('design-publish').click();
+  // The dialog moves focus to its first field once it has opened; typing before that can land in the title.
+  await expect(page.getByTestId('publish-title')).toBeFocused();
   await page.getByTestId('publish-title').fill(fields.title);
   if (fields.description) await page.getByTestId('publish-description').fill(fields.description);
   for (const tag of fields.tags ?? []) {
