@@ -18,7 +18,7 @@ export { type Companion, type ProfileSamples, COMPANIONS, oppositeProfile, profi
 export { type CutPair, shownAndOpposite } from './cut-pair';
 export { type CutterPlacement, type PlacementFigures, cutterPlacement, placementFigures, placementText, alongBarShift, acrossBarHeight } from './cutter-placement';
 export { type PeriodProfile, periodProfile } from './period-profile';
-export { type LineStudy, computeLineStudy, vGrooveWidth } from './line-study';
+export { type LineStudy, computeLineStudy, periodLineStudy, vGrooveWidth } from './line-study';
 export { linePhase, reducedPhase } from './phase-schedule';
 export { type LineStudySvgOptions, lineStudySvg } from './line-study-svg';
 export { EXPORT_FORMATS, type ExportFormat, type ExportedFile, type ExportOptions, exportDesign } from './export';
@@ -32,4 +32,5 @@ export { ENTRY_DECIMALS, formatLength, formatLengthRange, lengthFigure, LENGTH_D
 export { type SurfaceWindow, type HeightFieldInput, type HeightField, FACET_BINS, MIXED_PIXEL, computeHeightField } from './surface/height-field';
 export { type SurfaceLight, type MetalTint, METAL_TINTS, METAL_COLOURS, BLINN_PHONG, lightVector, blinnPhong, shadeHeightField, srgbByte } from './surface/surface-shading';
 export { type CandidateFigures, type CandidateResult, type BatchItem, type BatchOptions, computeBatch, computeCandidate, designFigures, batchTransferables } from './batch/sweep-batch';
+export { type PairPasses, pairPasses, passesFor } from './batch/pair-passes';
 export { type PairResult, type BradleyTerryFit, fitBradleyTerry, bradleyTerryLogLikelihood } from './ranking/bradley-terry';
