@@ -35,12 +35,21 @@ interface Template {
  */
 export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
   const mm = design.units === 'mm' ? design : toMm(design);
-  const mirrored = lineTemplate(mm, profile);
+  const period = (profile && periodFromProfile(mm, profile)) ?? periodFromDesign(mm, profile?.step);
+  return periodLineStudy(mm.study, period, mm.bar.length);
+}
+
+/**
+ * The line study laid from one period of the follower path already computed (`line`, mm above its
+ * lowest point, every `step` mm): what computeLineStudy does after computing that period, for a
+ * caller that keeps the period (the sweep's thumbnails). `study` and `length` in mm.
+ */
+export function periodLineStudy(study: Design['study'], period: { line: ArrayLike<number>; step: number }, length: number): LineStudy {
+  const mirrored = lineTemplate(period);
   // F(x + Δ) = G(−Δ − x) with G(u) = F(−u): the same walk over the template read backwards.
-  const asBar = mm.study.direction === 'as-bar';
+  const asBar = study.direction === 'as-bar';
   const template = asBar ? reversed(mirrored) : mirrored;
-  const { lineSpacing: spacing, lines: count, schedule, vAngle, depth } = mm.study;
-  const length = mm.bar.length;
+  const { lineSpacing: spacing, lines: count, schedule, vAngle, depth } = study;
   const lines = Array.from({ length: count }, (_, index) => {
     // Reduced before use: a phase of 1e20 periods would leave the walk below without a step to take.
     const phase = reducedPhase(linePhase(schedule, index));
@@ -55,15 +64,14 @@ export function vGrooveWidth(depth: number, vAngle: number): number {
   return 2 * depth * Math.tan((vAngle * Math.PI) / 360);
 }
 
-function lineTemplate(design: Design, profile: Profile | undefined): Template {
-  const period = (profile && periodFromProfile(design, profile)) ?? periodFromDesign(design, profile?.step);
+function lineTemplate(period: { line: ArrayLike<number>; step: number }): Template {
   const { line, step } = period;
   const m = line.length;
   const closed = new Float64Array(m + 1);
   closed.set(line);
   closed[m] = line[0];
   let top = 0;
-  for (const v of line) top = Math.max(top, v);
+  for (let i = 0; i < m; i++) top = Math.max(top, line[i]);
   const tolerance = Math.max(5e-4, Math.min(0.02, 0.02 * top));
   const keep = decimateGraph(closed, tolerance);
   return {

@@ -1,0 +1,43 @@
+/*
+ * The pure arithmetic of a run: how many jobs a worker is handed at a time, when it is refilled, and
+ * the time left from the throughput so far.
+ */
+
+/** Most jobs in one chunk: ~20 ms of work at the sweep's step, so a cancel or a new run waits little and the last chunks end together. */
+export const MAX_CHUNK = 8;
+
+/**
+ * Jobs in the next chunk for a worker: small enough that every worker gets several (the last ones
+ * end together and the first results come soon), at most MAX_CHUNK, at least one.
+ */
+export function chunkSize(remaining: number, workers: number): number {
+  if (remaining <= 0) return 0;
+  return Math.max(1, Math.min(MAX_CHUNK, Math.ceil(remaining / (Math.max(1, workers) * 4))));
+}
+
+/**
+ * Whether a worker with `pending` queued jobs should get another chunk: it keeps one chunk waiting
+ * behind the one it works on, so it never idles while its results cross to the page and back.
+ */
+export function wantsMore(pending: number, chunk: number): boolean {
+  return pending <= Math.max(1, chunk);
+}
+
+/** Pool size: one worker per core, at least 1, at most 8. */
+export function poolSize(cores: number | undefined): number {
+  return Math.max(1, Math.min(8, Math.floor(cores ?? 1) || 1));
+}
+
+/** Least work and time before the estimate is shown: the first candidates include the workers' start-up. */
+const MIN_DONE = 4;
+const MIN_ELAPSED_MS = 200;
+
+/**
+ * Time left (ms) from the throughput so far, done / elapsed, for the `total − done` still to come;
+ * null while too little is done to tell, 0 when everything is.
+ */
+export function timeLeft(done: number, total: number, elapsedMs: number): number | null {
+  if (done >= total) return 0;
+  if (done < MIN_DONE || elapsedMs < MIN_ELAPSED_MS) return null;
+  return Math.round(((total - done) * elapsedMs) / done);
+}
