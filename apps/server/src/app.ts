@@ -35,7 +35,7 @@ import type { ModerationLimits } from './moderation/moderation-limits';
 // Engine work (exports, thumbnails) runs in a worker pool with a budget per job.
 import { retryAfterWhenBusy, type ComputePool } from './compute/compute-pool';
 // The rosette rack and its sweeps; votes on a board's designs.
-import { rackRouter } from './rack/rack-router';
+import { isRackImport, rackRouter } from './rack/rack-router';
 import { VoteEvents } from './votes/vote-events';
 import { votesRouter } from './votes/votes-router';
 import { VotesService } from './votes/votes-service';
@@ -138,7 +138,9 @@ export function createApp(deps: AppDeps): express.Express {
   const api = express.Router();
   // JSON answers above 1 KiB go compressed (brotli or gzip, as the client accepts); images are left alone.
   api.use(compression({ threshold: 1024 }));
-  api.use(express.json({ limit: '256kb' }));
+  // A rack file may be larger (RACK_FILE_MAX_BYTES): its route reads it itself, once the member is known.
+  const json = express.json({ limit: '256kb' });
+  api.use((req, res, next) => (isRackImport(req) ? next() : json(req, res, next)));
   api.use(refuseHostileShapes);
   let openapi: ReturnType<typeof openApiDocument> | undefined; // built when first asked for, not at every start
   api.get('/openapi.json', (_req, res) => {

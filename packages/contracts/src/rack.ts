@@ -24,7 +24,34 @@ export const RACK_LIMITS = {
   /** Each list of the shop (rubbers, travels, cutters, followers, V-cutters). */
   shopItems: 24,
   shopNameMax: 40,
+  /**
+   * Measured readings in all the rack's rosettes together. A rosette may hold 8 layers of 3 600 readings;
+   * without a rack-wide bound 200 of them would make an export (≈140 MB) that no import could take back.
+   * 20 000 readings (a reading every degree on 55 rosettes) keep the readings under about 0.6 MB and
+   * checking a rack file well under a second on a loaded 2-core server.
+   */
+  readings: 20_000,
 } as const;
+
+/** The largest rack file POST /api/rack/import reads (every rack within RACK_LIMITS fits). */
+export const RACK_FILE_MAX_BYTES = 8 * 1024 * 1024;
+
+/** The measured readings a rosette holds (0 when it has no measured layer, or is not a rosette at all). */
+export function rosetteReadings(rosette: unknown): number {
+  const layers = (rosette as { layers?: unknown } | null)?.layers;
+  if (!Array.isArray(layers)) return 0;
+  return layers.reduce((n: number, layer) => {
+    const points = (layer as { wave?: { points?: unknown } } | null)?.wave?.points;
+    return n + (Array.isArray(points) ? points.length : 0);
+  }, 0);
+}
+
+/** The message when a rack would hold more than RACK_LIMITS.readings readings, else undefined. */
+export function rackReadingsProblem(total: number): string | undefined {
+  if (total <= RACK_LIMITS.readings) return undefined;
+  const n = (v: number) => v.toLocaleString('en-GB').replace(/,/g, ' ');
+  return `a rack holds at most ${n(RACK_LIMITS.readings)} measured readings in all its rosettes (this would make ${n(total)}); thin the readings or remove a measured rosette`;
+}
 
 const finite = z.number({ error: 'must be a number' }).finite('must be a finite number');
 const text = (max: number) => z.string({ error: 'must be text' }).trim().max(max, `must be at most ${max} characters`);
@@ -179,6 +206,8 @@ export const rackFileSchema = z
     shop: z.strictObject({ ...shopShape, units: unitsSchema }),
   })
   .superRefine((file, ctx) => {
+    const readings = rackReadingsProblem(file.rosettes.reduce((n, r) => n + rosetteReadings(r.rosette), 0));
+    if (readings) ctx.addIssue({ code: 'custom', path: ['rosettes'], message: readings });
     file.rosettes.forEach((r, i) => {
       for (const issue of rosetteIssues(r.rosette, r.units)) issueIn(ctx, ['rosettes', i, 'rosette'])(issue.path, issue.message);
     });

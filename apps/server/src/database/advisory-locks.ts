@@ -15,7 +15,7 @@ export const ADVISORY_LOCKS = {
   compaction: 7403,
   /** With the uploader (hashtext of the user id): the day's photo allowance is counted and used in one step. */
   photoAllowance: 7301,
-  /** With the member (hashtext of the user id): one change of the rack's rosette count (add, import) at a time. */
+  /** With the member (hashtext of the user id): one change of the rack's rosette count or measured readings (add, change, import) at a time. */
   rack: 7501,
   /** With the member (hashtext of the user id): a saved sweep is counted and stored in one step. */
   sweeps: 7502,

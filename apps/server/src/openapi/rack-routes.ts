@@ -15,7 +15,7 @@ export const RACK_ROUTES: OpenApiRoute[] = [
   {
     method: 'post',
     path: '/api/rack/import',
-    summary: 'Import a rack file: replace your rack (default) or add its rosettes; all or nothing, 400 names the fields',
+    summary: `Import a rack file: replace your rack (default) or add its rosettes; all or nothing, 400 names the fields (at most ${c.RACK_FILE_MAX_BYTES / 1024 / 1024} MB and ${c.RACK_LIMITS.readings} measured readings)`,
     tag: 'rack',
     body: c.rackFileSchema,
     query: z.object({ mode: z.enum(['replace', 'add']).optional() }),

@@ -133,6 +133,45 @@ describe.each(drivers)('rack API on %s', (driver) => {
     expect((await ilse.post('/api/rack/import?mode=merge', file)).body.error.fields.mode).toMatch(/replace/);
   });
 
+  it('takes back its own export of a rack full of measured readings (past the API’s usual body limit), and bounds the readings', async () => {
+    // 3 600 readings a rosette (a reading every 0.1°), 5 rosettes: 18 000 readings, about 0.5 MB of JSON.
+    const dense = (i: number) => ({
+      baseRadius: 40,
+      layers: [{ lobes: 1, amplitude: 0, phase: 0, wave: { shape: 'measured', scale: 'as-read', points: Array.from({ length: 3600 }, (_, k) => [k / 10, 40 + 0.4 * Math.cos((k * Math.PI) / 1800) + i / 1000]) } }],
+    });
+    const me = (await maren.get('/api/auth/me')).body.id;
+    await database.db.insert(rackRosettes).values(Array.from({ length: 5 }, (_, i) => ({ ownerId: me, name: `Dial ${i}`, units: 'mm' as const, rosette: dense(i) as never })));
+    const file = (await maren.get('/api/rack/export')).body;
+    expect(JSON.stringify(file).length).toBeGreaterThan(400 * 1024);
+    const back = await ilse.post('/api/rack/import', file);
+    expect(back.status).toBe(200);
+    expect(back.body.rosettes).toHaveLength(5);
+
+    // 18 000 held: one more dense rosette would make 21 600, past the rack's 20 000.
+    const over = await ilse.post('/api/rack/rosettes', { name: 'One more dial', rosette: dense(99) });
+    expect(over.status).toBe(400);
+    expect(over.body.error.fields.rosette).toMatch(/at most 20 000 measured readings .*21 600/);
+    const overFile = await ilse.post('/api/rack/import?mode=add', { ...file, rosettes: file.rosettes.slice(0, 1) });
+    expect(overFile.body.error.fields.rosettes).toMatch(/at most 20 000 measured readings/);
+    expect((await ilse.get('/api/rack')).body.rosettes).toHaveLength(5);
+    const tooBig = await ilse.post('/api/rack/import', { ...file, rosettes: [...file.rosettes, ...file.rosettes.slice(0, 1)] });
+    expect(tooBig.status).toBe(400);
+    expect(tooBig.body.error.fields.rosettes).toMatch(/this would make 21 600/);
+    // Swapping a rosette's readings for as many is no growth.
+    const first = (await ilse.get('/api/rack')).body.rosettes[0];
+    expect((await ilse.patch(`/api/rack/rosettes/${first.id}`, { rosette: dense(5) })).status).toBe(200);
+  });
+
+  it('reads no large rack file from a visitor, and only the import route takes more than the usual limit', async () => {
+    const big = { format: RACK_FORMAT, rosettes: [], shop: { units: 'mm', ...shop }, padding: 'x'.repeat(600 * 1024) };
+    const visitor = await new Client(server.app).post('/api/rack/import', big);
+    expect([401, 403]).toContain(visitor.status);
+    expect((await maren.post('/api/rack/rosettes', { name: 'x'.repeat(600 * 1024), rosette: sine24 })).status).toBe(413);
+    const refused = await maren.post('/api/rack/import', big);
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.padding).toBeDefined();
+  });
+
   it('saves sweeps (choices and shortlist) and refuses more than the bar limit, saying how to narrow it', async () => {
     const ids: string[] = [];
     for (const name of ['A', 'B', 'C']) ids.push((await maren.post('/api/rack/rosettes', { name, rosette: sine24, tags: [name === 'C' ? 'odd' : 'even'] })).body.id);

@@ -1,11 +1,24 @@
-import { Router } from 'express';
+import express, { Router, type Request } from 'express';
 import * as z from 'zod';
-import { rackFileSchema, rackRosetteBody, rackRosettePatch, rackShopBody, type RackFile, type RackShop } from '@barwright/contracts';
+import { RACK_FILE_MAX_BYTES, rackFileSchema, rackRosetteBody, rackRosettePatch, rackShopBody, type RackFile, type RackShop } from '@barwright/contracts';
 import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
+import { refuseHostileShapes } from '../http/request-shape';
 import { parseBody } from '../http/validate';
 import * as rack from './rack-service';
 import { sweepsRouter } from './sweeps-router';
+
+/** POST /api/rack/import (seen from the API router): its body is read by its own route, with the larger limit. */
+export const isRackImport = (req: Request) => req.method === 'POST' && req.path.replace(/\/+$/, '') === '/rack/import';
+/** The rack file's body, read only for a signed-in member (a visitor's megabytes are never parsed). */
+const rackFileBody = [
+  (req: Request, _res: unknown, next: () => void) => {
+    requireUser(req);
+    next();
+  },
+  express.json({ limit: RACK_FILE_MAX_BYTES }),
+  refuseHostileShapes,
+];
 
 const importQuery = z.strictObject({ mode: z.enum(['replace', 'add'], { error: 'must be "replace" or "add"' }).default('replace') });
 
@@ -42,7 +55,7 @@ export function rackRouter(deps: { db: Db }): Router {
     res.setHeader('Content-Disposition', 'attachment; filename="rack.barwright-rack.json"');
     res.json(file);
   });
-  router.post('/import', async (req, res) => {
+  router.post('/import', ...rackFileBody, async (req, res) => {
     const user = requireUser(req);
     const { mode } = parseBody(importQuery, req.query);
     const file = parseBody(rackFileSchema, req.body) as RackFile;

@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
-import { EMPTY_SHOP, RACK_FORMAT, RACK_LIMITS, type Rack, type RackFile, type RackRosette, type RackRosettePatch, type RackShop, type RosetteObject, type Units } from '@barwright/contracts';
+import { EMPTY_SHOP, RACK_FORMAT, RACK_LIMITS, rackReadingsProblem, rosetteReadings, type Rack, type RackFile, type RackRosette, type RackRosettePatch, type RackShop, type RosetteObject, type Units } from '@barwright/contracts';
 import { rackRosettes, rackShops, type RackRosetteRow } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { ADVISORY_LOCKS, advisoryXactLock } from '../database/advisory-locks';
@@ -44,6 +44,18 @@ export async function ownRosette(db: Db | Tx, ownerId: string, id: string): Prom
   return row;
 }
 
+/** The measured readings held by the owner's rosettes, leaving out `except` (the one being replaced). */
+async function readingsHeld(db: Db | Tx, ownerId: string, except?: string): Promise<number> {
+  const rows = await db.select({ id: rackRosettes.id, rosette: rackRosettes.rosette }).from(rackRosettes).where(eq(rackRosettes.ownerId, ownerId));
+  return rows.reduce((n, row) => (row.id === except ? n : n + rosetteReadings(row.rosette)), 0);
+}
+
+/** Refuses a change that would take the rack past RACK_LIMITS.readings, naming `field`. */
+function checkReadings(total: number, field: string): void {
+  const problem = rackReadingsProblem(total);
+  if (problem) throw new HttpError(400, 'invalid_input', `${problem[0].toUpperCase()}${problem.slice(1)}.`, { [field]: problem });
+}
+
 async function rosetteCount(db: Db | Tx, ownerId: string): Promise<number> {
   const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(rackRosettes).where(eq(rackRosettes.ownerId, ownerId));
   return n;
@@ -54,6 +66,8 @@ export async function addRosette(db: Db, owner: Owner, body: { name: string; uni
     // One change of a member's rack at a time, so two quick adds cannot both pass the count.
     await advisoryXactLock(tx, ADVISORY_LOCKS.rack, owner.id);
     if ((await rosetteCount(tx, owner.id)) >= RACK_LIMITS.rosettes) throw rackFull();
+    const adds = rosetteReadings(body.rosette);
+    if (adds) checkReadings((await readingsHeld(tx, owner.id)) + adds, 'rosette');
     const [row] = await tx
       .insert(rackRosettes)
       .values({ ownerId: owner.id, name: body.name, units: body.units ?? owner.units, rosette: body.rosette as RosetteObject, tags: body.tags ?? [], notes: body.notes ?? '' })
@@ -63,20 +77,25 @@ export async function addRosette(db: Db, owner: Owner, body: { name: string; uni
 }
 
 export async function changeRosette(db: Db, ownerId: string, id: string, patch: RackRosettePatch): Promise<RackRosette> {
-  const row = await ownRosette(db, ownerId, id);
-  const [updated] = await db
-    .update(rackRosettes)
-    .set({
-      ...(patch.name !== undefined ? { name: patch.name } : {}),
-      ...(patch.units !== undefined ? { units: patch.units } : {}),
-      ...(patch.rosette !== undefined ? { rosette: patch.rosette } : {}),
-      ...(patch.tags !== undefined ? { tags: patch.tags } : {}),
-      ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
-      updatedAt: new Date(),
-    })
-    .where(eq(rackRosettes.id, row.id))
-    .returning();
-  return toRackRosette(updated);
+  return db.transaction(async (tx) => {
+    await advisoryXactLock(tx, ADVISORY_LOCKS.rack, ownerId);
+    const row = await ownRosette(tx, ownerId, id);
+    const adds = patch.rosette === undefined ? 0 : rosetteReadings(patch.rosette);
+    if (adds > rosetteReadings(row.rosette)) checkReadings((await readingsHeld(tx, ownerId, row.id)) + adds, 'rosette');
+    const [updated] = await tx
+      .update(rackRosettes)
+      .set({
+        ...(patch.name !== undefined ? { name: patch.name } : {}),
+        ...(patch.units !== undefined ? { units: patch.units } : {}),
+        ...(patch.rosette !== undefined ? { rosette: patch.rosette } : {}),
+        ...(patch.tags !== undefined ? { tags: patch.tags } : {}),
+        ...(patch.notes !== undefined ? { notes: patch.notes } : {}),
+        updatedAt: new Date(),
+      })
+      .where(eq(rackRosettes.id, row.id))
+      .returning();
+    return toRackRosette(updated);
+  });
 }
 
 export async function removeRosette(db: Db, ownerId: string, id: string): Promise<void> {
@@ -113,6 +132,9 @@ export async function importRack(db: Db, owner: Owner, file: RackFile, mode: 're
       await saveShop(tx, owner.id, file.shop);
     } else if ((await rosetteCount(tx, owner.id)) + file.rosettes.length > RACK_LIMITS.rosettes) {
       throw rackFull(file.rosettes.length);
+    } else {
+      const adds = file.rosettes.reduce((n, r) => n + rosetteReadings(r.rosette), 0);
+      if (adds) checkReadings((await readingsHeld(tx, owner.id)) + adds, 'rosettes');
     }
     // The file's order is kept: each row a millisecond after the one before (the rack lists by creation time).
     const start = Date.now();
