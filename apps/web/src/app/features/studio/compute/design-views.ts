@@ -72,7 +72,7 @@ function profileData(p: Profile): Omit<ProfileData, 'cutterRadius' | 'followerRa
   return { ...rest, x, cutter, bar, follower };
 }
 
-function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'depth' | 'vAngle'> {
+export function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'depth' | 'vAngle'> {
   const lines = s.lines.map(({ points }) => {
     const xy = new Float64Array(points.length * 2);
     for (let i = 0; i < points.length; i++) {
