@@ -6,6 +6,8 @@ export default defineConfig({
   root: fileURLToPath(new URL('.', import.meta.url)),
   test: {
     include: ['src/**/*.spec.ts'],
+    // Component specs (*.component.spec.ts) need the Angular compiler: `ng test web` runs them (angular.json).
+    exclude: ['src/**/*.component.spec.ts'],
     environment: 'node',
     setupFiles: ['src/test-setup.ts'],
   },
