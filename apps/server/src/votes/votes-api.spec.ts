@@ -56,6 +56,28 @@ describe.each(drivers)('votes API on %s', (driver) => {
     expect((await put(c.viewer, designIds[0], designIds[2], 'maybe')).body.error.fields.pick).toMatch(/"a", "b" or "tie"/);
   });
 
+  it('stops asking pairs of a design deleted while the vote is open, and keeps the answers given before', async () => {
+    const voteId = (await open(c.owner)).body.id;
+    const put = (who: Client, a: string, b: string, pick: string) => who.send('put', `/api/votes/${voteId}/answers`, { a, b, pick });
+    expect((await put(c.viewer, designIds[0], designIds[3], 'a')).status).toBe(200);
+    expect((await c.owner.send('delete', `/api/designs/${designIds[3]}`)).status).toBe(204);
+    const seen = new Set<string>();
+    for (;;) {
+      const next = await c.viewer.get(`/api/votes/${voteId}/next-pair`);
+      if (next.status === 204) break;
+      seen.add(next.body.a).add(next.body.b);
+      expect((await put(c.viewer, next.body.a, next.body.b, 'tie')).status).toBe(200);
+    }
+    expect(seen).toEqual(new Set(designIds.slice(0, 3)));
+    const refused = await put(c.editor, designIds[1], designIds[3], 'b');
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.b).toMatch(/was deleted/);
+    const vote = (await c.viewer.get(`/api/votes/${voteId}`)).body;
+    expect(vote).toMatchObject({ pairs: 3, myAnswers: 3, answers: 4 });
+    expect(vote.designs.find((d: { id: string }) => d.id === designIds[3]).title).toBe('Moiré (deleted)');
+    expect(vote.ranking).toHaveLength(4);
+  });
+
   it('hands each member the least-compared pair they have not answered, then 204', async () => {
     const voteId = (await open(c.owner, { designIds: designIds.slice(0, 3) })).body.id;
     const key = (p: { a: string; b: string }) => [p.a, p.b].sort().join(' ');

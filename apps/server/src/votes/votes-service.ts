@@ -96,7 +96,9 @@ export class VotesService {
     const mine = new Set(answers.filter((a) => a.userId === userId).map((a) => `${a.lowId} ${a.highId}`));
     const times = new Map<string, number>();
     for (const a of answers) times.set(`${a.lowId} ${a.highId}`, (times.get(`${a.lowId} ${a.highId}`) ?? 0) + 1);
-    const open = allPairs(vote.designIds).filter(([l, h]) => !mine.has(`${l} ${h}`));
+    // A design deleted since the vote opened is no longer shown: its pairs are not asked.
+    const live = await this.liveDesigns(vote.designIds);
+    const open = allPairs(vote.designIds).filter(([l, h]) => live.has(l) && live.has(h) && !mine.has(`${l} ${h}`));
     if (open.length === 0) return undefined;
     const least = Math.min(...open.map(([l, h]) => times.get(`${l} ${h}`) ?? 0));
     const choices = open.filter(([l, h]) => (times.get(`${l} ${h}`) ?? 0) === least);
@@ -117,6 +119,9 @@ export class VotesService {
     if (!inVote.has(body.b.toLowerCase())) fields.b = 'is not a design of this vote';
     if (body.a.toLowerCase() === body.b.toLowerCase()) fields.b = 'must be another design than a';
     if (Object.keys(fields).length) throw new HttpError(400, 'invalid_input', 'Both designs must be in the vote, and differ.', fields);
+    const live = await this.liveDesigns([body.a.toLowerCase(), body.b.toLowerCase()]);
+    for (const side of ['a', 'b'] as const) if (!live.has(body[side].toLowerCase())) fields[side] = 'was deleted from the board; its pairs are no longer asked';
+    if (Object.keys(fields).length) throw new HttpError(400, 'invalid_input', 'A design of this pair was deleted.', fields);
     const stored = storedPair(body.a, body.b, body.pick);
     await db.transaction(async (tx) => {
       // The vote's row locked while the answer is stored: a close arriving at the same moment waits, and
@@ -177,15 +182,25 @@ export class VotesService {
       .orderBy(asc(voteAnswers.answeredAt));
   }
 
+  /** Those of the ids whose designs are not deleted. */
+  private async liveDesigns(ids: readonly string[]): Promise<Set<string>> {
+    if (!ids.length) return new Set();
+    const rows = await this.deps.db.select({ id: designs.id }).from(designs).where(and(inArray(designs.id, [...ids]), isNull(designs.deletedAt)));
+    return new Set(rows.map((r) => r.id));
+  }
+
   private async describe(vote: VoteRow, userId: string): Promise<Vote> {
     const { db } = this.deps;
     const [answers, titles, [creator]] = await Promise.all([
       this.answers(vote.id),
-      db.select({ id: designs.id, title: designs.title }).from(designs).where(inArray(designs.id, vote.designIds)),
+      db.select({ id: designs.id, title: designs.title, deletedAt: designs.deletedAt }).from(designs).where(inArray(designs.id, vote.designIds)),
       db.select({ id: users.id, displayName: users.displayName }).from(users).where(eq(users.id, vote.createdBy)),
     ]);
-    const titleOf = new Map(titles.map((t) => [t.id, t.title]));
-    const n = vote.designIds.length;
+    const titleOf = new Map(titles.map((t) => [t.id, t.deletedAt ? `${t.title} (deleted)` : t.title]));
+    // Pairs still asked: those of designs not deleted since the vote opened (answers given before stay in the ranking).
+    const live = new Set(titles.filter((t) => !t.deletedAt).map((t) => t.id));
+    const n = vote.designIds.filter((id) => live.has(id)).length;
+    const isLive = (a: StoredAnswer) => live.has(a.lowId) && live.has(a.highId);
     return {
       ...toSummary(vote),
       designs: vote.designIds.map((id) => ({ id, title: titleOf.get(id) ?? '(deleted design)' })),
@@ -193,7 +208,7 @@ export class VotesService {
       createdAt: vote.createdAt.toISOString(),
       closedAt: vote.closedAt?.toISOString() ?? null,
       answers: answers.length,
-      myAnswers: answers.filter((a) => a.userId === userId).length,
+      myAnswers: answers.filter((a) => a.userId === userId && isLive(a)).length,
       pairs: (n * (n - 1)) / 2,
       ranking: rankDesigns(vote.designIds, answers),
     };
