@@ -1,5 +1,5 @@
-// `npm test`: builds the web app, runs every Vitest suite and every Playwright journey, and ends
-// with one plain line `N passed, N failed` totalling both runners (the line CI reads).
+// `npm test`: builds the web app, runs every Vitest suite (the web app's component specs through `ng test web`)
+// and every Playwright journey, and ends with one plain line `N passed, N failed` totalling them (the line CI reads).
 import fs from 'node:fs';
 import { spawnSync } from 'node:child_process';
 
@@ -14,14 +14,21 @@ let broken = false;
 const built = run('npm', ['run', 'build', '--silent']);
 if (built !== 0) broken = true;
 
-fs.rmSync('.tmp/vitest.json', { force: true });
-const unit = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=.tmp/vitest.json']);
-const v = readJson('.tmp/vitest.json');
-if (v) {
-  passed += v.numPassedTests;
-  failed += v.numFailedTests;
+/** Runs a Vitest suite that writes its JSON report to `report`, and adds its counts. */
+function vitestSuite(args, report) {
+  fs.rmSync(report, { force: true });
+  const status = run('npx', args);
+  const v = readJson(report);
+  if (v) {
+    passed += v.numPassedTests;
+    failed += v.numFailedTests;
+  }
+  if (status !== 0 && (!v || v.numFailedTests === 0)) broken = true;
 }
-if (unit !== 0 && (!v || v.numFailedTests === 0)) broken = true;
+
+vitestSuite(['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=.tmp/vitest.json'], '.tmp/vitest.json');
+// The web app's component specs (*.component.spec.ts): Angular's unit-test builder compiles them, then Vitest runs them in jsdom.
+vitestSuite(['ng', 'test', 'web', '--reporters=default', '--reporters=json', '--output-file=.tmp/vitest-components.json'], '.tmp/vitest-components.json');
 
 if (built === 0) {
   fs.rmSync('.tmp/playwright.json', { force: true });
