@@ -5,6 +5,7 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   test: {
     environment: 'jsdom',
-    testTimeout: 20_000,
+    // Generous: the machines running `npm test` are small and often busy; a spec that waits for the engine polls.
+    testTimeout: 60_000,
   },
 });
