@@ -25,6 +25,7 @@ describe('candidate words', () => {
     expect(w.period).toBe('0.167 in');
     expect(w.loss).toBe('yes, 0.001 in');
     expect(w.crest).toBe("0.0394 in under the cutter's 0.094 in");
+    expect(cardWords(candidate, { period: 1, barHeight: 1, crestRadius: 0, cutterRadius: 1, crestBelowCutter: true, detailLoss: false, detailLost: 0, keeperMinutes: 1 }).crest).toBe("sharp corner, under the cutter's 0.0394 in");
     expect(w.keeper).toBe('1 h 05 min');
   });
 

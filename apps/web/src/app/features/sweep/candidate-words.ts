@@ -52,7 +52,8 @@ export function minutesText(minutes: number): string {
 
 export function cardWords(c: SweepCandidate, fig: CandidateFigures): CardWords {
   const len = (mm: number) => formatLength(mm, c.units);
-  const crestRadius = Number.isFinite(fig.crestRadius) ? len(fig.crestRadius) : 'straight';
+  // 0 is a sharp corner of the bar edge (a crest no cutter rounds), Infinity a straight bar.
+  const crestRadius = fig.crestRadius === 0 ? 'sharp corner,' : Number.isFinite(fig.crestRadius) ? len(fig.crestRadius) : 'straight,';
   return {
     rubber: c.rubber.name || rubberWords(c.rubber, c.units),
     travel: c.travel.name || travelWords(c.travel, c.units),
