@@ -17,7 +17,7 @@ const PORT = Number(process.env.BENCH_PORT ?? 3304);
 const BASE = `http://localhost:${PORT}`;
 const DATA_DIR = path.resolve(ROOT, process.env.BENCH_DATA_DIR ?? '.tmp/bench-studio-redraw');
 const WEB_DIST = path.resolve(ROOT, process.env.WEB_DIST ?? 'dist/web/browser');
-const EDITS = 30;
+const EDITS = Number(process.env.BENCH_EDITS ?? 30);
 const DEMO_PASSWORD = 'marsh-lathe-demo-2026';
 const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 const LOBES = 'field-rosette.layers[0].lobes';
@@ -30,8 +30,18 @@ const QUIET_MS = 700;
  * long tasks. Page scripts are strings: tsx would wrap named functions in a helper the page lacks.
  */
 const INSTRUMENT = `(() => {
-  const bench = (window.bench = { typed: 0, drawn: 0, longTasks: [], fieldAt: 0 });
+  const bench = (window.bench = { typed: 0, drawn: 0, longTasks: [], fieldAt: 0, updates: [] });
   const now = () => performance.timeOrigin + performance.now();
+  // When each document update (y-websocket's message type 0, not awareness) reaches the page, before Yjs reads it.
+  const Native = window.WebSocket;
+  window.WebSocket = class extends Native {
+    constructor(...args) {
+      super(...args);
+      this.addEventListener('message', (e) => {
+        if (e.data instanceof ArrayBuffer && new Uint8Array(e.data)[0] === 0) bench.updates.push(now());
+      });
+    }
+  };
   document.addEventListener('input', () => (bench.typed = now()), true);
   const drawing = 'svg, canvas, [data-testid="plan-figures"], [data-testid="profile-warnings"], [data-testid="study-summary"]';
   new MutationObserver((records) => {
@@ -62,7 +72,7 @@ const watchField = (testId: string, value: string) => `(() => {
 })()`;
 
 interface BenchWindow {
-  bench: { typed: number; drawn: number; longTasks: number[]; fieldAt: number };
+  bench: { typed: number; drawn: number; longTasks: number[]; fieldAt: number; updates: number[] };
 }
 
 async function main(): Promise<void> {
@@ -74,8 +84,10 @@ async function main(): Promise<void> {
     const local: number[] = [];
     const remoteField: number[] = [];
     const remoteViews: number[] = [];
+    const arrivedField: number[] = [];
+    const arrivedViews: number[] = [];
     await settle(editor, watcher);
-    await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
+    for (const page of [editor, watcher]) await page.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
     const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
     if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
     for (let i = 0; i < EDITS; i++) {
@@ -84,16 +96,26 @@ async function main(): Promise<void> {
       local.push(t.local);
       remoteField.push(t.remoteField);
       remoteViews.push(t.remoteViews);
+      arrivedField.push(t.arrivedField);
+      arrivedViews.push(t.arrivedViews);
     }
+    const watcherLongTasks = await watcher.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
     const longTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
     if (profiler) await printProfile(profiler);
-    if (process.env.BENCH_TRACE) printTrace(await browser.stopTracing());
+    if (process.env.BENCH_TRACE) {
+      const trace = await browser.stopTracing();
+      if (process.env.BENCH_TRACE_FILE) fs.writeFileSync(process.env.BENCH_TRACE_FILE, trace);
+      printTrace(trace);
+    }
     const row = (name: string, xs: number[]) => `${name.padEnd(34)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
     console.log(`Studio redraw, ${EDITS} edits (lobes and amplitude alternately), Chromium ${browser.version()}, ${WEB_DIST}`);
     console.log(row('edit to redraw (this page)', local));
     console.log(`${'long tasks on this page'.padEnd(34)} ${longTasks.length} (longest ${longTasks.length ? Math.max(...longTasks).toFixed(0) : 0} ms)`);
     console.log(row('remote edit to the field', remoteField));
     console.log(row('remote edit to the views', remoteViews));
+    console.log(row('remote: arrived to the field', arrivedField));
+    console.log(row('remote: arrived to the views', arrivedViews));
+    console.log(`${'long tasks on the other page'.padEnd(34)} ${watcherLongTasks.length} (longest ${watcherLongTasks.length ? Math.max(...watcherLongTasks).toFixed(0) : 0} ms)`);
   } finally {
     await browser.close();
     server.kill('SIGTERM');
@@ -104,6 +126,7 @@ async function main(): Promise<void> {
 async function timeEdit(editor: Page, watcher: Page, testId: string, value: string) {
   await watcher.evaluate(watchField(testId, value));
   await editor.evaluate(() => ((window as unknown as BenchWindow).bench.drawn = 0));
+  await watcher.evaluate(() => ((window as unknown as BenchWindow).bench.updates = []));
   await editor.getByTestId(testId).fill(value);
   await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
   await watcher.waitForFunction(() => (window as unknown as BenchWindow).bench.fieldAt > 0 && (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 }).catch(async (error) => {
@@ -113,7 +136,9 @@ async function timeEdit(editor: Page, watcher: Page, testId: string, value: stri
   await settle(editor, watcher);
   const e = await editor.evaluate(() => (window as unknown as BenchWindow).bench);
   const w = await watcher.evaluate(() => (window as unknown as BenchWindow).bench);
-  return { local: e.drawn - e.typed, remoteField: w.fieldAt - e.typed, remoteViews: w.drawn - e.typed };
+  // The update that brought the value: the last to arrive before the field took it.
+  const arrived = Math.max(...w.updates.filter((t) => t <= w.fieldAt));
+  return { local: e.drawn - e.typed, remoteField: w.fieldAt - e.typed, remoteViews: w.drawn - e.typed, arrivedField: w.fieldAt - arrived, arrivedViews: w.drawn - arrived };
 }
 
 /** Waits until neither page has redrawn for QUIET_MS. */

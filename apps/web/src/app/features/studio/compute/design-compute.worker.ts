@@ -1,6 +1,6 @@
 /// <reference lib="webworker" />
 import type { ComputeReply, ComputeRequest } from './compute-messages';
-import { computeDesignViews, transferables, type ComputeStage } from './design-views';
+import { computeDesignViews, transferables, type ComputeStage, type DrawingContext } from './design-views';
 
 /*
  * The engine off the page's thread. For each request: a quick preview, then the full computation
@@ -16,6 +16,8 @@ let running = false;
  */
 const PREVIEW_WORTH_MS = 40;
 let lastFullMs = Infinity;
+/** The last full computation's warnings and depth: a preview's bar drawing marks them as the page shows them meanwhile. */
+let lastMarks: DrawingContext | undefined;
 
 addEventListener('message', (event: MessageEvent<ComputeRequest>) => {
   latest = event.data;
@@ -41,7 +43,8 @@ async function work(): Promise<void> {
 
 function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
   try {
-    const views = computeDesignViews(request.design, stage, request.companion);
+    const views = computeDesignViews(request.design, stage, request.companion, lastMarks);
+    if (views.plan) lastMarks = { warnings: views.profile.warnings, depth: views.plan.depth };
     self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
   } catch (error) {
     self.postMessage({ id, error: error instanceof Error ? error.message : String(error) } satisfies ComputeReply);

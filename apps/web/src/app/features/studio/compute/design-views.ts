@@ -1,5 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import { computeLineStudy, computeProfile, planCut, profileSamples, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
+import { profileDrawing, type ProfileDrawing, type ProfileMode } from '../../../shared/views/profile-drawing';
 import type { ProfileData, StudyData } from '../../../shared/views/view-data';
 import { placementViews, type PlacementViews } from './placement-views';
 
@@ -22,12 +23,31 @@ export interface DesignViews {
   companion: { kind: Companion; profile: ProfileData } | null;
   /** The cutter off the centre line or on a rocking arc: the nominal path (before) and the figures, or null. */
   placement: PlacementViews | null;
+  /**
+   * The bar view's drawings in both modes, made where the views are computed (the worker) so the page
+   * only binds their strings: thinning 72 000 samples and writing thousands of SVG points is tens of
+   * milliseconds a redraw. Drawn as the bar view would draw this profile with its companion.
+   */
+  drawings: ProfileDrawings;
   /** Time the engine took, ms. */
   ms: number;
 }
 
+/** The bar view's drawing in each mode, and the companion they show (null: the bar alone). */
+export interface ProfileDrawings {
+  companion: Companion | null;
+  detail: ProfileDrawing;
+  whole: ProfileDrawing;
+}
+
+/** What the bar view marks that only a full computation gives: its warnings and the plan's depth (a preview borrows the last full one's). */
+export interface DrawingContext {
+  warnings: ProfileData['warnings'];
+  depth: number | null;
+}
+
 /** Runs the engine on a valid design. Pure apart from reading the clock. */
-export function computeDesignViews(design: Design, stage: ComputeStage, companion?: Companion): DesignViews {
+export function computeDesignViews(design: Design, stage: ComputeStage, companion?: Companion, context?: DrawingContext): DesignViews {
   const started = performance.now();
   const step = stage === 'preview' ? previewStep(design) : undefined;
   const profile = computeProfile(design, step === undefined ? {} : { step });
@@ -37,10 +57,24 @@ export function computeDesignViews(design: Design, stage: ComputeStage, companio
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
   const groove = { depth: mm.study.depth, vAngle: mm.study.vAngle };
   const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion })), ...sizes } } : null;
+  const shown = { ...profileData(profile), ...sizes };
+  const placement = placementViews(design, profile);
+  const marks: DrawingContext = plan ? { warnings: shown.warnings, depth: plan.depth } : (context ?? { warnings: [], depth: null });
+  const drawings = profileDrawings(shown, other, placement, marks);
   return {
-    ...{ stage, profile: { ...profileData(profile), ...sizes }, study: { ...studyData(study), ...groove }, plan },
-    ...{ companion: other, placement: placementViews(design, profile), ms: performance.now() - started },
+    ...{ stage, profile: shown, study: { ...studyData(study), ...groove }, plan },
+    ...{ companion: other, placement, drawings, ms: performance.now() - started },
   };
+}
+
+/** Both modes of the bar view, drawn as BarProfile would (its `drawing`): the opposite blank above, a companion alone, or the bar with its before and depth. */
+function profileDrawings(p: ProfileData, other: DesignViews['companion'], placement: PlacementViews | null, marks: DrawingContext): ProfileDrawings {
+  const draw = (mode: ProfileMode): ProfileDrawing => {
+    if (other?.kind === 'opposite') return profileDrawing(p, mode, marks.warnings, { upper: other.profile.bar });
+    if (other) return profileDrawing(other.profile, mode, other.profile.warnings);
+    return profileDrawing(p, mode, marks.warnings, { nominal: placement?.nominal ?? null, depth: marks.depth });
+  };
+  return { companion: other?.kind ?? null, detail: draw('detail'), whole: draw('whole') };
 }
 
 /** The preview's step (mm): the period on the bar over PREVIEW_SAMPLES_PER_PERIOD, in the file's units converted to mm. */

@@ -19,11 +19,11 @@ import { PointerArea } from './pointer-area/pointer-area';
       <bw-bar-profile [profile]="views()?.profile ?? null" [units]="units()" [warnings]="full()?.profile?.warnings ?? []"
                       [crest]="full()?.profile?.crest" [depth]="full()?.plan?.depth ?? null" [other]="views()?.companion ?? null"
                       [nominal]="views()?.placement?.nominal ?? null" [placement]="views()?.placement?.text ?? ''"
-                      [companion]="companion()" (companionChange)="chooseCompanion($event)" />
+                      [companion]="companion()" [drawn]="views()?.drawings ?? null" (companionChange)="chooseCompanion($event)" />
     </bw-pointer-area>
     <bw-pointer-area view="study">
       <bw-line-study [study]="views()?.study ?? null" [units]="units()" [direction]="session.lastValid()?.study?.direction"
-                     [period]="views()?.profile?.period ?? null" />
+                     [period]="views()?.profile?.period ?? null" [draft]="views()?.stage === 'preview'" />
     </bw-pointer-area>
     <bw-cut-plan [plan]="full()?.plan ?? null" [units]="units()" [working]="compute.working()"
                  emptyNote="The cut plan appears when the design’s fields are all valid." />
@@ -32,6 +32,10 @@ import { PointerArea } from './pointer-area/pointer-area';
     :host {
       display: grid;
       gap: 1.25rem;
+    }
+    /* Each view lays itself out and paints alone: a redrawn profile does not make the browser lay out the study or the plan again. */
+    :host > * {
+      contain: layout style;
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

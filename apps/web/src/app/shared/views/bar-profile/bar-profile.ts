@@ -5,7 +5,7 @@ import { MatSelectModule } from '@angular/material/select';
 import type { Units } from '@barwright/contracts';
 import { formatLength, type Companion, type CrestCurvature, type EngineWarning } from '@barwright/engine';
 import { crestCaption } from '../crest-caption';
-import { profileDrawing, type ProfileMode } from '../profile-drawing';
+import { profileDrawing, type ProfileDrawing, type ProfileMode } from '../profile-drawing';
 import { shownWarnings, type Severity } from '../profile-marks';
 import type { ProfileData } from '../view-data';
 
@@ -50,6 +50,11 @@ export class BarProfile {
   readonly companion = model<Companion | 'none'>('none');
   readonly offerCompanions = input(true);
   readonly idPrefix = input('');
+  /**
+   * The drawings already made off the page (the studio's worker), for the companion they show: used
+   * when that is the companion shown, so the page does no thinning or SVG writing of its own.
+   */
+  readonly drawn = input<{ companion: Companion | null; detail: ProfileDrawing; whole: ProfileDrawing } | null>(null);
 
   protected readonly mode = signal<ProfileMode>('detail');
   protected readonly companionChoices = COMPANION_CHOICES;
@@ -62,6 +67,8 @@ export class BarProfile {
     const p = this.profile();
     if (!p) return null;
     const other = this.shownOther();
+    const drawn = this.drawn();
+    if (drawn && drawn.companion === (other?.kind ?? null)) return drawn[this.mode()];
     if (other?.kind === 'opposite') return profileDrawing(p, this.mode(), this.warnings(), { upper: other.profile.bar });
     if (other) return profileDrawing(other.profile, this.mode(), other.profile.warnings);
     return profileDrawing(p, this.mode(), this.warnings(), { nominal: this.nominal(), depth: this.depth() });

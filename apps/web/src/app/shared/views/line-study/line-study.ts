@@ -26,6 +26,8 @@ export class LineStudy {
   readonly period = input<number | null>(null);
   /** Test ids start with this (the design page's are `entry-…`). */
   readonly idPrefix = input('');
+  /** The study is a quick preview with the final one following: the lit plate waits for that (see StudyPlates). */
+  readonly draft = input(false);
 
   /** Which part: a narrow or a wide window about the middle (15 and 40 mm, or ½ and 1½ in), or the whole bar. */
   protected readonly choice = signal<'narrow' | 'wide' | 'whole'>('wide');

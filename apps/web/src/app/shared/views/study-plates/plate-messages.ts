@@ -21,6 +21,8 @@ export type PlateRequest =
       ink: string;
       ground: string;
       hairlinePx: number;
+      /** A draft (the studio's quick preview): the flat plate only; the lit one keeps its surface until the study it was asked for comes. */
+      flatOnly?: boolean;
     }
   /** A new light or metal: reshades the lit plate held, without computing its surface again. */
   | { kind: 'light'; id: number; light: SurfaceLight; tint: MetalTint };

@@ -32,6 +32,11 @@ export class StudyPlates {
   /** The period on the bar (mm), written on the flat plate as a fingerprint of what is drawn. */
   readonly period = input<number | null>(null);
   readonly idPrefix = input('');
+  /**
+   * The study is a draft (a quick preview, the final one following): only the flat plate is drawn
+   * from it; the lit plate's surface, the costly part, waits for the final study.
+   */
+  readonly draft = input(false);
 
   protected readonly tints = METAL_TINTS.map((value) => ({ value, label: TINT_LABELS[value] }));
   /** The metal and the light: bound from outside when several plates share one light (compare). */
@@ -47,6 +52,8 @@ export class StudyPlates {
   protected readonly flatShown = signal(0);
   protected readonly litShown = signal(0);
   protected readonly requested = signal(0);
+  /** The newest request the lit plate is to show (drafts leave it). */
+  protected readonly litRequested = signal(0);
   protected readonly frame = computed(() => plateFrame(this.study(), this.window(), this.cssWidth()));
   protected readonly shownLines = computed(() => (this.frame()?.cropped ? 'the middle lines of the study' : 'every line of the study'));
 
@@ -94,13 +101,15 @@ export class StudyPlates {
         const lines = linesInWindow(study.lines, frame.x0, frame.x1, reach);
         const colours = this.colours ?? this.readColours();
         const id = ++this.nextId;
+        const flatOnly = this.draft();
         this.requested.set(id);
+        if (!flatOnly) this.litRequested.set(id);
         this.post({
           kind: 'surface', id, lines, width: study.width, depth: study.depth, vAngle: study.vAngle,
           window: { x0: frame.x0, x1: frame.x1, y0: frame.y0, y1: frame.y1 },
           widthPx: Math.round(frame.widthCss * ratio), heightPx: Math.round(frame.heightCss * ratio),
           ...colours,
-          hairlinePx: HAIRLINE_PX * ratio,
+          hairlinePx: HAIRLINE_PX * ratio, flatOnly,
         }, lines.map((l) => l.buffer as ArrayBuffer));
       });
     });
@@ -139,7 +148,7 @@ export class StudyPlates {
   }
 
   private sendLight(): void {
-    this.post({ kind: 'light', id: this.nextId, light: { azimuthDeg: this.azimuth(), elevationDeg: this.elevation() }, tint: this.tint() });
+    this.post({ kind: 'light', id: this.litRequested(), light: { azimuthDeg: this.azimuth(), elevationDeg: this.elevation() }, tint: this.tint() });
   }
 
   private post(request: PlateRequest, transfer: Transferable[] = []): void {

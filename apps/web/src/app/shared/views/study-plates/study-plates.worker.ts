@@ -36,6 +36,7 @@ function schedule(): void {
 function work(): void {
   scheduled = false;
   let id = 0;
+  const relit = pendingLight !== null;
   if (pendingLight) {
     ({ light, tint, id } = pendingLight);
     pendingLight = null;
@@ -46,10 +47,14 @@ function work(): void {
     pendingSurface = null;
     drawFlat(s);
     if (pendingSurface) return schedule(); // overtaken while drawing: start on the newer one
-    const started = performance.now();
-    field = computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx });
-    fieldMs = performance.now() - started;
-    id = Math.max(id, s.id);
+    // A draft: its surface would be computed only to be replaced by the final one (a new light still reshades the one held).
+    if (s.flatOnly && !relit) return;
+    if (!s.flatOnly) {
+      const started = performance.now();
+      field = computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx });
+      fieldMs = performance.now() - started;
+      id = Math.max(id, s.id);
+    }
   }
   if (!field || !lit) return;
   const started = performance.now();
