@@ -40,8 +40,12 @@ export function periodProfile(design: Design, step?: number): PeriodProfile {
   return { grid, cutter, bar, follower, line };
 }
 
-/** Applies a windowed envelope to a periodic sequence by wrapping `pad` samples round each end. */
-function periodicEnvelope(values: Float64Array, pad: number, envelope: (y: Float64Array) => Float64Array): Float64Array {
+/**
+ * Applies a windowed envelope to a periodic sequence by wrapping `pad` samples round each end (pad
+ * at least the envelope's reach in samples, so every output sees all the samples it would on an
+ * endless sequence).
+ */
+export function periodicEnvelope(values: Float64Array, pad: number, envelope: (y: Float64Array) => Float64Array): Float64Array {
   const m = values.length;
   const wrapped = new Float64Array(m + 2 * pad);
   for (let i = 0; i < wrapped.length; i++) wrapped[i] = values[((((i - pad) % m) + m) % m)];

@@ -50,25 +50,25 @@ export function blinnPhong(nx: number, ny: number, nz: number, light: SurfaceLig
 /**
  * The field as RGBA bytes (width × height × 4, row 0 at the top). Cheap: the FACET_BINS + 1 normals
  * are shaded once, then each pixel looks its facet up; pixels an edge or ridge runs through average
- * their samples' linear colours before encoding.
+ * their samples' linear colours before encoding. One pass over the pixels, one 32-bit write each,
+ * and nothing allocated per pixel.
  */
 export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: MetalTint): Uint8ClampedArray {
   const linear = facetColours(field.wallSlope, light, METAL_COLOURS[tint]);
-  const bytes = new Uint8ClampedArray(linear.length);
-  for (let i = 0; i < linear.length; i++) bytes[i] = srgbByte(linear[i]);
   const { width, height, supersample: s, pixelFacet, mixed, mixedFacets } = field;
   const out = new Uint8ClampedArray(width * height * 4);
-  // One 32-bit write per pixel: the facet's bytes packed in the platform's order.
-  const packed = new Uint32Array(FACET_BINS + 1);
-  const rgba = new Uint8ClampedArray(packed.buffer);
-  for (let f = 0; f <= FACET_BINS; f++) rgba.set([bytes[3 * f], bytes[3 * f + 1], bytes[3 * f + 2], 255], 4 * f);
   const words = new Uint32Array(out.buffer);
+  // The facets' colours as packed RGBA words (in the platform's byte order), one lookup a pixel.
+  const packed = new Uint32Array(FACET_BINS + 1);
+  for (let f = 0; f <= FACET_BINS; f++) packed[f] = packWord(srgbByte(linear[3 * f]), srgbByte(linear[3 * f + 1]), srgbByte(linear[3 * f + 2]));
+  const mixedPixel = MIXED_PIXEL; // a local: an imported binding may be read through a getter in the loop
   for (let p = 0; p < pixelFacet.length; p++) {
     const f = pixelFacet[p];
-    if (f !== MIXED_PIXEL) words[p] = packed[f];
+    if (f !== mixedPixel) words[p] = packed[f];
   }
   const n = s * s;
   const share = ENCODE_STEPS / n;
+  const table = SRGB_TABLE;
   for (let m = 0, k = 0; m < mixed.length; m++) {
     let r = 0;
     let g = 0;
@@ -79,32 +79,47 @@ export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: 
       g += linear[c + 1];
       b += linear[c + 2];
     }
-    const o = 4 * mixed[m];
-    out[o] = SRGB_TABLE[Math.round(r * share)];
-    out[o + 1] = SRGB_TABLE[Math.round(g * share)];
-    out[o + 2] = SRGB_TABLE[Math.round(b * share)];
-    out[o + 3] = 255;
+    // Math.round of a non-negative value, as (v + 0.5) | 0.
+    words[mixed[m]] = packWord(table[(r * share + 0.5) | 0], table[(g * share + 0.5) | 0], table[(b * share + 0.5) | 0]);
   }
   return out;
+}
+
+/** True when the platform stores the low byte of a word first (as every current browser and Node do). */
+const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
+
+/** Opaque RGBA bytes as one word for a Uint32Array over the bytes. */
+function packWord(r: number, g: number, b: number): number {
+  return LITTLE_ENDIAN ? (0xff000000 | (b << 16) | (g << 8) | r) >>> 0 : ((r << 24) | (g << 16) | (b << 8) | 0xff) >>> 0;
 }
 
 /**
  * Linear RGB of facet 0 (the uncut plate, normal straight up) and of each wall direction: a wall rising
  * towards direction φ with slope k has the gradient k·(cos φ, sin φ) and the normal (−∇z, 1)/√(1 + k²).
+ * The light and half-way vectors are worked out once, not per facet; the result is blinnPhong's.
  */
 function facetColours(slope: number, light: SurfaceLight, tint: readonly [number, number, number]): Float32Array {
-  const out = new Float32Array(3 * (FACET_BINS + 1));
+  const bins = FACET_BINS;
+  const out = new Float32Array(3 * (bins + 1));
+  const [lx, ly, lz] = lightVector(light);
+  const hLen = Math.sqrt(lx * lx + ly * ly + (lz + 1) * (lz + 1));
+  const { ambient, diffuse, specular, exponent } = BLINN_PHONG;
+  const intensity = (nx: number, ny: number, nz: number) => {
+    const nl = nx * lx + ny * ly + nz * lz;
+    const nh = Math.max(0, (nx * lx + ny * ly + nz * (lz + 1)) / hLen);
+    return ambient + diffuse * Math.max(0, nl) + (nl > 0 ? specular * nh ** exponent : 0);
+  };
   // Clipped at white here, as the display would: averaged edge pixels then stay within 0…1.
   const put = (f: number, v: number) => {
     out[3 * f] = Math.min(1, v * tint[0]);
     out[3 * f + 1] = Math.min(1, v * tint[1]);
     out[3 * f + 2] = Math.min(1, v * tint[2]);
   };
-  put(0, blinnPhong(0, 0, 1, light));
+  put(0, intensity(0, 0, 1));
   const norm = 1 / Math.sqrt(1 + slope * slope);
-  for (let b = 0; b < FACET_BINS; b++) {
-    const phi = (2 * Math.PI * b) / FACET_BINS;
-    put(b + 1, blinnPhong(-slope * Math.cos(phi) * norm, -slope * Math.sin(phi) * norm, norm, light));
+  for (let b = 0; b < bins; b++) {
+    const phi = (2 * Math.PI * b) / bins;
+    put(b + 1, intensity(-slope * Math.cos(phi) * norm, -slope * Math.sin(phi) * norm, norm));
   }
   return out;
 }

@@ -1,0 +1,73 @@
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { barGrid } from './bar-grid';
+import { barSamples, COMPANIONS, type Companion } from './profile';
+import { rosetteRepeats } from './rosette';
+import { validDesign } from './testing/design-arbitrary';
+import { toMm } from './units';
+
+/**
+ * Tiling one period along the bar (profile-tiling.ts) must give the bar the whole computation
+ * gives: the same points, the paths within floating-point noise (1e-9 of the path's scale: the
+ * envelopes' crossing points are computed from node indices a whole number of periods apart, so
+ * their last bits may differ), and the same warnings, crest, lead-in and lead-out.
+ */
+const TOLERANCE = 1e-9;
+
+function expectSameBar(design: Design, companion: Companion | undefined, step: number): void {
+  const tiled = barSamples(design, { step, companion }, true);
+  const full = barSamples(design, { step, companion }, false);
+  expect(tiled.x).toEqual(full.x);
+  let scale = 1;
+  for (const v of full.follower) scale = Math.max(scale, Math.abs(v));
+  for (const key of ['cutter', 'bar', 'follower'] as const) {
+    expect(tiled[key].length).toBe(full[key].length);
+    let worst = 0;
+    for (let i = 0; i < full[key].length; i++) worst = Math.max(worst, Math.abs(tiled[key][i] - full[key][i]));
+    expect(worst, `${key} of ${JSON.stringify(design)} (${companion ?? 'bar'})`).toBeLessThanOrEqual(TOLERANCE * scale);
+  }
+  expect(tiled.warnings.map((w) => [w.code, w.count, w.at])).toEqual(full.warnings.map((w) => [w.code, w.count, w.at]));
+  tiled.warnings.forEach((w, i) => expect(Math.abs((w.amount ?? 0) - (full.warnings[i].amount ?? 0))).toBeLessThanOrEqual(TOLERANCE * scale));
+  expect(tiled.crest).toEqual(full.crest);
+  expect(tiled.leadIn).toEqual(full.leadIn);
+  expect(tiled.leadOut).toEqual(full.leadOut);
+}
+
+/** A coarse step (a couple of hundred samples a period) keeps the property runs quick. */
+function coarseStep(design: Design): number {
+  const mm = toMm(design);
+  return mm.motion.travelPerRev / rosetteRepeats(mm.rosette) / 200;
+}
+
+describe('tiled bar profile', () => {
+  it('is the whole computation on the example, every companion, with the end on and off the grid', () => {
+    for (const length of [150, 151.2345, 37.7]) {
+      const design: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length } };
+      for (const companion of [undefined, ...COMPANIONS]) expectSameBar(design, companion, 0.01);
+    }
+  });
+
+  it('is the whole computation on random designs and bars of 3 to 9 periods', () => {
+    fc.assert(
+      fc.property(
+        validDesign,
+        fc.double({ min: 3, max: 9, noNaN: true }),
+        fc.boolean(),
+        fc.constantFrom<Companion | undefined>(undefined, ...COMPANIONS),
+        (design, periods, onGrid, companion) => {
+          const step = coarseStep(design);
+          const period = barGrid(toMm(design), step).period * (design.units === 'in' ? 1 / 25.4 : 1);
+          const length = (onGrid ? Math.round(periods) : periods) * period;
+          expectSameBar({ ...design, bar: { ...design.bar, length } }, companion, step * (design.units === 'in' ? 1 / 25.4 : 1));
+        },
+      ),
+      { numRuns: 100 },
+    );
+  });
+
+  it('falls back to the whole bar when the cutter is off the centre line (no tiling there)', () => {
+    const design: Design = { ...EXAMPLE_DESIGN, cutter: { ...EXAMPLE_DESIGN.cutter, offset: 0.5 } };
+    expectSameBar(design, undefined, 0.01);
+  });
+});
