@@ -8,7 +8,7 @@ import { SweepCard } from './sweep-card';
 
 /** Heights of the virtual scroll's rows (px): a group's heading, and a row of cards with its gap. */
 const GROUP_ROW_PX = 48;
-const CARD_PX = 372;
+const CARD_PX = 416;
 const CARD_ROW_PX = CARD_PX + 12;
 
 /**
