@@ -1,5 +1,5 @@
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 
 // Pure functions of the web app (no TestBed, no DOM); pages and flows are covered by e2e/.
 export default defineConfig({
@@ -7,7 +7,7 @@ export default defineConfig({
   test: {
     include: ['src/**/*.spec.ts'],
     // Component specs (*.component.spec.ts) need the Angular compiler: `ng test web` runs them (angular.json).
-    exclude: ['src/**/*.component.spec.ts'],
+    exclude: [...configDefaults.exclude, 'src/**/*.component.spec.ts'],
     environment: 'node',
     setupFiles: ['src/test-setup.ts'],
   },
