@@ -37,6 +37,7 @@ export class SweepRunner {
   private nextThumb = 0;
   private readonly thumbCallbacks = new Map<number, ThumbCallback>();
   private thumbTurn = 0;
+  private publishQueued = false;
 
   constructor() {
     inject(DestroyRef).onDestroy(() => {
@@ -141,7 +142,23 @@ export class SweepRunner {
       this.onResult(r.index, unpackResult(r));
     }
     this.refill(p);
-    const total = this.jobs.length;
+    if (this.done >= this.jobs.length) {
+      this.publish();
+      this.onResult = null;
+      this.jobs = [];
+    } else if (!this.publishQueued) {
+      // Results come many a frame; the progress (and the page's view of it) changes once a frame.
+      this.publishQueued = true;
+      requestAnimationFrame(() => {
+        this.publishQueued = false;
+        if (this.state().state === 'running') this.publish();
+      });
+    }
+  }
+
+  /** The progress of the current run from its counts. */
+  private publish(): void {
+    const total = this.state().total;
     const finished = this.done >= total;
     this.state.set({
       state: finished ? 'done' : 'running',
@@ -150,10 +167,6 @@ export class SweepRunner {
       total,
       msLeft: finished ? 0 : timeLeft(this.done, total, performance.now() - this.startedAt),
     });
-    if (finished) {
-      this.onResult = null;
-      this.jobs = [];
-    }
   }
 
   private refill(p: PoolWorker): void {
