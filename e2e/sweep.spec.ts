@@ -129,6 +129,7 @@ test('a member sweeps 3 rosettes × 2 rubbers × 2 travels, filters out detail l
 });
 
 test('a sweep past 5 000 bars is refused with the message saying how to narrow it', async ({ browser }) => {
+  test.setTimeout(240_000);
   const maren = await memberPage(browser, 'maren@example.test');
   // A bigger shop than the demo's: ten rubbers and ten travel settings (Maren's 30-odd rosettes × 10 × 10 × 2 end mills: over 6 000).
   const rubbers = Array.from({ length: 10 }, (_, i) => ({ shape: 'round', radius: 0.5 * (i + 1) }));
