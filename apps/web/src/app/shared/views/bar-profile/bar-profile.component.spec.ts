@@ -150,6 +150,21 @@ describe('BarProfile', () => {
     expect(el.querySelector('[data-testid="companion-note"]')!.textContent).toContain('upper envelope');
   });
 
+  it('shows the same drawing from the studio worker’s ready-made strings as it draws itself', async () => {
+    expect(views.drawings.companion).toBe('opposite');
+    const inputs = { profile: views.profile, other: views.companion, companion: 'opposite' };
+    const own = await render(inputs);
+    const ready = await render({ ...inputs, drawn: views.drawings });
+    for (const mode of ['detail', 'whole']) {
+      for (const { fixture, el } of [own, ready]) {
+        el.querySelector<HTMLButtonElement>(`[data-testid="profile-mode-${mode}"] button`)!.click();
+        await fixture.whenStable();
+      }
+      expect(ready.el.querySelector('svg.drawing')!.outerHTML).toBe(own.el.querySelector('svg.drawing')!.outerHTML);
+      expect(legendText(ready.el)).toBe(legendText(own.el));
+    }
+  });
+
   for (const units of ['mm', 'in'] as const) {
     it(`dimensions the height, the period and the depth with the length formatter's text (${units})`, async () => {
       const depth = views.plan!.depth;
