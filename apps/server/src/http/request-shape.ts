@@ -8,34 +8,71 @@ export const MAX_BODY_DEPTH = 64;
 /**
  * The path of the first string or key holding U+0000 in a parsed value, or undefined. PostgreSQL's
  * text type refuses U+0000, so such text can never be stored or searched for. Iterative, so a deep
- * value cannot overflow the stack.
+ * value cannot overflow the stack. Only containers are stacked, in flat lists (no object or path copy
+ * per element): the path is rebuilt from parent links only when U+0000 is found, so an 8 MB list of
+ * a million pairs (the rack import's limit) is walked in a fraction of the time JSON.parse took.
  */
 export function findNul(value: unknown): string | undefined {
-  const stack: Array<{ value: unknown; path: PropertyKey[] }> = [{ value, path: [] }];
-  while (stack.length) {
-    const { value: v, path } = stack.pop()!;
-    if (typeof v === 'string') {
-      if (v.includes('\u0000')) return formatPath(path) || 'body';
-    } else if (v && typeof v === 'object') {
-      for (const [key, child] of Object.entries(v)) {
-        if (key.includes('\u0000')) return formatPath(path) || 'body';
-        stack.push({ value: child, path: [...path, Array.isArray(v) ? Number(key) : key] });
+  if (typeof value === 'string') return value.includes('\u0000') ? 'body' : undefined;
+  if (!value || typeof value !== 'object') return undefined;
+  // Every container seen: itself, its key in its parent and its parent's index here (-1 for the root).
+  const seen: object[] = [value];
+  const keys: PropertyKey[] = [''];
+  const parents: number[] = [-1];
+  const todo: number[] = [0];
+  const found = (at: number, last?: PropertyKey) => {
+    const path: PropertyKey[] = last === undefined ? [] : [last];
+    for (let i = at; parents[i] >= 0; i = parents[i]) path.unshift(keys[i]);
+    return formatPath(path) || 'body';
+  };
+  const visit = (at: number, key: PropertyKey, child: unknown): string | undefined => {
+    if (typeof child === 'string') return child.includes('\u0000') ? found(at, key) : undefined;
+    if (child && typeof child === 'object') {
+      todo.push(seen.length);
+      seen.push(child);
+      keys.push(key);
+      parents.push(at);
+    }
+    return undefined;
+  };
+  while (todo.length) {
+    const at = todo.pop()!;
+    const v = seen[at];
+    if (Array.isArray(v)) {
+      for (let i = 0; i < v.length; i++) {
+        const hit = visit(at, i, v[i]);
+        if (hit) return hit;
+      }
+    } else {
+      for (const key of Object.keys(v)) {
+        if (key.includes('\u0000')) return found(at);
+        const hit = visit(at, key, (v as Record<string, unknown>)[key]);
+        if (hit) return hit;
       }
     }
   }
   return undefined;
 }
 
-/** The nesting depth of a parsed value (a scalar is 0, `{}` is 1), counted without recursion; stops once past `limit`. */
+/** The nesting depth of a parsed value (a scalar is 0, `{}` is 1), counted without recursion; stops once past `limit`. Only containers are stacked. */
 export function depthOf(value: unknown, limit = MAX_BODY_DEPTH): number {
+  if (!value || typeof value !== 'object') return 0;
   let deepest = 0;
-  const stack: Array<[unknown, number]> = [[value, 1]];
-  while (stack.length) {
-    const [v, depth] = stack.pop()!;
-    if (!v || typeof v !== 'object') continue;
-    deepest = Math.max(deepest, depth);
+  const values: object[] = [value];
+  const depths: number[] = [1];
+  while (values.length) {
+    const v = values.pop()!;
+    const depth = depths.pop()!;
+    if (depth > deepest) deepest = depth;
     if (deepest > limit) return deepest;
-    for (const child of Object.values(v)) stack.push([child, depth + 1]);
+    const children: unknown[] = Array.isArray(v) ? v : Object.values(v);
+    for (let i = 0; i < children.length; i++) {
+      const child = children[i];
+      if (child && typeof child === 'object') {
+        values.push(child);
+        depths.push(depth + 1);
+      }
+    }
   }
   return deepest;
 }

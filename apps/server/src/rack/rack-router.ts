@@ -5,11 +5,36 @@ import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
 import { refuseHostileShapes } from '../http/request-shape';
 import { parseBody } from '../http/validate';
+import { HttpError } from '../http/http-error';
 import * as rack from './rack-service';
 import { sweepsRouter } from './sweeps-router';
 
 /** POST /api/rack/import (seen from the API router): its body is read by its own route, with the larger limit. */
 export const isRackImport = (req: Request) => req.method === 'POST' && req.path.replace(/\/+$/, '') === '/rack/import';
+/**
+ * Lists and objects a rack file may hold. The largest rack within RACK_LIMITS holds about 30 000 (20 000
+ * readings, 200 rosettes of 8 layers, tags); 8 MB of JSON can hold a million (`[0,0],` repeated), and
+ * walking those for U+0000, depth and the schema held the event loop for seconds.
+ */
+export const RACK_FILE_MAX_CONTAINERS = 100_000;
+
+/** 400 once the body holds more than RACK_FILE_MAX_CONTAINERS lists and objects, stopping the count there. */
+function refuseCrowdedRackFile(req: Request, _res: unknown, next: (error?: unknown) => void) {
+  const todo: unknown[] = [req.body];
+  let containers = 0;
+  while (todo.length) {
+    const v = todo.pop();
+    if (!v || typeof v !== 'object') continue;
+    if (++containers > RACK_FILE_MAX_CONTAINERS) {
+      const limit = `must hold at most ${RACK_FILE_MAX_CONTAINERS.toLocaleString('en-GB').replace(/,/g, ' ')} lists and objects (a full rack holds about 30 000)`;
+      return next(new HttpError(400, 'invalid_input', `The rack file ${limit}.`, { body: limit }));
+    }
+    const children: unknown[] = Array.isArray(v) ? v : Object.values(v);
+    for (let i = 0; i < children.length; i++) if (children[i] && typeof children[i] === 'object') todo.push(children[i]);
+  }
+  next();
+}
+
 /** The rack file's body, read only for a signed-in member (a visitor's megabytes are never parsed). */
 const rackFileBody = [
   (req: Request, _res: unknown, next: () => void) => {
@@ -17,6 +42,7 @@ const rackFileBody = [
     next();
   },
   express.json({ limit: RACK_FILE_MAX_BYTES }),
+  refuseCrowdedRackFile,
   refuseHostileShapes,
 ];
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { and, desc, eq, sql } from 'drizzle-orm';
-import { chosenRosettes, sweepBody, sweepCountProblem, SWEEP_LIMITS, type SavedSweep, type SweepChoices, type SweepSummary } from '@barwright/contracts';
+import { chosenRosettes, sweepBody, sweepCountProblem, SWEEP_LIMITS, type SavedSweep, type CandidateKey, type SweepChoices, type SweepSummary } from '@barwright/contracts';
 import { savedSweeps } from '../../../../db/schema';
 import type { Db } from '../database/database';
 import { requireUser } from '../auth/auth-router';
@@ -25,17 +25,24 @@ const toSaved = (row: Row): SavedSweep => ({
  * How many rosettes the choices take from the member's rack: picked ones must all be theirs, and the
  * whole sweep must stay within SWEEP_MAX_CANDIDATES (400 naming the field and how to narrow it).
  */
-async function sweepBars(db: Db, ownerId: string, choices: SweepChoices): Promise<number> {
+async function sweepBars(db: Db, ownerId: string, choices: SweepChoices, shortlist: readonly CandidateKey[] = []): Promise<number> {
   const pick = choices.rosettes;
   if (pick.by === 'picked') {
     const own = new Set((await ownRosettesAmong(db, ownerId, pick.ids)).map((r) => r.id));
     const i = pick.ids.findIndex((id) => !own.has(id.toLowerCase()));
     if (i >= 0) throw new HttpError(400, 'invalid_input', 'A picked rosette is not on your rack.', { [`choices.rosettes.ids[${i}]`]: 'is not a rosette of your rack' });
   }
-  const count = pick.by === 'picked' ? pick.ids.length : chosenRosettes(choices, await rackRosetteRows(db, ownerId)).length;
-  const problem = sweepCountProblem(choices, count);
+  const taken = pick.by === 'picked' ? pick.ids.map((id) => id.toLowerCase()) : chosenRosettes(choices, await rackRosetteRows(db, ownerId)).map((r) => r.id);
+  const problem = sweepCountProblem(choices, taken.length);
   if (problem) throw new HttpError(400, 'invalid_input', problem, { choices: problem });
-  return count * choices.rubbers.length * choices.travels.length * choices.cutters.length;
+  // A shortlist key names a candidate of this sweep: never a rosette it does not take (another member's included).
+  const inSweep = new Set(taken);
+  const fields: Record<string, string> = {};
+  shortlist.forEach((key, i) => {
+    if (!inSweep.has(key.rosetteId.toLowerCase())) fields[`shortlist[${i}].rosetteId`] = 'is not a rosette this sweep takes from your rack';
+  });
+  if (Object.keys(fields).length) throw new HttpError(400, 'invalid_input', 'Some shortlisted candidates are not in this sweep.', fields);
+  return taken.length * choices.rubbers.length * choices.travels.length * choices.cutters.length;
 }
 
 async function ownSweep(db: Db, ownerId: string, id: string): Promise<Row> {
@@ -54,7 +61,7 @@ export function sweepsRouter({ db }: { db: Db }): Router {
   router.post('/', async (req, res) => {
     const user = requireUser(req);
     const body = parseBody(sweepBody, req.body);
-    const candidates = await sweepBars(db, user.id, body.choices);
+    const candidates = await sweepBars(db, user.id, body.choices, body.shortlist);
     const row = await db.transaction(async (tx) => {
       // Counted and stored in one step, so requests sent together cannot all pass the count.
       await advisoryXactLock(tx, ADVISORY_LOCKS.sweeps, user.id);
@@ -72,7 +79,7 @@ export function sweepsRouter({ db }: { db: Db }): Router {
     const user = requireUser(req);
     const row = await ownSweep(db, user.id, req.params.id);
     const body = parseBody(sweepBody, req.body);
-    const candidates = await sweepBars(db, user.id, body.choices);
+    const candidates = await sweepBars(db, user.id, body.choices, body.shortlist);
     const [updated] = await db
       .update(savedSweeps)
       .set({ name: body.name, choices: body.choices, shortlist: body.shortlist, candidates, updatedAt: new Date() })
