@@ -51,4 +51,10 @@ describe('shownWarnings', () => {
     expect(shown.severity).toBe('trifle');
     expect(other).toEqual({ severity: null, message: 'thin chip' });
   });
+
+  it('reads a place in the unit its message is written in, whatever unit the view shows', () => {
+    const w = crest(6.65, 10.02, 1.26, 'The follower rounds a crest of the bar at x 6.65–10.02 mm: the line loses 1.26 mm there.');
+    const [shown] = shownWarnings([w], { from: 68.58, to: 81.28 }, 12.7, 1.5, 'in');
+    expect(shown.message).toContain('at x 2.762–2.894 in, and every 0.5 in along the bar') // 70.15–73.52 mm;
+  });
 });

@@ -80,11 +80,12 @@ const PLACE = /at x (-?\d+(?:\.\d+)?(?:e-?\d+)?)(?:–(-?\d+(?:\.\d+)?(?:e-?\d+)
  * repeating place says "and every P along the bar". Detail losses carry their severity.
  */
 export function shownWarnings(warnings: readonly EngineWarning[], window: { from: number; to: number }, period: number, amplitude: number, units: Units): ShownWarning[] {
-  const mmPer = units === 'in' ? 25.4 : 1;
   return warnings.map((w) => {
     if (!isDetailLoss(w)) return { severity: null, message: w.message };
     let every = period > 0 && !/every .* along the bar/.test(w.message);
-    const message = w.message.replace(PLACE, (_all, a: string, b: string | undefined) => {
+    const message = w.message.replace(PLACE, (_all, a: string, b: string | undefined, unit: string) => {
+      // The place in the unit the message writes it in (the design's), shown in the view's.
+      const mmPer = unit === 'in' ? 25.4 : 1;
       const xa = Number(a) * mmPer;
       const xb = (b === undefined ? Number(a) : Number(b)) * mmPer;
       const k = period > 0 ? Math.ceil((window.from - xa) / period) : 0;
