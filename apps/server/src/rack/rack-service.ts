@@ -94,6 +94,7 @@ export async function changeRosette(db: Db, ownerId: string, id: string, patch: 
       })
       .where(eq(rackRosettes.id, row.id))
       .returning();
+    if (!updated) throw notFound('rack rosette'); // deleted (removeRosette takes no lock) while this change was checked
     return toRackRosette(updated);
   });
 }

@@ -85,6 +85,7 @@ export function sweepsRouter({ db }: { db: Db }): Router {
       .set({ name: body.name, choices: body.choices, shortlist: body.shortlist, candidates, updatedAt: new Date() })
       .where(eq(savedSweeps.id, row.id))
       .returning();
+    if (!updated) throw notFound('sweep'); // deleted while this change was checked
     res.json(toSaved(updated));
   });
   router.delete('/:id', async (req, res) => {
