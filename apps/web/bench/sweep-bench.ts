@@ -10,7 +10,8 @@
  * 2 rubbers, 5 travel settings, 5 cutters; the saved sweeps choose half × 2 × 5 × 1 = 500 and
  * bench × 2 × 5 × 5 = 5 000. Like studio-redraw-bench.ts it starts a real server on a fresh data
  * directory with the demo data (WEB_DIST: the web build, default dist/web/browser).
- * Run: node --import tsx apps/web/bench/sweep-bench.ts
+ * Run: node --import tsx apps/web/bench/sweep-bench.ts (BENCH_PORT, BENCH_DATA_DIR; BENCH_PROFILE=1 samples the
+ * page over the 5 000 run; BENCH_SHOTS=dir saves the grid at 1280 and 360 px; BENCH_QUICK=1 stops after the 500).
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -89,6 +90,9 @@ async function main(): Promise<void> {
     console.log(`${'500, cold (open → drawn / done)'.padEnd(44)} ${coldDrawn.toFixed(0)} ms / ${coldDone.toFixed(0)} ms (page load and worker start-up included)`);
     console.log(`${'500: longest main-thread task in a run'.padEnd(44)} ${Math.max(...warm.map((w) => w.longest)).toFixed(0)} ms (0: none over 50 ms)`);
 
+    if (process.env.BENCH_SHOTS) await screenshots(page, process.env.BENCH_SHOTS);
+    if (process.env.BENCH_QUICK) return;
+
     // 5 000: open (it runs), cancel that run, then Run and time it.
     await page.goto(`${BASE}/rack/sweep/${large}`);
     await page.locator('[data-testid="sweep-progress"][data-state="running"]').waitFor({ timeout: 60_000 });
@@ -130,6 +134,18 @@ async function timeRun(page: Page, timeout = 60_000) {
   const b = await bench(page);
   await page.waitForTimeout(300);
   return { drawn: b.drawn - b.clicked, done: b.done - b.clicked, longest: Math.max(0, ...b.longTasks), longCount: b.longTasks.length };
+}
+
+/** With BENCH_SHOTS=dir: the grid at 1280 and 360 px wide, once every card on screen is drawn. */
+async function screenshots(page: Page, dir: string): Promise<void> {
+  fs.mkdirSync(dir, { recursive: true });
+  for (const width of [1280, 360]) {
+    await page.setViewportSize({ width, height: 900 });
+    await page.getByTestId('sweep-grid').scrollIntoViewIfNeeded();
+    await page.waitForTimeout(1500);
+    await page.screenshot({ path: path.join(dir, `sweep-grid-${width}.png`) });
+  }
+  await page.setViewportSize({ width: 1280, height: 900 });
 }
 
 /** Waits for the bench's marks (`what`: which of clicked, drawn, done); on a timeout shows the page's state and a screenshot. */

@@ -8,7 +8,8 @@ const DEFAULT_LIGHT: Required<SweepLight> = { azimuth: 60, elevation: 35, tint: 
 
 /**
  * A candidate's small lit study: its engraved line laid as the line study (with the phase schedule),
- * over the same THUMB_MM window for every candidate so the grid is at one true scale, shaded as
+ * over a window THUMB_MM.width (16 mm) across for every candidate, as high as its box (10 mm in
+ * its own shape), so the grid is at one true scale; shaded as
  * metal like the studio's lit plate. Drawn by the sweep's pool workers (SweepRunner, provided by the
  * page) as an ImageBitmap that the page's thread only hands to a 'bitmaprenderer' canvas. A thumbnail
  * exists only while the grid shows it (virtual scroll); one removed before its picture comes drops
@@ -26,11 +27,12 @@ const DEFAULT_LIGHT: Required<SweepLight> = { azimuth: 60, elevation: 35, tint: 
   styles: `
     :host {
       display: block;
+      aspect-ratio: ${THUMB_MM.width} / ${THUMB_MM.height};
     }
     canvas {
       display: block;
       width: 100%;
-      aspect-ratio: ${THUMB_MM.width} / ${THUMB_MM.height};
+      height: 100%;
       border-radius: 4px;
       background: var(--mat-sys-surface-container-high, #d8d8d8);
     }
@@ -46,8 +48,13 @@ export class SweepThumb {
   readonly light = input<SweepLight | null>(null);
 
   protected readonly drawn = signal(false);
-  private readonly cssWidth = signal(0);
-  protected readonly label = computed(() => `Lit line study, ${THUMB_MM.width} × ${THUMB_MM.height} mm at true scale`);
+  /** The canvas's box (CSS px): THUMB_MM's shape unless the page sizes the thumbnail. */
+  private readonly box = signal({ width: 0, height: 0 });
+  protected readonly label = computed(() => {
+    const { width, height } = this.box();
+    const high = width > 0 ? (THUMB_MM.width * height) / width : THUMB_MM.height;
+    return `Lit line study, ${THUMB_MM.width} × ${+high.toFixed(1)} mm at true scale`;
+  });
   private drop: (() => void) | null = null;
   private destroyed = false;
 
@@ -55,7 +62,10 @@ export class SweepThumb {
     const destroyRef = inject(DestroyRef);
     afterNextRender(() => {
       // The width from a ResizeObserver: reading it off the element would force a layout per thumbnail while scrolling.
-      const observer = new ResizeObserver(([entry]) => this.cssWidth.set(Math.floor(entry.contentRect.width)));
+      const observer = new ResizeObserver(([entry]) => {
+        const [width, height] = [Math.floor(entry.contentRect.width), Math.floor(entry.contentRect.height)];
+        if (width !== this.box().width || height !== this.box().height) this.box.set({ width, height });
+      });
       observer.observe(this.canvas().nativeElement);
       destroyRef.onDestroy(() => observer.disconnect());
     });
@@ -68,17 +78,17 @@ export class SweepThumb {
       const item = this.item();
       const study = this.study();
       const light = { ...DEFAULT_LIGHT, ...(this.light() ?? {}) };
-      const width = this.cssWidth();
-      if (!item.ok || width <= 0) return;
+      const { width, height } = this.box();
+      if (!item.ok || width <= 0 || height <= 0) return;
       untracked(() => {
         this.drop?.();
-        const { widthPx, heightPx } = thumbPixels(width, globalThis.devicePixelRatio);
+        const { widthPx, heightPx, heightMm } = thumbPixels(width, height, globalThis.devicePixelRatio);
         this.drop = this.runner.paintThumb(
           {
             line: item.line,
             step: item.step,
             study,
-            window: thumbWindow(study, arrayTop(item.line)),
+            window: thumbWindow(study, arrayTop(item.line), heightMm),
             widthPx,
             heightPx,
             light: { azimuthDeg: light.azimuth, elevationDeg: light.elevation },

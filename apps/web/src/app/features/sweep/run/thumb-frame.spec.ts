@@ -22,8 +22,13 @@ describe('thumb frame', () => {
   it('finds the top of a period and sizes the pixels at the device ratio (at most 2)', () => {
     expect(arrayTop(new Float32Array([0, 0.25, 1.5, 0.5]))).toBe(1.5);
     expect(arrayTop([])).toBe(0);
-    expect(thumbPixels(160, 1)).toEqual({ widthPx: 160, heightPx: 100 });
-    expect(thumbPixels(160, 3)).toEqual({ widthPx: 320, heightPx: 200 });
-    expect(thumbPixels(160, 0)).toEqual({ widthPx: 160, heightPx: 100 });
+    expect(thumbPixels(160, 100, 1)).toEqual({ widthPx: 160, heightPx: 100, heightMm: 10 });
+    expect(thumbPixels(160, 100, 3)).toEqual({ widthPx: 320, heightPx: 200, heightMm: 10 });
+    expect(thumbPixels(160, 100, 0)).toEqual({ widthPx: 160, heightPx: 100, heightMm: 10 });
+    // A wider box (the page's card): the same mm across, fewer mm high, so every card is at one scale.
+    expect(thumbPixels(240, 120, 1)).toEqual({ widthPx: 240, heightPx: 120, heightMm: 8 });
+    const w = thumbWindow({ lineSpacing: 0.5, lines: 11 }, 1, 8);
+    expect(w.y1 - w.y0).toBeCloseTo(8, 12);
+    expect(w.x1 - w.x0).toBeCloseTo(THUMB_MM.width, 12);
   });
 });
