@@ -212,8 +212,20 @@ async function printProfile(cdp: CDPSession): Promise<void> {
 
 /** With BENCH_TRACE set: the editing page's main-thread time by kind of work (Chromium's trace events, own time). */
 function printTrace(buffer: Buffer): void {
-  type Event = { name: string; ph: string; ts: number; dur?: number; pid: number; tid: number; args?: { name?: string } };
+  type Event = { name: string; ph: string; ts: number; dur?: number; tdur?: number; pid: number; tid: number; args?: { name?: string } };
   const events = (JSON.parse(buffer.toString()) as { traceEvents: Event[] }).traceEvents;
+  // Per thread of both pages: the CPU its tasks took (thread time, which the machine's other load
+  // barely changes, unlike the wall time the page's long-task observer sees) and the tasks over 50 ms of it.
+  const threads = events.filter((e) => e.name === 'thread_name' && /^(CrRendererMain|DedicatedWorker thread)$/.test(e.args?.name ?? ''));
+  console.log('CPU by thread over the edits (top-level tasks; thread time):');
+  for (const t of threads) {
+    const xs = events.filter((e) => e.pid === t.pid && e.tid === t.tid && e.ph === 'X' && e.dur).sort((a, b) => a.ts - b.ts || b.dur! - a.dur!);
+    const tops: Event[] = [];
+    for (const e of xs) if (!tops.length || e.ts >= tops[tops.length - 1].ts + tops[tops.length - 1].dur!) tops.push(e);
+    const cpu = tops.map((e) => (e.tdur ?? e.dur!) / 1000);
+    const sum = cpu.reduce((a, b) => a + b, 0);
+    console.log(`  ${String(t.pid).padEnd(8)} ${t.args!.name!.padEnd(22)} ${sum.toFixed(0).padStart(6)} ms CPU, ${cpu.filter((c) => c > 50).length} tasks over 50 ms of CPU (longest ${Math.max(0, ...cpu).toFixed(0)} ms)`);
+  }
   const main = events.find((e) => e.name === 'thread_name' && e.args?.name === 'CrRendererMain');
   const mine = events.filter((e) => main && e.pid === main.pid && e.tid === main.tid && e.ph === 'X' && e.dur).sort((a, b) => a.ts - b.ts);
   // Own time: an event's duration less that of the events nested in it.
