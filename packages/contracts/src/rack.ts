@@ -33,8 +33,12 @@ export const RACK_LIMITS = {
   readings: 20_000,
 } as const;
 
-/** The largest rack file POST /api/rack/import reads (every rack within RACK_LIMITS fits). */
-export const RACK_FILE_MAX_BYTES = 8 * 1024 * 1024;
+/**
+ * The largest rack file POST /api/rack/import reads. Every rack within RACK_LIMITS fits: the largest,
+ * 200 rosettes of 8 Fourier layers of 32 terms with long coefficients, full notes and tags, is about 3 MB.
+ * No larger, because parsing JSON holds the event loop (about a second a few MB on a loaded 2-core server).
+ */
+export const RACK_FILE_MAX_BYTES = 4 * 1024 * 1024;
 
 /** The measured readings a rosette holds (0 when it has no measured layer, or is not a rosette at all). */
 export function rosetteReadings(rosette: unknown): number {

@@ -13,7 +13,7 @@ import { sweepsRouter } from './sweeps-router';
 export const isRackImport = (req: Request) => req.method === 'POST' && req.path.replace(/\/+$/, '') === '/rack/import';
 /**
  * Lists and objects a rack file may hold. The largest rack within RACK_LIMITS holds about 30 000 (20 000
- * readings, 200 rosettes of 8 layers, tags); 8 MB of JSON can hold a million (`[0,0],` repeated), and
+ * readings, 200 rosettes of 8 layers, tags); 4 MB of JSON can hold half a million (`[0,0],` repeated), and
  * walking those for U+0000, depth and the schema held the event loop for seconds.
  */
 export const RACK_FILE_MAX_CONTAINERS = 100_000;

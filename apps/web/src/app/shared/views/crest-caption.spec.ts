@@ -17,4 +17,8 @@ describe('crestCaption', () => {
     expect(text).not.toContain('Infinity');
     expect(text).toContain('straight');
   });
+  it('places the crest in the window drawn, every period along the bar', () => {
+    const text = crestCaption({ radius: 0, corner: true, x: 0, pathRadius: 0 }, mm, { from: 68.75, period: 12.5 });
+    expect(text).toContain('first at x 75 mm and every 12.5 mm along the bar');
+  });
 });

@@ -96,7 +96,10 @@ export class BarProfile {
     const p = this.profile();
     return p ? this.length(p.period) : '';
   });
-  protected readonly crestWords = computed(() => crestCaption(this.crest(), (mm) => this.length(mm)));
+  protected readonly crestWords = computed(() => {
+    const [d, p] = [this.drawing(), this.profile()];
+    return crestCaption(this.crest(), (mm) => this.length(mm), d && p ? { from: d.from, period: p.period } : undefined);
+  });
 
   protected setMode(mode: ProfileMode): void {
     this.mode.set(mode);
