@@ -12,6 +12,9 @@ interface PoolWorker {
   pending: number;
 }
 
+/** Least time between two progress counts while a run goes on (ms). */
+const PUBLISH_MS = 200;
+
 type ThumbCallback = (bitmap: ImageBitmap | null) => void;
 
 /**
@@ -69,7 +72,7 @@ export class SweepRunner {
     }
     this.state.set({ state: jobs.length ? 'running' : 'done', done: 0, failed: 0, total: jobs.length, msLeft: null });
     // Two chunks each to start: one to work on, one waiting.
-    for (let round = 0; round < 2; round++) for (const p of pool) this.refill(p);
+    for (let round = 0; round < 3; round++) for (const p of pool) this.refill(p);
   }
 
   /** Stops the run: the workers drop their queued jobs at once, results still on their way are ignored. */
@@ -147,12 +150,13 @@ export class SweepRunner {
       this.onResult = null;
       this.jobs = [];
     } else if (!this.publishQueued) {
-      // Results come many a frame; the progress (and the page's view of it) changes once a frame.
+      // A few times a second, not every frame: each new count restyles and repaints the page, whose
+      // thread every result has to pass through on its way from the workers.
       this.publishQueued = true;
-      requestAnimationFrame(() => {
+      setTimeout(() => {
         this.publishQueued = false;
         if (this.state().state === 'running') this.publish();
-      });
+      }, PUBLISH_MS);
     }
   }
 

@@ -25,10 +25,10 @@ describe('sweep schedule', () => {
     }
   });
 
-  it('keeps one chunk waiting behind the one in work', () => {
+  it('keeps two chunks waiting behind the one in work', () => {
     expect(wantsMore(0, 8)).toBe(true);
-    expect(wantsMore(8, 8)).toBe(true);
-    expect(wantsMore(9, 8)).toBe(false);
+    expect(wantsMore(16, 8)).toBe(true);
+    expect(wantsMore(17, 8)).toBe(false);
     expect(wantsMore(1, 0)).toBe(true);
   });
 

@@ -3,8 +3,11 @@
  * the time left from the throughput so far.
  */
 
-/** Most jobs in one chunk: ~20 ms of work at the sweep's step, so a cancel or a new run waits little and the last chunks end together. */
-export const MAX_CHUNK = 8;
+/**
+ * Most jobs in one chunk: ~50 ms of work at the sweep's step. A cancel or a new run does not wait for
+ * it (the worker drops its queue between slices); the last chunks are smaller, so the workers end together.
+ */
+export const MAX_CHUNK = 32;
 
 /**
  * Jobs in the next chunk for a worker: small enough that every worker gets several (the last ones
@@ -16,11 +19,13 @@ export function chunkSize(remaining: number, workers: number): number {
 }
 
 /**
- * Whether a worker with `pending` queued jobs should get another chunk: it keeps one chunk waiting
- * behind the one it works on, so it never idles while its results cross to the page and back.
+ * Whether a worker with `pending` queued jobs should get another chunk: it keeps two chunks waiting
+ * behind the one it works on (about 100 ms of work), so it never idles while its results wait for the
+ * page's thread, busy laying out the grid, to take them and hand out more (one chunk ahead, the
+ * workers idled whenever the page's thread was busy for a frame or two: 5 000 took 18 s, not 5).
  */
 export function wantsMore(pending: number, chunk: number): boolean {
-  return pending <= Math.max(1, chunk);
+  return pending <= 2 * Math.max(1, chunk);
 }
 
 /** Pool size: one worker per core, at least 1, at most 8. */

@@ -16,6 +16,9 @@ export class RowHeightsStrategy implements VirtualScrollStrategy {
 
   /** The rows' heights (px), in order; called whenever the rows change. */
   setHeights(heights: readonly number[]): void {
+    // Results stream in many times a second and mostly leave the rows as they were: then nothing is
+    // laid out again (update() reads the scroll offset, which forces a layout).
+    if (heights.length === this.offsets.length - 1 && heights.every((h, i) => this.offsets[i + 1] - this.offsets[i] === h)) return;
     const offsets = new Float64Array(heights.length + 1);
     for (let i = 0; i < heights.length; i++) offsets[i + 1] = offsets[i] + heights[i];
     this.offsets = offsets;
