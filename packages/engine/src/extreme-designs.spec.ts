@@ -74,11 +74,14 @@ const EXTREMES: Record<string, Design> = {
 
 describe('extreme but valid design files', () => {
   for (const [name, design] of Object.entries(EXTREMES)) {
-    it(`${name}: computed within 2 s of CPU, every number finite`, () => {
+    // The bound is half the server's compute budget for one job (10 s, compute-limits.ts), so the
+    // heaviest valid file fits it twice over. Not a speed target (those are in `npm run bench`): on this
+    // 2-core machine the CPU time of the same computation reads 1.3-2.4 s as other processes contend.
+    it(`${name}: computed within 5 s of CPU, every number finite`, () => {
       const parsed = parseDesign(design);
       expect(parsed.ok && designComplexity(parsed.design).rosetteDetail <= COMPLEXITY_LIMITS.rosetteDetail).toBe(true);
       computeProfile(EXAMPLE_DESIGN, { step: 0.05 }); // warm up the code paths once
-      expect(computeAll(design)).toBeLessThan(2000);
+      expect(computeAll(design)).toBeLessThan(5000);
     }, 30_000);
   }
 

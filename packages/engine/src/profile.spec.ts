@@ -90,13 +90,6 @@ describe('computeProfile', () => {
     expect(coarse.message).toMatch(/step of 0\.01 mm is coarser than this design needs.*every 1\.39 mm, 139 points each.*off by up to 1\.4 %.*a step of 0\.00069 mm/);
     expect(computeProfile(short, { step: 0.00069 }).warnings.filter((w) => w.code === 'other')).toEqual([]);
   });
-
-  it('is fast enough to be called often (a 150 mm bar at 0.01 mm well under 50 ms even on a busy machine)', () => {
-    computeProfile(EXAMPLE_DESIGN, { step: 0.01 });
-    const t = performance.now();
-    computeProfile(EXAMPLE_DESIGN, { step: 0.01 });
-    expect(performance.now() - t).toBeLessThan(50);
-  });
 });
 
 describe('computeProfile, for any valid design (fast-check)', () => {
