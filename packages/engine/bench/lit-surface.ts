@@ -16,7 +16,7 @@ export function litSurface(): void {
   const width = 1280;
   const height = Math.round((width * (window.y1 - window.y0)) / (window.x1 - window.x0));
   console.log(`lit surface, 40 mm window of the example's study (${study.lines.length} lines) at ${width} × ${height} px:`);
-  for (const supersample of [2, 3]) {
+  for (const supersample of [1, 2, 3]) {
     const input = { lines: study.lines, depth: design.study.depth, vAngle: design.study.vAngle, window, width, height, supersample };
     const field = computeHeightField(input);
     const compute = cpuMedian(9, () => computeHeightField(input), 2);

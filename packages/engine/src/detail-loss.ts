@@ -45,10 +45,10 @@ export function detailLossWarnings(input: DetailLossInput): EngineWarning[] {
   for (let i = from; i <= to; i++) top = Math.max(top, y[i]);
   const threshold = Math.max(1e-4, 1e-3 * top);
   const zones = lossZones(input, threshold);
-  const blunt = input.cutterRadius > input.followerRadius ? bluntValleys(input, threshold) : [];
   // Zones repeat every period: keep those starting in one period, counted from a quiet node so that
   // a zone cut short by the start of the examined stretch is not taken for a whole one.
   const quiet = firstQuietNode(zones, from, to);
+  const blunt = input.cutterRadius > input.followerRadius ? bluntValleys(input, threshold, quiet) : [];
   const repeats = (to - quiet) * step > input.period;
   const once = (z: Zone) => !repeats || (z.from >= quiet && (z.from - quiet) * step < input.period);
   return [
@@ -66,12 +66,31 @@ function firstQuietNode(zones: Zone[], from: number, to: number): number {
   return Math.min(node, to);
 }
 
+/**
+ * The node after which no zone can be reported: a period past the quiet node. Zones starting later
+ * only repeat those of the period before (`detailLossWarnings` keeps those starting in one period),
+ * so the scans stop there, once outside a zone: a third of the profile's time went on scanning the
+ * whole bar for repeats that were then dropped.
+ */
+function lastStart(quiet: number, input: DetailLossInput): number {
+  return quiet + Math.ceil(input.period / input.step);
+}
+
 /** Zones where the follower leaves the parallel curve of the cutter path at distance rf − rc. */
 function lossZones(input: DetailLossInput, threshold: number): Zone[] {
   const { cutter: y, follower: f, step: h, from, to } = input;
   const delta = input.followerRadius - input.cutterRadius;
   const zones: Zone[] = [];
-  for (let i = Math.max(1, from); i <= Math.min(to, y.length - 2); i++) {
+  // The quiet node is known once a node after the first is not in a zone starting at `from` (firstQuietNode).
+  let end = Infinity;
+  const start = Math.max(1, from);
+  for (let i = start; i <= Math.min(to, y.length - 2); i++) {
+    if (end === Infinity && i > start) {
+      const first = zones[0];
+      if (!first || first.from !== from) end = lastStart(from, input);
+      else if (first.to < i - 1) end = lastStart(first.to + 1, input);
+    }
+    if (i > end && zones[zones.length - 1]?.to !== i - 1) break;
     const slope = (y[i + 1] - y[i - 1]) / (2 * h);
     const norm = Math.sqrt(1 + slope * slope);
     const at = i - (delta * slope) / norm / h; // the parallel point's x, in samples
@@ -85,12 +104,14 @@ function lossZones(input: DetailLossInput, threshold: number): Zone[] {
 }
 
 /** Valleys of the path sharper than rc − rf, with the change of their shape within rc − rf of the bottom. */
-function bluntValleys(input: DetailLossInput, threshold: number): Zone[] {
+function bluntValleys(input: DetailLossInput, threshold: number, quiet: number): Zone[] {
   const { cutter: y, follower: f, step: h, from, to } = input;
   const excess = input.cutterRadius - input.followerRadius;
   const reach = Math.max(1, Math.round(excess / h));
   const zones: Zone[] = [];
-  for (let i = Math.max(1, from); i <= Math.min(to, y.length - 2); i++) {
+  // A valley's zone starts `reach` before it: valleys past a period and a reach from the quiet node only repeat.
+  const end = Math.min(to, y.length - 2, lastStart(quiet, input) + reach);
+  for (let i = Math.max(1, from); i <= end; i++) {
     if (!(y[i] < y[i - 1] && y[i] <= y[i + 1])) continue;
     if (graphCurvatureRadius(y, i, h) >= excess) continue;
     let worst = 0;

@@ -13,6 +13,7 @@ export class NonFiniteResultError extends Error {
 
 /** Throws NonFiniteResultError naming `what` unless every value is finite. */
 export function assertFinite(what: string, values: ArrayLike<number>): void {
+  if (values instanceof Float64Array && allFinite(values)) return;
   for (let i = 0; i < values.length; i++) {
     if (!Number.isFinite(values[i])) throw new NonFiniteResultError(values.length > 1 ? `${what} (point ${i})` : what, values[i]);
   }
@@ -24,4 +25,24 @@ export function assertFiniteWarnings(warnings: readonly EngineWarning[]): void {
     if (w.amount !== undefined) assertFinite(`${w.code} warning amount`, [w.amount]);
     if (w.at) assertFinite(`${w.code} warning place`, [w.at.xFrom, w.at.xTo]);
   }
+}
+
+/**
+ * x·0 is 0 for every finite x and NaN for NaN and ±Infinity: one sum over a path's samples tells
+ * whether to look for the culprit. Typed arrays only, so the loop stays monomorphic (the profile's
+ * four paths were a tenth of its time when read through ArrayLike with the one-value checks).
+ */
+function allFinite(values: Float64Array): boolean {
+  // Four sums, so that each addition need not wait for the one before.
+  let [a, b, c, d] = [0, 0, 0, 0];
+  const n = values.length;
+  let i = 0;
+  for (; i + 3 < n; i += 4) {
+    a += values[i] * 0;
+    b += values[i + 1] * 0;
+    c += values[i + 2] * 0;
+    d += values[i + 3] * 0;
+  }
+  for (; i < n; i++) a += values[i] * 0;
+  return a + b + c + d === 0;
 }
