@@ -30,7 +30,8 @@ const QUIET_MS = 700;
  * long tasks. Page scripts are strings: tsx would wrap named functions in a helper the page lacks.
  */
 const INSTRUMENT = `(() => {
-  const bench = (window.bench = { typed: 0, drawn: 0, longTasks: [], fieldAt: 0, updates: [] });
+  const bench = (window.bench = { typed: 0, drawn: 0, longTasks: [], fieldAt: 0, updates: [], log: [] });
+  window.benchLog = ${JSON.stringify(!!process.env.BENCH_LOG)};
   const now = () => performance.timeOrigin + performance.now();
   // When each document update (y-websocket's message type 0, not awareness) reaches the page, before Yjs reads it.
   const Native = window.WebSocket;
@@ -45,11 +46,17 @@ const INSTRUMENT = `(() => {
   document.addEventListener('input', () => (bench.typed = now()), true);
   const drawing = 'svg, canvas, [data-testid="plan-figures"], [data-testid="profile-warnings"], [data-testid="study-summary"]';
   new MutationObserver((records) => {
-    const inDrawing = records.some((r) => {
+    const inDrawing = (r) => {
       const el = r.target instanceof Element ? r.target : r.target.parentElement;
       return !!(el && el.closest(drawing)) || [...r.addedNodes].some((n) => n instanceof Element && !!n.querySelector('svg, canvas'));
-    });
-    if (inDrawing) requestAnimationFrame(() => (bench.drawn = now()));
+    };
+    const changed = records.filter(inDrawing);
+    if (window.benchLog) for (const r of changed) {
+      const el = r.target instanceof Element ? r.target : r.target.parentElement;
+      const at = now();
+      requestAnimationFrame(() => bench.log.push([Math.round(at - bench.typed), Math.round(now() - bench.typed), (el?.closest('[data-testid]')?.dataset.testid ?? el?.tagName) + ' ' + r.type + ' ' + (r.attributeName ?? '')]));
+    }
+    if (changed.length) requestAnimationFrame(() => (bench.drawn = now()));
   }).observe(document, { subtree: true, childList: true, attributes: true, characterData: true });
   new PerformanceObserver((list) => { for (const e of list.getEntries()) bench.longTasks.push(e.duration); }).observe({ type: 'longtask' });
 })()`;
@@ -72,7 +79,7 @@ const watchField = (testId: string, value: string) => `(() => {
 })()`;
 
 interface BenchWindow {
-  bench: { typed: number; drawn: number; longTasks: number[]; fieldAt: number; updates: number[] };
+  bench: { typed: number; drawn: number; log: [number, number, string][]; longTasks: number[]; fieldAt: number; updates: number[] };
 }
 
 async function main(): Promise<void> {
@@ -125,7 +132,7 @@ async function main(): Promise<void> {
 /** Types `value` into the editor's field; resolves with the three times in ms. */
 async function timeEdit(editor: Page, watcher: Page, testId: string, value: string) {
   await watcher.evaluate(watchField(testId, value));
-  await editor.evaluate(() => ((window as unknown as BenchWindow).bench.drawn = 0));
+  await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.log = []; });
   await watcher.evaluate(() => ((window as unknown as BenchWindow).bench.updates = []));
   await editor.getByTestId(testId).fill(value);
   await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
@@ -135,6 +142,8 @@ async function timeEdit(editor: Page, watcher: Page, testId: string, value: stri
   });
   await settle(editor, watcher);
   const e = await editor.evaluate(() => (window as unknown as BenchWindow).bench);
+  // BENCH_LOG=1: each drawing change of the edit (ms from the input event: changed, its frame; what changed).
+  if (process.env.BENCH_LOG) console.log(`${testId} = ${value}: ${[...new Set(e.log.map(([a, f, what]) => `${a}/${f} ${what}`))].join('; ')}`);
   const w = await watcher.evaluate(() => (window as unknown as BenchWindow).bench);
   // The update that brought the value: the last to arrive before the field took it.
   const arrived = Math.max(...w.updates.filter((t) => t <= w.fieldAt));
