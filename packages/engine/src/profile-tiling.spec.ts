@@ -9,11 +9,12 @@ import { toMm } from './units';
 
 /**
  * Tiling one period along the bar (profile-tiling.ts) must give the bar the whole computation
- * gives: the same points, the paths within floating-point noise (1e-9 of the path's scale: the
+ * gives: the same points, the paths within floating-point noise (1e-7 of the path's scale: the
  * envelopes' crossing points are computed from node indices a whole number of periods apart, so
- * their last bits may differ), and the same warnings, crest, lead-in and lead-out.
+ * their last bits may differ, and a clipped wave's sharp corners magnify that: 1.0e-8 was met on a
+ * lever of 0.55 below), and the same warnings, crest, lead-in and lead-out.
  */
-const TOLERANCE = 1e-9;
+const TOLERANCE = 1e-7;
 
 function expectSameBar(design: Design, companion: Companion | undefined, step: number): void {
   const tiled = barSamples(design, { step, companion }, true);
@@ -65,6 +66,20 @@ describe('tiled bar profile', () => {
       { numRuns: 40 },
     );
   }, 180_000); // each run computes two bars: slow on a busy machine
+
+  it('is the whole computation on a clipped flat wave with sharp corners (a property run found it 1.0e-8 of the scale off)', () => {
+    const design: Design = {
+      ...EXAMPLE_DESIGN,
+      rosette: { baseRadius: 52.29556131011819, layers: [{ lobes: 2, amplitude: 5.28523509926928, phase: 0, wave: { shape: 'flat', clip: 0.05 } }] },
+      rubber: { shape: 'round', radius: 0 },
+      motion: { travelPerRev: 20, leverRatio: 0.547743227295541 },
+      cutter: { diameter: 0.2000000000000004, flutes: 2 },
+      bar: { ...EXAMPLE_DESIGN.bar, length: 60 },
+      follower: { radius: 0 },
+      study: { ...EXAMPLE_DESIGN.study, lineSpacing: 0.45, vAngle: 120, depth: 0.1 },
+    };
+    expectSameBar(design, undefined, coarseStep(design));
+  });
 
   it('falls back to the whole bar when the cutter is off the centre line (no tiling there)', () => {
     const design: Design = { ...EXAMPLE_DESIGN, cutter: { ...EXAMPLE_DESIGN.cutter, offset: 0.5 } };
