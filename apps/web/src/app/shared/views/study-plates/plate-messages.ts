@@ -25,9 +25,9 @@ export type PlateRequest =
       flatOnly?: boolean;
     }
   /** A new light or metal: reshades the lit plate held, without computing its surface again. */
-  | { kind: 'light'; id: number; light: SurfaceLight; tint: MetalTint };
+  | { kind: 'light'; light: SurfaceLight; tint: MetalTint };
 
-/** Plate worker → page: request `id` is on the canvas named; `fieldMs` is 0 for a reshade. */
+/** Plate worker → page: request `id` is on the canvas named (a reshade names the study its surface is of); `fieldMs` is 0 for a reshade. */
 export interface PlateReply {
   id: number;
   plate: 'flat' | 'lit';

@@ -61,6 +61,8 @@ export class StudyPlates {
   private nextId = 0;
   /** The flat plate's ink and ground as the page resolves them (read once, and again when the theme changes: reading styles forces a style pass). */
   private colours: { ink: string; ground: string } | null = null;
+  /** The light and metal last handed to the worker. */
+  private lightSent = '';
 
   constructor() {
     const destroyRef = inject(DestroyRef);
@@ -147,8 +149,13 @@ export class StudyPlates {
     return this.colours;
   }
 
+  /** Sends the light and metal when they differ from the last sent (a repeat would reshade the held surface for nothing). */
   private sendLight(): void {
-    this.post({ kind: 'light', id: this.litRequested(), light: { azimuthDeg: this.azimuth(), elevationDeg: this.elevation() }, tint: this.tint() });
+    const light = { azimuthDeg: this.azimuth(), elevationDeg: this.elevation() };
+    const key = `${light.azimuthDeg} ${light.elevationDeg} ${this.tint()}`;
+    if (key === this.lightSent) return;
+    this.lightSent = key;
+    this.post({ kind: 'light', light, tint: this.tint() });
   }
 
   private post(request: PlateRequest, transfer: Transferable[] = []): void {

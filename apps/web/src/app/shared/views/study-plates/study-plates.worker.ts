@@ -4,19 +4,23 @@ import type { PlateReply, PlateRequest } from './plate-messages';
 
 /*
  * The line study's two plates, drawn off the page's thread into the OffscreenCanvases they were
- * handed: the flat one (ink lines at true scale, the groove's width) at once, then the lit one (the
- * engine's height field of the grooves, shaded as metal). A light or metal change only reshades the
- * lit plate. Messages that arrive while it works replace the waiting ones of their kind, so a slider
- * dragged fast paints only its newest position.
+ * handed: the flat one (ink lines at true scale, the groove's width) at once, then, after a frame,
+ * the lit one (the engine's height field of the grooves, shaded as metal). A light or metal change
+ * only reshades the lit plate. Messages that arrive while it works replace the waiting ones of their
+ * kind, so a slider dragged fast paints only its newest position.
  */
 type Surface = Extract<PlateRequest, { kind: 'surface' }>;
 let flat: OffscreenCanvas | null = null;
 let lit: OffscreenCanvas | null = null;
 let field: HeightField | null = null;
+/** The request the surface held is of. */
+let fieldId = 0;
 let light: SurfaceLight = { azimuthDeg: 60, elevationDeg: 35 };
 let tint: MetalTint = 'silver';
 let pendingSurface: Surface | null = null;
 let pendingLight: Extract<PlateRequest, { kind: 'light' }> | null = null;
+/** A study whose flat plate is drawn and whose lit surface is still to compute. */
+let pendingLit: Surface | null = null;
 let scheduled = false;
 
 addEventListener('message', (event: MessageEvent<PlateRequest>) => {
@@ -33,12 +37,23 @@ function schedule(): void {
   setTimeout(work, 0);
 }
 
+/**
+ * Schedules the next step after the worker's next frame: a canvas drawn in a worker reaches the page
+ * at that frame, which a task straight after would hold back (the flat plate would wait for the lit).
+ */
+function scheduleAfterFrame(): void {
+  if (scheduled) return;
+  scheduled = true;
+  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(work, 0));
+  else setTimeout(work, 16);
+}
+
+/** One step: the newest study's flat plate, else the lit plate's surface; a new light reshades the surface held. */
 function work(): void {
   scheduled = false;
-  let id = 0;
   const relit = pendingLight !== null;
   if (pendingLight) {
-    ({ light, tint, id } = pendingLight);
+    ({ light, tint } = pendingLight);
     pendingLight = null;
   }
   let fieldMs = 0;
@@ -46,22 +61,26 @@ function work(): void {
     const s = pendingSurface;
     pendingSurface = null;
     drawFlat(s);
-    if (pendingSurface) return schedule(); // overtaken while drawing: start on the newer one
-    // A draft: its surface would be computed only to be replaced by the final one (a new light still reshades the one held).
-    if (s.flatOnly && !relit) return;
-    if (!s.flatOnly) {
-      const started = performance.now();
-      field = computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx });
-      fieldMs = performance.now() - started;
-      id = Math.max(id, s.id);
-    }
+    // A draft leaves the lit plate alone: its surface would be computed only to be replaced by the final one.
+    if (!s.flatOnly) pendingLit = s;
+    if (pendingLit) scheduleAfterFrame();
+    if (!relit) return;
+  } else if (pendingLit && !relit) {
+    const s = pendingLit;
+    pendingLit = null;
+    const started = performance.now();
+    field = computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx });
+    fieldMs = performance.now() - started;
+    fieldId = s.id;
+  } else if (pendingLit) {
+    scheduleAfterFrame(); // reshade now; the surface waiting follows
   }
   if (!field || !lit) return;
   const started = performance.now();
   const rgba = shadeHeightField(field, light, tint);
   if (lit.width !== field.width || lit.height !== field.height) [lit.width, lit.height] = [field.width, field.height];
   lit.getContext('2d')?.putImageData(new ImageData(rgba as Uint8ClampedArray<ArrayBuffer>, field.width, field.height), 0, 0);
-  self.postMessage({ id, plate: 'lit', fieldMs, paintMs: performance.now() - started } satisfies PlateReply);
+  self.postMessage({ id: fieldId, plate: 'lit', fieldMs, paintMs: performance.now() - started } satisfies PlateReply);
 }
 
 /** The flat plate: each engraved line in ink, as wide as its groove (at least a hairline), at true scale. */
