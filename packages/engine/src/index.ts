@@ -29,7 +29,7 @@ export { SAFETY_CAUTIONS, SHORT_CAUTION, setUpReminders } from './cut-plan-notes
 export { type MaterialPreset, type CuttingFigures, MATERIAL_PRESETS, PRESET_CUTTER_DIAMETER_MM, cuttingFigures, withMaterialDefaults } from './materials';
 export { spindleRpm, spindleRpmFromSfm, sfmToMPerMin, feedPerMinute } from './spindle-speed';
 export { ENTRY_DECIMALS, formatLength, formatLengthRange, lengthFigure, LENGTH_DECIMALS, roundLength, stockFraction, STOCK_FRACTION, type LengthStyle } from './length-format';
-export { type SurfaceWindow, type HeightFieldInput, type HeightField, FACET_BINS, MIXED_PIXEL, computeHeightField } from './surface/height-field';
+export { type SurfaceWindow, type HeightFieldInput, type HeightField, FACET_BINS, MIXED_PIXEL, computeHeightField, sampleDepths } from './surface/height-field';
 export { type SurfaceLight, type MetalTint, METAL_TINTS, METAL_COLOURS, BLINN_PHONG, lightVector, blinnPhong, shadeHeightField, srgbByte } from './surface/surface-shading';
 export { type CandidateFigures, type CandidateResult, type BatchItem, type BatchOptions, computeBatch, computeCandidate, designFigures, batchTransferables } from './batch/sweep-batch';
 export { type PairPasses, pairPasses, passesFor } from './batch/pair-passes';

@@ -2,8 +2,8 @@ import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { computeLineStudy } from '../line-study';
 import type { Point } from '../types';
-import { computeHeightField, MIXED_PIXEL } from './height-field';
-import { BLINN_PHONG, METAL_COLOURS, shadeHeightField, srgbByte } from './surface-shading';
+import { computeHeightField, MIXED_PIXEL, sampleDepths } from './height-field';
+import { BLINN_PHONG, METAL_COLOURS, shadeHeightField, srgbByte, srgbByteByTable } from './surface-shading';
 
 const straight = (y: number, x0 = -5, x1 = 25): { points: Point[] } => ({ points: [[x0, y], [x1, y]] });
 
@@ -15,7 +15,7 @@ describe('the height field of engraved V-grooves', () => {
     for (let row = 0; row < field.height; row++) {
       const y = 2 - (row + 0.5) * 0.01;
       const expected = Math.max(0, 0.1 - Math.abs(y - 1));
-      expect(field.depth[row * cols + 7]).toBeCloseTo(expected, 6);
+      expect(sampleDepths(field)[row * cols + 7]).toBeCloseTo(expected, 6);
     }
   });
 
@@ -27,10 +27,11 @@ describe('the height field of engraved V-grooves', () => {
     const a = computeHeightField({ ...size, lines: [straight(1)] });
     const b = computeHeightField({ ...size, lines: [falling] });
     const both = computeHeightField({ ...size, lines: [straight(1), falling] });
+    const [da, db, dboth] = [sampleDepths(a), sampleDepths(b), sampleDepths(both)];
     let crossing = 0;
-    for (let i = 0; i < both.depth.length; i++) {
-      expect(both.depth[i]).toBeCloseTo(Math.max(a.depth[i], b.depth[i]), 6);
-      if (a.depth[i] > 0 && b.depth[i] > 0) crossing++;
+    for (let i = 0; i < dboth.length; i++) {
+      expect(dboth[i]).toBeCloseTo(Math.max(da[i], db[i]), 6);
+      if (da[i] > 0 && db[i] > 0) crossing++;
     }
     expect(crossing).toBeGreaterThan(20);
   });
@@ -43,7 +44,7 @@ describe('the height field of engraved V-grooves', () => {
     for (const y of [1.05, 1.1, 1.15]) {
       const row = Math.floor((1.5 - y) / 0.01);
       const yc = 1.5 - (row + 0.5) * 0.01;
-      expect(field.depth[row * 100 + col]).toBeCloseTo(Math.max(0, 0.2 - Math.hypot(0.005, yc - 1)), 5);
+      expect(sampleDepths(field)[row * 100 + col]).toBeCloseTo(Math.max(0, 0.2 - Math.hypot(0.005, yc - 1)), 5);
     }
   });
 
@@ -104,11 +105,32 @@ describe('Blinn–Phong shading of the field', () => {
 
   it('reshades without recomputing: the field is unchanged and another light gives other colours', () => {
     const field = computeHeightField({ lines: [straight(1)], depth: 0.1, vAngle: 90, window: { x0: 0, x1: 2, y0: 0, y1: 2 }, width: 40, height: 40 });
-    const before = Float32Array.from(field.depth);
+    const before = Float32Array.from(field.dist2);
     const one = shadeHeightField(field, { azimuthDeg: 90, elevationDeg: 40 }, 'silver');
     const two = shadeHeightField(field, { azimuthDeg: 270, elevationDeg: 40 }, 'silver');
-    expect(field.depth).toEqual(before);
+    expect(field.dist2).toEqual(before);
     expect(one).not.toEqual(two);
     expect(one.length).toBe(40 * 40 * 4);
+  });
+});
+
+describe('sRGB encoding by table', () => {
+  it('gives the bytes of the exact encoding (IEC 61966-2-1) for a million linear values and every step', () => {
+    let seed = 7;
+    const next = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+    const differing: number[] = [];
+    for (let i = 0; i < 1_000_000; i++) {
+      const v = i < 1000 ? i / 999 : next();
+      if (srgbByteByTable(v) !== srgbByte(v)) differing.push(v);
+    }
+    expect(differing).toEqual([]);
+    // Half-way between two steps of the byte, on either side of each.
+    for (let b = 0; b < 255; b++) {
+      for (const v of [(b + 0.45) / 255, (b + 0.55) / 255]) {
+        const linear = v <= 0.04045 ? v / 12.92 : ((v + 0.055) / 1.055) ** 2.4;
+        expect(srgbByteByTable(linear)).toBe(srgbByte(linear));
+      }
+    }
+    expect([srgbByteByTable(-1), srgbByteByTable(2), srgbByteByTable(Number.NaN)]).toEqual([0, 255, 0]);
   });
 });

@@ -60,8 +60,14 @@ export interface HeightField {
   window: SurfaceWindow;
   /** Slope of every groove wall, 1 / tan(α/2). */
   wallSlope: number;
-  /** Depth below the plate (mm, ≥ 0) of each sample: (width·s) × (height·s), row 0 at the top (y1). */
-  depth: Float32Array;
+  /** Depth of the cutter's tip below the plate (mm). */
+  tipDepth: number;
+  /**
+   * Squared distance (mm²) of each sample to its nearest line, R² where no groove reaches:
+   * (width·s) × (height·s), row 0 at the top (y1). Depths follow from it (`sampleDepths`); shading
+   * needs only the facets, so the square roots are left until a depth is asked for.
+   */
+  dist2: Float32Array;
   /** Per sample: 0 for the uncut plate, else 1 + the direction the wall rises towards, in FACET_BINS steps of a turn from +x. */
   facet: Uint16Array;
   /** Per pixel: the facet all its samples share, or MIXED_PIXEL. */
@@ -75,6 +81,8 @@ export interface HeightField {
 export const FACET_BINS = 4096;
 /** Samples of a pixel whose facings differ by at most this many bins (0.7°) shade as one: their colours differ by less than the eye tells. */
 const SAME_FACING_BINS = 8;
+/** Whole turns (in bins) plus a half, added before truncating a facing to round it: keeps it positive (a facing is within ±1.5 turns). */
+const ROUNDING = 8 * FACET_BINS + 0.5;
 /** `pixelFacet` of a pixel whose samples differ (an edge or a ridge runs through it). */
 export const MIXED_PIXEL = 0xffff;
 
@@ -90,37 +98,49 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
   const facet = new Uint16Array(cols * rows);
   const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
   if (reach > 0) for (const line of input.lines) cutLine(line.points, grid, window);
-  const pixels = finishField(dist2, facet, { width, height, s, depth: input.depth, slope });
-  return { width, height, supersample: s, window, wallSlope: slope, depth: dist2, facet, ...pixels };
+  const pixels = pixelFacets(facet, width, height, s);
+  return { width, height, supersample: s, window, wallSlope: slope, tipDepth: input.depth, dist2, facet, ...pixels };
+}
+
+/** Depth below the plate (mm, ≥ 0) of each sample of the field, in `dist2`'s order: d − dist·slope inside a groove, 0 on the plate. */
+export function sampleDepths(field: HeightField): Float32Array {
+  const { dist2, facet, tipDepth, wallSlope } = field;
+  const out = new Float32Array(dist2.length);
+  for (let k = 0; k < dist2.length; k++) out[k] = facet[k] === 0 ? 0 : Math.max(0, tipDepth - Math.sqrt(dist2[k]) * wallSlope);
+  return out;
 }
 
 /**
- * One pass over the pixels: distances become depths in place (d − dist·slope inside a groove, 0 on
- * the plate), and each pixel gets its facet when its samples share one, else MIXED_PIXEL with its
+ * One pass over the pixels: each gets its facet when its samples share one, else MIXED_PIXEL with its
  * samples' facets copied out in a row (so that reshading reads them in order). Samples facing within
  * SAME_FACING_BINS of the pixel's first count as the same facing (a wall curving gently across a pixel).
+ * Runs row by row of pixels over s rows of samples at once, reading each sample row in order.
  */
-function finishField(dist2: Float32Array, facet: Uint16Array, f: { width: number; height: number; s: number; depth: number; slope: number }): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
-  const { width, height, s, depth, slope } = f;
+function pixelFacets(facet: Uint16Array, width: number, height: number, s: number): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
   const cols = width * s;
   const pixelFacet = new Uint16Array(width * height);
   let mixedPixels = new Uint32Array(Math.max(1024, (width * height) >> 2)); // a quarter of the pixels is typical; grown when not
   let mixedFacets = new Uint16Array(mixedPixels.length * s * s);
   let count = 0;
-  for (let py = 0; py < height; py++) {
-    for (let px = 0; px < width; px++) {
-      const base = py * s * cols + px * s;
+  for (let py = 0, p = 0; py < height; py++) {
+    const rowBase = py * s * cols;
+    for (let px = 0; px < width; px++, p++) {
+      const base = rowBase + px * s;
       const first = facet[base];
-      let same = true;
-      for (let j = 0; j < s; j++) {
-        for (let i = 0, k = base + j * cols; i < s; i++, k++) {
+      let mixed = false;
+      if (s === 2) {
+        // The usual case written out: the other three samples against the first.
+        mixed = differs(facet[base + 1], first) || differs(facet[base + cols], first) || differs(facet[base + cols + 1], first);
+      } else for (let j = 0, k0 = base; j < s && !mixed; j++, k0 += cols) {
+        for (let k = k0, end = k0 + s; k < end; k++) {
           const fk = facet[k];
-          if (fk !== first && (fk === 0 || first === 0 || Math.abs(fk - first) > SAME_FACING_BINS)) same = false;
-          dist2[k] = fk === 0 ? 0 : Math.max(0, depth - Math.sqrt(dist2[k]) * slope);
+          if (differs(fk, first)) {
+            mixed = true;
+            break;
+          }
         }
       }
-      const p = py * width + px;
-      if (same) {
+      if (!mixed) {
         pixelFacet[p] = first;
         continue;
       }
@@ -131,11 +151,16 @@ function finishField(dist2: Float32Array, facet: Uint16Array, f: { width: number
       }
       mixedPixels[count] = p;
       let o = count * s * s;
-      for (let j = 0; j < s; j++) for (let i = 0, k = base + j * cols; i < s; i++) mixedFacets[o++] = facet[k + i];
+      for (let j = 0, k0 = base; j < s; j++, k0 += cols) for (let i = 0; i < s; i++) mixedFacets[o++] = facet[k0 + i];
       count++;
     }
   }
   return { pixelFacet, mixed: mixedPixels.slice(0, count), mixedFacets: mixedFacets.slice(0, count * s * s) };
+}
+
+/** Whether two samples' facets shade differently: uncut (0) against cut always, two facings beyond SAME_FACING_BINS apart. */
+function differs(a: number, b: number): boolean {
+  return a !== b && (a === 0 || b === 0 || a - b > SAME_FACING_BINS || b - a > SAME_FACING_BINS);
 }
 
 function grown<T extends Uint16Array | Uint32Array>(a: T, size: number): T {
@@ -206,6 +231,7 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, pre
   const spread = r * Math.abs(nx);
   const c0 = Math.max(0, Math.ceil((Math.min(ax, bx) - spread - g.x0) / g.dx - 0.5));
   const c1 = Math.min(g.cols - 1, Math.floor((Math.max(ax, bx) + spread - g.x0) / g.dx - 0.5));
+  const { cols, dist2, facet } = g;
   for (let c = c0; c <= c1; c++) {
     const x = g.x0 + (c + 0.5) * g.dx;
     const ex = x - ax;
@@ -235,13 +261,13 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, pre
     let facing = (start + turn * (ex * ux + top * uy)) * binsPerRad;
     const stepAcross = -g.dy * ny;
     const stepFacing = -g.dy * uy * turn * binsPerRad;
-    const dist2 = g.dist2;
-    for (let row = r0, p = r0 * g.cols + c; row <= r1; row++, p += g.cols) {
+    for (let row = r0, p = r0 * cols + c; row <= r1; row++, p += cols) {
       const d2 = across * across;
       if (d2 < dist2[p] && d2 < r2) {
         dist2[p] = d2;
         // FACET_BINS is a power of two: & wraps negative bins round too; the wall below the line faces half a turn away.
-        g.facet[p] = 1 + (Math.round(across >= 0 ? facing : facing + FACET_BINS / 2) & (FACET_BINS - 1));
+        // (v + ROUNDING) | 0 is Math.round(v) shifted by whole turns, which the mask removes.
+        facet[p] = 1 + (((across >= 0 ? facing : facing + FACET_BINS / 2) + ROUNDING) & (FACET_BINS - 1));
       }
       across += stepAcross;
       facing += stepFacing;

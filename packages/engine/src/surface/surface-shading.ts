@@ -60,27 +60,41 @@ export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: 
   const words = new Uint32Array(out.buffer);
   // The facets' colours as packed RGBA words (in the platform's byte order), one lookup a pixel.
   const packed = new Uint32Array(FACET_BINS + 1);
-  for (let f = 0; f <= FACET_BINS; f++) packed[f] = packWord(srgbByte(linear[3 * f]), srgbByte(linear[3 * f + 1]), srgbByte(linear[3 * f + 2]));
+  for (let f = 0; f <= FACET_BINS; f++) packed[f] = packWord(srgbByteByTable(linear[3 * f]), srgbByteByTable(linear[3 * f + 1]), srgbByteByTable(linear[3 * f + 2]));
   const mixedPixel = MIXED_PIXEL; // a local: an imported binding may be read through a getter in the loop
   for (let p = 0; p < pixelFacet.length; p++) {
     const f = pixelFacet[p];
     if (f !== mixedPixel) words[p] = packed[f];
   }
   const n = s * s;
+  // Each facet's linear colour pre-scaled by ENCODE_STEPS / n: a mixed pixel's samples then sum straight to a table index.
   const share = ENCODE_STEPS / n;
+  const scaled = new Float32Array(linear.length);
+  for (let c = 0; c < linear.length; c++) scaled[c] = linear[c] * share;
   const table = SRGB_TABLE;
   for (let m = 0, k = 0; m < mixed.length; m++) {
-    let r = 0;
-    let g = 0;
-    let b = 0;
-    for (const end = k + n; k < end; k++) {
-      const c = 3 * mixedFacets[k];
-      r += linear[c];
-      g += linear[c + 1];
-      b += linear[c + 2];
+    let r = 0.5; // Math.round of a non-negative sum, as (v + 0.5) | 0
+    let g = 0.5;
+    let b = 0.5;
+    if (n === 4) {
+      // The usual 2 × 2 written out.
+      const c0 = 3 * mixedFacets[k];
+      const c1 = 3 * mixedFacets[k + 1];
+      const c2 = 3 * mixedFacets[k + 2];
+      const c3 = 3 * mixedFacets[k + 3];
+      k += 4;
+      r += scaled[c0] + scaled[c1] + scaled[c2] + scaled[c3];
+      g += scaled[c0 + 1] + scaled[c1 + 1] + scaled[c2 + 1] + scaled[c3 + 1];
+      b += scaled[c0 + 2] + scaled[c1 + 2] + scaled[c2 + 2] + scaled[c3 + 2];
+    } else {
+      for (const end = k + n; k < end; k++) {
+        const c = 3 * mixedFacets[k];
+        r += scaled[c];
+        g += scaled[c + 1];
+        b += scaled[c + 2];
+      }
     }
-    // Math.round of a non-negative value, as (v + 0.5) | 0.
-    words[mixed[m]] = packWord(table[(r * share + 0.5) | 0], table[(g * share + 0.5) | 0], table[(b * share + 0.5) | 0]);
+    words[mixed[m]] = packWord(table[r | 0], table[g | 0], table[b | 0]);
   }
   return out;
 }
@@ -127,6 +141,25 @@ function facetColours(slope: number, light: SurfaceLight, tint: readonly [number
 /** Linear steps of the encoding table for averaged (edge) pixels: within a byte of srgbByte. */
 const ENCODE_STEPS = 8191;
 const SRGB_TABLE = Uint8ClampedArray.from({ length: ENCODE_STEPS + 1 }, (_, i) => srgbByte(i / ENCODE_STEPS));
+
+/** The linear value at which srgbByte steps from i to i + 1 (i = 0…254): the sRGB decoding of (i + ½)/255 (IEC 61966-2-1). */
+const SRGB_STEPS = Float64Array.from({ length: 255 }, (_, i) => {
+  const v = (i + 0.5) / 255;
+  return v <= 0.04045 ? v / 12.92 : ((v + 0.055) / 1.055) ** 2.4;
+});
+
+/**
+ * srgbByte without its power: the table's byte, moved to the step the value lies past. The facets'
+ * 3 × 4097 encodings were a quarter of a reshade; this gives the same bytes (spec: a million values).
+ */
+export function srgbByteByTable(linear: number): number {
+  if (!(linear > 0)) return 0;
+  if (linear >= 1) return 255;
+  let b = SRGB_TABLE[(linear * ENCODE_STEPS + 0.5) | 0];
+  while (b < 255 && linear >= SRGB_STEPS[b]) b++;
+  while (b > 0 && linear < SRGB_STEPS[b - 1]) b--;
+  return b;
+}
 
 /** sRGB encoding of a linear value (IEC 61966-2-1), clipped to 0…1, as a byte. */
 export function srgbByte(linear: number): number {
