@@ -1,9 +1,11 @@
 /*
  * Studio redraw benchmark, measured from outside in Debian's Chromium:
- *  - edit to redraw: 30 edits typed into the studio, from the input event to the frame after the last
- *    view (bar profile, flat and lit study, cut plan) changed, with the main-thread long tasks meanwhile;
- *  - remote edit: the same edits as seen by a second browser context on the same design, from the
- *    typing page's input event to the other page's field holding the value, and to its views redrawn.
+ *  - edit to redraw, one maker: 30 edits typed into the studio with no other page on the design, from
+ *    the input event to the frame after the last view (bar profile, flat and lit study, cut plan)
+ *    changed, with the main-thread long tasks meanwhile;
+ *  - two makers: 30 more edits with a second browser context on the same design (its redrawing shares
+ *    the machine's two cores): the typing page's edit to redraw, and the other page's field holding
+ *    the value and its views redrawn, from the typing page's input event and from the update's arrival.
  * It starts a real server on a fresh data directory with the demo data (WEB_DIST: the web build to
  * serve, default dist/web/browser). Run: node --import tsx apps/web/bench/studio-redraw-bench.ts
  */
@@ -40,6 +42,17 @@ const INSTRUMENT = `(() => {
       super(...args);
       this.addEventListener('message', (e) => {
         if (e.data instanceof ArrayBuffer && new Uint8Array(e.data)[0] === 0) bench.updates.push(now());
+      });
+    }
+  };
+  // The plates worker's own times (its replies carry them), for BENCH_LOG.
+  const NativeWorker = window.Worker;
+  window.Worker = class extends NativeWorker {
+    constructor(...args) {
+      super(...args);
+      this.addEventListener('message', (e) => {
+        const d = e.data;
+        if (window.benchLog && d && d.plate) bench.log.push([Math.round(now() - bench.typed), 0, d.plate + ' plate worker: field ' + Math.round(d.fieldMs) + ' ms, paint ' + Math.round(d.paintMs) + ' ms']);
       });
     }
   };
@@ -87,7 +100,27 @@ async function main(): Promise<void> {
   const server = await startServer();
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
   try {
-    const [editor, watcher] = await twoStudios(browser);
+    const [editor, watcher, url] = await twoStudios(browser);
+    const edit = (i: number): [string, string] => (i % 2 === 0 ? [LOBES, String(20 + ((i / 2) % 10))] : [AMPLITUDE, (1 + (i % 7) * 0.1).toFixed(1)]);
+
+    // One maker on the design: the other page is away, so the machine's two cores serve this page alone.
+    await watcher.goto('about:blank');
+    await settle(editor);
+    await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
+    const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
+    if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
+    const solo: number[] = [];
+    for (let i = 0; i < EDITS; i++) solo.push(await timeLocalEdit(editor, ...edit(i)));
+    const soloLongTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
+    if (profiler) await printProfile(profiler);
+    if (process.env.BENCH_TRACE) {
+      const trace = await browser.stopTracing();
+      if (process.env.BENCH_TRACE_FILE) fs.writeFileSync(process.env.BENCH_TRACE_FILE, trace);
+      printTrace(trace);
+    }
+
+    // Two makers: the same edits followed on a second page, which redraws too.
+    await openStudio(watcher, url);
     const local: number[] = [];
     const remoteField: number[] = [];
     const remoteViews: number[] = [];
@@ -95,11 +128,8 @@ async function main(): Promise<void> {
     const arrivedViews: number[] = [];
     await settle(editor, watcher);
     for (const page of [editor, watcher]) await page.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
-    const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
-    if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
     for (let i = 0; i < EDITS; i++) {
-      const [testId, value] = i % 2 === 0 ? [LOBES, String(20 + ((i / 2) % 10))] : [AMPLITUDE, (1 + (i % 7) * 0.1).toFixed(1)];
-      const t = await timeEdit(editor, watcher, testId, value);
+      const t = await timeEdit(editor, watcher, ...edit(i + 2)); // from edit(2): phase one's last amplitude is edit(1)'s, which would change nothing
       local.push(t.local);
       remoteField.push(t.remoteField);
       remoteViews.push(t.remoteViews);
@@ -108,25 +138,35 @@ async function main(): Promise<void> {
     }
     const watcherLongTasks = await watcher.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
     const longTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
-    if (profiler) await printProfile(profiler);
-    if (process.env.BENCH_TRACE) {
-      const trace = await browser.stopTracing();
-      if (process.env.BENCH_TRACE_FILE) fs.writeFileSync(process.env.BENCH_TRACE_FILE, trace);
-      printTrace(trace);
-    }
-    const row = (name: string, xs: number[]) => `${name.padEnd(34)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
+    const row = (name: string, xs: number[]) => `${name.padEnd(38)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
+    const tasks = (name: string, xs: number[]) => `${name.padEnd(38)} ${xs.length} (longest ${xs.length ? Math.max(...xs).toFixed(0) : 0} ms)`;
     console.log(`Studio redraw, ${EDITS} edits (lobes and amplitude alternately), Chromium ${browser.version()}, ${WEB_DIST}`);
-    console.log(row('edit to redraw (this page)', local));
-    console.log(`${'long tasks on this page'.padEnd(34)} ${longTasks.length} (longest ${longTasks.length ? Math.max(...longTasks).toFixed(0) : 0} ms)`);
-    console.log(row('remote edit to the field', remoteField));
-    console.log(row('remote edit to the views', remoteViews));
-    console.log(row('remote: arrived to the field', arrivedField));
-    console.log(row('remote: arrived to the views', arrivedViews));
-    console.log(`${'long tasks on the other page'.padEnd(34)} ${watcherLongTasks.length} (longest ${watcherLongTasks.length ? Math.max(...watcherLongTasks).toFixed(0) : 0} ms)`);
+    console.log('One maker on the design:');
+    console.log(row('  edit to redraw', solo));
+    console.log(tasks('  long tasks', soloLongTasks));
+    console.log('Two makers (a second page on the design, redrawing too):');
+    console.log(row('  edit to redraw (this page)', local));
+    console.log(tasks('  long tasks on this page', longTasks));
+    console.log(row('  remote edit to the field', remoteField));
+    console.log(row('  remote edit to the views', remoteViews));
+    console.log(row('  remote: arrived to the field', arrivedField));
+    console.log(row('  remote: arrived to the views', arrivedViews));
+    console.log(tasks('  long tasks on the other page', watcherLongTasks));
   } finally {
     await browser.close();
     server.kill('SIGTERM');
   }
+}
+
+/** Types `value` into the editor's field with no other page on the design; resolves with the ms from the input to the last view redrawn. */
+async function timeLocalEdit(editor: Page, testId: string, value: string): Promise<number> {
+  await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.log = []; });
+  await editor.getByTestId(testId).fill(value);
+  await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
+  await settle(editor);
+  const e = await editor.evaluate(() => (window as unknown as BenchWindow).bench);
+  if (process.env.BENCH_LOG) console.log(`${testId} = ${value}: ${[...new Set(e.log.map(([a, f, what]) => `${a}/${f} ${what}`))].join('; ')}`);
+  return e.drawn - e.typed;
 }
 
 /** Types `value` into the editor's field; resolves with the three times in ms. */
@@ -161,7 +201,7 @@ async function settle(...pages: Page[]): Promise<void> {
 }
 
 /** Signs in twice (two contexts, the same member), makes a board and a design, opens it in both. */
-async function twoStudios(browser: Browser): Promise<[Page, Page]> {
+async function twoStudios(browser: Browser): Promise<[Page, Page, string]> {
   const pages = await Promise.all([0, 1].map(async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     await context.addInitScript({ content: INSTRUMENT });
@@ -186,13 +226,16 @@ async function twoStudios(browser: Browser): Promise<[Page, Page]> {
   await editor.getByTestId('new-design-create').click();
   await editor.getByTestId('studio-title').waitFor();
   const url = editor.url();
-  await watcher.goto(url);
-  for (const page of pages) {
-    await page.locator('[data-testid="connection-status"][data-status="live"]').waitFor();
-    await page.getByTestId('study-lit').waitFor();
-    await page.waitForFunction((id) => /\d/.test(document.querySelector<HTMLInputElement>(`[data-testid="${id}"]`)?.value ?? ''), LOBES);
-  }
-  return [editor, watcher];
+  await Promise.all([openStudio(editor, url), openStudio(watcher, url)]);
+  return [editor, watcher, url];
+}
+
+/** Opens the design's studio at `url` and waits until it is live with its fields filled. */
+async function openStudio(page: Page, url: string): Promise<void> {
+  if (page.url() !== url) await page.goto(url);
+  await page.locator('[data-testid="connection-status"][data-status="live"]').waitFor();
+  await page.getByTestId('study-lit').waitFor();
+  await page.waitForFunction((id) => /\d/.test(document.querySelector<HTMLInputElement>(`[data-testid="${id}"]`)?.value ?? ''), LOBES);
 }
 
 /** With BENCH_PROFILE set: the editing page's JavaScript sampled by Chromium's profiler (CDP), to find the main-thread work. */
