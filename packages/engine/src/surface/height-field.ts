@@ -119,8 +119,9 @@ export function sampleDepths(field: HeightField): Float32Array {
 function pixelFacets(facet: Uint16Array, width: number, height: number, s: number): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
   const cols = width * s;
   const pixelFacet = new Uint16Array(width * height);
-  let mixedPixels = new Uint32Array(Math.max(1024, (width * height) >> 2)); // a quarter of the pixels is typical; grown when not
-  let mixedFacets = new Uint16Array(mixedPixels.length * s * s);
+  // Room for every pixel (up to half are mixed where walls curve across pixels), trimmed at the end.
+  const mixedPixels = new Uint32Array(width * height);
+  const mixedFacets = new Uint16Array(width * height * s * s);
   let count = 0;
   for (let py = 0, p = 0; py < height; py++) {
     const rowBase = py * s * cols;
@@ -145,10 +146,6 @@ function pixelFacets(facet: Uint16Array, width: number, height: number, s: numbe
         continue;
       }
       pixelFacet[p] = MIXED_PIXEL;
-      if (count === mixedPixels.length) {
-        mixedPixels = grown(mixedPixels, 2 * count);
-        mixedFacets = grown(mixedFacets, 2 * count * s * s);
-      }
       mixedPixels[count] = p;
       let o = count * s * s;
       for (let j = 0, k0 = base; j < s; j++, k0 += cols) for (let i = 0; i < s; i++) mixedFacets[o++] = facet[k0 + i];
@@ -163,11 +160,6 @@ function differs(a: number, b: number): boolean {
   return a !== b && (a === 0 || b === 0 || a - b > SAME_FACING_BINS || b - a > SAME_FACING_BINS);
 }
 
-function grown<T extends Uint16Array | Uint32Array>(a: T, size: number): T {
-  const b = new (a.constructor as new (n: number) => T)(size);
-  b.set(a);
-  return b;
-}
 
 interface Raster {
   cols: number;
@@ -215,7 +207,7 @@ function cutLine(points: readonly Point[], g: Raster, w: SurfaceWindow): void {
  * curves, and one facing per segment would show each chord as a flat step of light.
  */
 function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, prev: Point | undefined, after: Point | undefined): void {
-  const len = Math.hypot(bx - ax, by - ay);
+  const len = Math.sqrt((bx - ax) * (bx - ax) + (by - ay) * (by - ay));
   if (!(len > 0)) return;
   const ux = (bx - ax) / len;
   const uy = (by - ay) / len;
@@ -229,8 +221,8 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, pre
   const r = g.reach;
   const r2 = r * r;
   const spread = r * Math.abs(nx);
-  const c0 = Math.max(0, Math.ceil((Math.min(ax, bx) - spread - g.x0) / g.dx - 0.5));
-  const c1 = Math.min(g.cols - 1, Math.floor((Math.max(ax, bx) + spread - g.x0) / g.dx - 0.5));
+  const c0 = Math.min(g.cols, Math.max(0, Math.ceil((Math.min(ax, bx) - spread - g.x0) / g.dx - 0.5))) | 0;
+  const c1 = Math.max(-1, Math.min(g.cols - 1, Math.floor((Math.max(ax, bx) + spread - g.x0) / g.dx - 0.5))) | 0;
   const { cols, dist2, facet } = g;
   for (let c = c0; c <= c1; c++) {
     const x = g.x0 + (c + 0.5) * g.dx;
@@ -253,8 +245,9 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, pre
     ylo += ay;
     yhi += ay;
     if (!(ylo <= yhi)) continue;
-    const r0 = Math.max(0, Math.ceil((g.y1 - yhi) / g.dy - 0.5));
-    const r1 = Math.min(g.rows - 1, Math.floor((g.y1 - ylo) / g.dy - 0.5));
+    // Clamped into the raster, then made small integers (| 0): the row loop indexes the arrays with them.
+    const r0 = Math.min(g.rows, Math.max(0, Math.ceil((g.y1 - yhi) / g.dy - 0.5))) | 0;
+    const r1 = Math.max(-1, Math.min(g.rows - 1, Math.floor((g.y1 - ylo) / g.dy - 0.5))) | 0;
     // Across and the facing (in bins) are linear in the row: stepped, not recomputed.
     const top = g.y1 - (r0 + 0.5) * g.dy - ay;
     let across = ex * nx + top * ny;
@@ -282,60 +275,73 @@ function cutStrip(ax: number, ay: number, bx: number, by: number, g: Raster, pre
  */
 function cutVertex(vx: number, vy: number, prev: Point | undefined, next: Point | undefined, g: Raster): void {
   const r = g.reach;
-  let [bx0, bx1, by0, by1] = [vx - r, vx + r, vy - r, vy + r];
+  let bx0 = vx - r;
+  let bx1 = vx + r;
+  let by0 = vy - r;
+  let by1 = vy + r;
   if (prev && next) {
-    const box = sectorBox(vx - prev[0], vy - prev[1], next[0] - vx, next[1] - vy, r);
-    if (!box) return;
-    [bx0, bx1, by0, by1] = [vx + box[0], vx + box[1], vy + box[2], vy + box[3]];
+    if (!sectorBox(vx - prev[0], vy - prev[1], next[0] - vx, next[1] - vy, r)) return;
+    [bx0, bx1, by0, by1] = [vx + BOX[0], vx + BOX[1], vy + BOX[2], vy + BOX[3]];
   }
-  const c0 = Math.max(0, Math.ceil((bx0 - g.x0) / g.dx - 0.5));
-  const c1 = Math.min(g.cols - 1, Math.floor((bx1 - g.x0) / g.dx - 0.5));
-  const r0 = Math.max(0, Math.ceil((g.y1 - by1) / g.dy - 0.5));
-  const r1 = Math.min(g.rows - 1, Math.floor((g.y1 - by0) / g.dy - 0.5));
+  // Clamped into the raster and made small integers, as in cutStrip.
+  const c0 = Math.min(g.cols, Math.max(0, Math.ceil((bx0 - g.x0) / g.dx - 0.5))) | 0;
+  const c1 = Math.max(-1, Math.min(g.cols - 1, Math.floor((bx1 - g.x0) / g.dx - 0.5))) | 0;
+  const r0 = Math.min(g.rows, Math.max(0, Math.ceil((g.y1 - by1) / g.dy - 0.5))) | 0;
+  const r1 = Math.max(-1, Math.min(g.rows - 1, Math.floor((g.y1 - by0) / g.dy - 0.5))) | 0;
   const r2 = r * r;
+  const { cols, dist2, facet } = g;
   for (let row = r0; row <= r1; row++) {
     const ey = g.y1 - (row + 0.5) * g.dy - vy;
     for (let c = c0; c <= c1; c++) {
       const ex = g.x0 + (c + 0.5) * g.dx - vx;
       const d2 = ex * ex + ey * ey;
-      const p = row * g.cols + c;
-      if (d2 < g.dist2[p] && d2 < r2) {
-        g.dist2[p] = d2;
-        g.facet[p] = d2 > 0 ? facetOf(ex, ey) : g.facet[p];
+      const p = row * cols + c;
+      if (d2 < dist2[p] && d2 < r2) {
+        dist2[p] = d2;
+        if (d2 > 0) facet[p] = facetOf(ex, ey);
       }
     }
   }
 }
 
+/** sectorBox's answer (x0, x1, y0, y1 relative to the vertex): written here, not allocated, as it runs per vertex. */
+const BOX = new Float64Array(4);
+
 /**
- * Bounding box (relative to V) of the outer sector at a vertex where direction (ix, iy) turns into
- * (ox, oy), radius r: the arc between the two segments' normals on the outer side of the turn.
- * Undefined when the line goes straight on (both strips meet there).
+ * Bounding box (relative to V, into BOX) of the outer sector at a vertex where direction (ix, iy)
+ * turns into (ox, oy), radius r: the arc between the two segments' unit normals u and v on the outer
+ * side of the turn. False when the line goes straight on (both strips meet there). Without angles:
+ * the box holds V, r·u, r·v and r·e for each axis direction e on the arc, which is e = αu + βv with
+ * α, β ≥ 0, i.e. cross(u, e) and cross(e, v) of the sign of cross(u, v).
  */
-function sectorBox(ix: number, iy: number, ox: number, oy: number, r: number): [number, number, number, number] | undefined {
-  const li = Math.hypot(ix, iy);
-  const lo = Math.hypot(ox, oy);
-  if (!(li > 0) || !(lo > 0)) return [-r, r, -r, r];
+function sectorBox(ix: number, iy: number, ox: number, oy: number, r: number): boolean {
+  const li = Math.sqrt(ix * ix + iy * iy);
+  const lo = Math.sqrt(ox * ox + oy * oy);
   const cross = ix * oy - iy * ox;
-  const dot = ix * ox + iy * oy;
-  if (cross === 0) return dot > 0 ? undefined : [-r, r, -r, r];
-  // Turning left (cross > 0) the outer side is the right: normals (iy, −ix) and (oy, −ox).
-  const side = cross > 0 ? -1 : 1;
-  let a = Math.atan2((side * ix) / li, (-side * iy) / li);
-  let b = Math.atan2((side * ox) / lo, (-side * oy) / lo);
-  if (side > 0) [a, b] = [b, a]; // turning right the normals turn clockwise: the arc runs counter-clockwise from b to a
-  const sweep = (((b - a) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
-  const xs = [0, Math.cos(a), Math.cos(b)];
-  const ys = [0, Math.sin(a), Math.sin(b)];
-  for (let k = 0; k < 4; k++) {
-    const axis = (k * Math.PI) / 2;
-    const from = (((axis - a) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
-    if (from <= sweep) {
-      xs.push(Math.cos(axis));
-      ys.push(Math.sin(axis));
-    }
+  if (!(li > 0) || !(lo > 0) || (cross === 0 && ix * ox + iy * oy < 0)) {
+    // A repeated point or a reversal: all round.
+    [BOX[0], BOX[1], BOX[2], BOX[3]] = [-r, r, -r, r];
+    return true;
   }
-  return [r * Math.min(...xs), r * Math.max(...xs), r * Math.min(...ys), r * Math.max(...ys)];
+  if (cross === 0) return false;
+  // Turning left (cross > 0) the outer side is the right: normals (iy, −ix) and (oy, −ox); turning right, the left ones.
+  const side = cross > 0 ? 1 : -1;
+  const ux = (side * iy) / li;
+  const uy = (-side * ix) / li;
+  const vx = (side * oy) / lo;
+  const vy = (-side * ox) / lo;
+  const c = ux * vy - uy * vx;
+  // For each axis direction e: cross(u, e) and cross(e, v).
+  BOX[0] = onArc(uy, -vy, c) ? -r : r * Math.min(0, ux, vx); // e = (−1, 0)
+  BOX[1] = onArc(-uy, vy, c) ? r : r * Math.max(0, ux, vx); // e = (1, 0)
+  BOX[2] = onArc(-ux, vx, c) ? -r : r * Math.min(0, uy, vy); // e = (0, −1)
+  BOX[3] = onArc(ux, -vx, c) ? r : r * Math.max(0, uy, vy); // e = (0, 1)
+  return true;
+}
+
+/** Whether e lies on the arc from u to v, given cross(u, e), cross(e, v) and cross(u, v). */
+function onArc(ue: number, ev: number, uv: number): boolean {
+  return ue * uv >= 0 && ev * uv >= 0;
 }
 
 /** Angle of the left normal of the segment P→Q (radians). */
