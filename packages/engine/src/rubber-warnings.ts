@@ -40,8 +40,8 @@ interface Region {
 export function rubberWarnings(input: RubberWarningInput): EngineWarning[] {
   const { s, contact } = input.reading;
   const n = s.length;
-  const length = input.period === undefined ? n : 2 * n; // a periodic sequence is scanned twice round
-  const ring = (i: number) => (input.period === undefined ? i : ((i % n) + n) % n);
+  const periodic = input.period !== undefined;
+  const length = periodic ? 2 * n : n; // a periodic sequence is scanned twice round
   const c = new Int32Array(length);
   for (let i = 0; i < length; i++) c[i] = i + contact[i < n ? i : i - n];
   let lo = Infinity;
@@ -51,7 +51,8 @@ export function rubberWarnings(input: RubberWarningInput): EngineWarning[] {
     hi = Math.max(hi, s[i]);
   }
   const threshold = Math.max(1e-4 / input.leverRatio, 1e-3 * (hi - lo));
-  const geometry = { ...input, ring, c };
+  // A plain record, not the input spread with a closure: one shape for every call keeps the scans below optimised.
+  const geometry: Geometry = { radii: input.radii, pad: input.pad, s, rubber: input.rubber, dTheta: input.dTheta, n, periodic, c };
   const bridges = bridgedValleys(geometry, length).filter((r) => r.amount > threshold);
   const cusps = input.rubber.shape === 'round' && input.rubber.radius > 0 ? roundedCusps(geometry, length, input.rubber.radius) : [];
   return [
@@ -60,7 +61,22 @@ export function rubberWarnings(input: RubberWarningInput): EngineWarning[] {
   ];
 }
 
-type Geometry = RubberWarningInput & { ring: (i: number) => number; c: Int32Array };
+/** The readings and the rosette they read; c[i] is the profile point reading i rests on (indices run on past n when periodic). */
+interface Geometry {
+  radii: Float64Array;
+  pad: number;
+  s: Float64Array;
+  rubber: Rubber;
+  dTheta: number;
+  n: number;
+  periodic: boolean;
+  c: Int32Array;
+}
+
+/** Index i of a periodic sequence of n taken back into 0 … n−1; unchanged otherwise. */
+function ring(g: Geometry, i: number): number {
+  return g.periodic ? ((i % g.n) + g.n) % g.n : i;
+}
 
 function bridgedValleys(g: Geometry, length: number): Region[] {
   const regions: Region[] = [];
@@ -77,8 +93,8 @@ function bridgedValleys(g: Geometry, length: number): Region[] {
 
 /** How far profile point j stays from the rubber resting at reading i (rosette length units). */
 function gapTo(g: Geometry, j: number, i: number): number {
-  const r = g.radii[g.pad + g.ring(j)];
-  const si = g.reading.s[g.ring(i)];
+  const r = g.radii[g.pad + ring(g, j)];
+  const si = g.s[ring(g, i)];
   const a = (j - i) * g.dTheta;
   if (g.rubber.shape === 'flat') return si - r * Math.cos(a);
   return Math.hypot(r * Math.cos(a) - si, r * Math.sin(a)) - g.rubber.radius;
@@ -110,8 +126,8 @@ function roundedCusps(g: Geometry, length: number, rho: number): Region[] {
 
 /** Direction (rad) of the outward normal of the sampled profile's edge from point j to j + 1. */
 function edgeNormal(g: Geometry, j: number): number {
-  const r0 = g.radii[g.pad + g.ring(j)];
-  const r1 = g.radii[g.pad + g.ring(j + 1)];
+  const r0 = g.radii[g.pad + ring(g, j)];
+  const r1 = g.radii[g.pad + ring(g, j + 1)];
   const tx = r1 * Math.cos(g.dTheta) - r0;
   const ty = r1 * Math.sin(g.dTheta);
   return j * g.dTheta + Math.atan2(-tx, ty);
