@@ -1,6 +1,7 @@
 import type { Units } from '@barwright/contracts';
 import { graphCurvatureRadius } from './curvature';
 import { formatLength, formatLengthRange } from './length-format';
+import { extremesOf, type PathRepeat } from './path-repeat';
 import type { EngineWarning } from './types';
 
 export interface DetailLossInput {
@@ -17,6 +18,8 @@ export interface DetailLossInput {
   period: number;
   /** Units the messages are written in (the design file's); `at` and `amount` stay in mm. */
   units: Units;
+  /** Where the paths repeat a period bit for bit (a tiled bar): the path's top is then read over one repeat. */
+  repeat?: PathRepeat;
 }
 
 interface Zone {
@@ -41,8 +44,7 @@ interface Zone {
  */
 export function detailLossWarnings(input: DetailLossInput): EngineWarning[] {
   const { cutter: y, step, from, to } = input;
-  let top = -Infinity;
-  for (let i = from; i <= to; i++) top = Math.max(top, y[i]);
+  const top = extremesOf(y, input.repeat, from, to + 1).high;
   const threshold = Math.max(1e-4, 1e-3 * top);
   const zones = lossZones(input, threshold);
   // Zones repeat every period: keep those starting in one period, counted from a quiet node so that

@@ -3,6 +3,7 @@ import { barEdge, cutterHeights, invertHeights } from './bar';
 import { nodeX, type BarGrid } from './bar-grid';
 import { cutterPlacement, placeCutter, placementMargin } from './cutter-placement';
 import { followerAt, followerPath } from './follower';
+import type { PathRepeat } from './path-repeat';
 import type { Companion } from './profile';
 import { rubberAt, trackRubber } from './rubber-track';
 import type { EngineWarning, Point } from './types';
@@ -19,6 +20,8 @@ export interface BarPaths {
   trackWarnings: EngineWarning[];
   onePeriod: Float64Array;
   leads: { leadIn?: Point[]; leadOut?: Point[] };
+  /** Where the three paths repeat a period bit for bit (a tiled bar), for figures that need read only one. */
+  repeat?: PathRepeat;
 }
 
 /** The paths over the whole bar: the rubber read at every node from a cutter radius before the start to one past the end. */

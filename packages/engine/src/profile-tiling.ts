@@ -79,7 +79,9 @@ export function tiledBarPaths(d: Design, grid: BarGrid, companion: Companion | u
   followerOverBar(bar, x, grid, rf, offGrid, follower);
 
   const leads = companion === undefined ? leadPaths(cutterAt, cutPad, grid, rc) : {};
-  return { x, cutter, bar, follower, trackWarnings: track.warnings, onePeriod: sPeriod, leads };
+  // Between the end stretches every path is the period copied (the cutter's end trims the edge within tailWidth of the end).
+  const repeat = { every: m, from: headWidth, to: nodes - tailWidth };
+  return { x, cutter, bar, follower, trackWarnings: track.warnings, onePeriod: sPeriod, leads, repeat };
 }
 
 /** Fills out[0 … n) with the period repeated from its first value. */

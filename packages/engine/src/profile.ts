@@ -5,7 +5,8 @@ import { crestCurvature, type CrestCurvature } from './crest-curvature';
 import { detailLossWarnings } from './detail-loss';
 import { followerRadiusWarnings } from './engraving-check';
 import { assertFinite, assertFiniteWarnings } from './finite-output';
-import { fullBarPaths, maxOf, minOf } from './profile-paths';
+import { extremesOf, stretchesToRead, type PathRepeat } from './path-repeat';
+import { fullBarPaths } from './profile-paths';
 import { tiledBarPaths } from './profile-tiling';
 import type { EngineWarning, Point, Profile } from './types';
 import { toMm } from './units';
@@ -136,22 +137,25 @@ export function barSamples(design: Design, options: ProfileOptions, tile: boolea
   const rc = d.cutter.diameter / 2;
   const rf = d.follower.radius;
   const paths = (tile && tiledBarPaths(d, grid, options.companion, design.units)) || fullBarPaths(d, grid, options.companion, design.units);
-  const { x, cutter, bar, follower } = paths;
+  const { x, cutter, bar, follower, repeat } = paths;
   const opposite = options.companion === 'opposite';
   // The loss analysis reads the follower up to |rf − rc| to the side: keep it clear of the bar's ends.
   const from = Math.min(lastNode, Math.ceil((rf + Math.abs(rf - rc)) / h) + 2);
   const to = Math.max(from, lastNode - from);
   const loss = detailLossWarnings({
     ...{ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to },
-    ...{ period: grid.period, units: design.units },
+    ...{ period: grid.period, units: design.units, repeat },
   });
   const coarse = coarseSamplingWarning(d, grid, design.units, options.step);
   const engraving = followerRadiusWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period, units: design.units });
-  const summary = { height: maxOf(cutter) - minOf(cutter), period: grid.period, periodic: lastNode >= grid.perPeriod, length: grid.length, units: design.units };
+  const { low, high } = extremesOf(cutter, repeat);
+  const summary = { height: high - low, period: grid.period, periodic: lastNode >= grid.perPeriod, length: grid.length, units: design.units };
   const warnings = summarizeWarnings([...(coarse ? [coarse] : []), ...paths.trackWarnings, ...loss, ...engraving], summary);
-  if (opposite) turnOver(cutter, bar, follower);
+  if (opposite) turnOver(cutter, bar, follower, high);
   const crest = crestCurvature({ design: d, s: paths.onePeriod, dTheta: grid.dTheta, step: h, inverted: options.companion !== undefined && options.companion !== 'counter-phase' });
-  for (const [what, values] of [['x', x], ['cutter path', cutter], ['bar edge', bar], ['follower path', follower]] as const) assertFinite(what, values);
+  // The points rise by i·h, so they are finite when their ends are; a path that repeats is finite when one repeat is.
+  for (const i of [0, lastNode, x.length - 1]) assertFinite('x', x, i, i + 1);
+  for (const [what, values] of [['cutter path', cutter], ['bar edge', bar], ['follower path', follower]] as const) assertFinitePath(what, values, repeat);
   assertFiniteWarnings(warnings); // the smallest crest radius may be Infinity: a straight bar
   return { grid, x, cutter, bar, follower, minRadiusOfCurvature: crest.radius, crest, warnings, ...paths.leads };
 }
@@ -160,7 +164,11 @@ export function barSamples(design: Design, options: ProfileOptions, tile: boolea
  * The opposite blank, from the inverted companion (the same bar turned over): mirrored back, its
  * edge is the upper envelope of the cutter disc and its follower rides under it (in place).
  */
-function turnOver(cutter: Float64Array, bar: Float64Array, follower: Float64Array): void {
-  const yMax = maxOf(cutter);
+function turnOver(cutter: Float64Array, bar: Float64Array, follower: Float64Array, yMax: number): void {
   for (const y of [cutter, bar, follower]) for (let i = 0; i < y.length; i++) y[i] = yMax - y[i];
+}
+
+/** assertFinite over a path, reading one repeat of a repeated run. */
+function assertFinitePath(what: string, values: Float64Array, repeat: PathRepeat | undefined): void {
+  for (const [start, end] of stretchesToRead(0, values.length, repeat)) assertFinite(what, values, start, end);
 }
