@@ -51,7 +51,8 @@ export function readRubber(radii: Float64Array, pad: number, rubber: Rubber, dTh
   const touch = rubber.shape === 'round' ? roundTouch(rubber.radius) : flatTouch(rubber.width / 2);
   const blocks = blockBounds(radii, BLOCK);
   const supers = blockBounds(radii, SUPER);
-  const scanner: Scanner = { radii, blocks, supers, reach, cos, sin, lift: liftTable(rubber, rMin, sin), sinFrom: leastFrom(sin), touch, rho2: rubber.shape === 'round' ? rubber.radius * rubber.radius : -1 };
+  const sinFrom = leastFrom(sin);
+  const scanner: Scanner = { radii, blocks, supers, reach, cos, sin, lift: liftTable(rubber, rMin, sinFrom), sinFrom, touch, rho2: rubber.shape === 'round' ? rubber.radius * rubber.radius : -1 };
   let previous = 0;
   for (let i = 0; i < count; i++) {
     const centre = pad + i;
@@ -88,10 +89,13 @@ function blockBounds(radii: Float64Array, size: number): BlockBounds {
   return { high, low };
 }
 
-/** The most a point at offset k can add to r·cos: √(ρ² − (r_min·sin)²) for a round rubber (r ≥ r_min), 0 for a flat face. */
-function liftTable(rubber: Rubber, rMin: number, sin: Float64Array): Float64Array {
-  const lift = new Float64Array(sin.length);
-  if (rubber.shape === 'round') for (let k = 0; k < sin.length; k++) lift[k] = Math.sqrt(Math.max(0, rubber.radius ** 2 - (rMin * sin[k]) ** 2));
+/**
+ * The most a point at offset k or beyond can add to r·cos: √(ρ² − (r_min·least sin)²) for a round
+ * rubber (r ≥ r_min), 0 for a flat face.
+ */
+function liftTable(rubber: Rubber, rMin: number, sinFrom: Float64Array): Float64Array {
+  const lift = new Float64Array(sinFrom.length);
+  if (rubber.shape === 'round') for (let k = 0; k < sinFrom.length; k++) lift[k] = Math.sqrt(Math.max(0, rubber.radius ** 2 - (rMin * sinFrom[k]) ** 2));
   return lift;
 }
 
@@ -119,29 +123,31 @@ interface Scanner {
 }
 
 /**
- * The most a block can give from offset k on (k its nearest offset to the centre), never below the
- * value of any of its points: its largest radius times cos k (its smallest past a quarter turn,
- * where the cosine is negative), plus for a round rubber √(ρ² − (its smallest radius·least sin)²),
- * or −∞ when even that is out of reach. These are Touch.at's operations on bounds of their
- * arguments, each monotone in floating point too, so a block whose bound does not beat the best
- * cannot hold a winner: the scan finds what looking at every point finds. The block's smallest
- * radius keeps the bound within a hair of its real best (the global r_min left it up to 0.03 mm
- * high on the example rosette, and most blocks in reach were read sample by sample).
+ * Whether a block can beat the best from offset k on (k its nearest offset to the centre). Its most
+ * is at most its largest radius times cos k (its smallest past a quarter turn, where the cosine is
+ * negative) plus the lift at k; for a round rubber, at most the same plus
+ * √(ρ² − (its smallest radius·least sin)²), or nothing when even that is out of reach. These are
+ * Touch.at's operations on bounds of their arguments, each monotone in floating point too, so a
+ * block that cannot beat the best holds no winner: the scan finds what looking at every point
+ * finds. The cheap bound (the rosette's r_min) clears the blocks far from the contact; the block's
+ * own smallest radius, near it (r_min left the bound up to 0.03 mm high on the example rosette,
+ * and most blocks in reach were read sample by sample).
  */
-function blockBound(sc: Scanner, bounds: BlockBounds, b: number, k: number): number {
+function canBeat(sc: Scanner, bounds: BlockBounds, b: number, k: number, best: number): boolean {
   const c = sc.cos[k];
   const along = (c >= 0 ? bounds.high[b] : bounds.low[b]) * c;
-  if (sc.rho2 < 0) return along;
+  if (along + sc.lift[k] <= best) return false;
+  if (sc.rho2 < 0) return true;
   const q = Math.max(0, bounds.low[b]) * sc.sinFrom[k];
   const d = sc.rho2 - q * q;
-  return d >= 0 ? along + Math.sqrt(d) : -Infinity;
+  return d >= 0 && along + Math.sqrt(d) > best;
 }
 
 /**
  * Offset of the point the rubber rests on, scanning outward on each side from a first guess. A point can win only if
- * r·cos + lift[k] beats the best so far (the root is skipped otherwise), and a whole block only if its
- * bound does (blockBound): a wide rubber on a finely sampled rosette looks at its few candidate
- * crests, not at every sample within reach.
+ * r·cos + lift[k] beats the best so far (the root is skipped otherwise), and a whole block only if
+ * canBeat says so: a wide rubber on a finely sampled rosette looks at its few candidate crests, not
+ * at every sample within reach.
  */
 function scan(sc: Scanner, centre: number, guess: number): number {
   const { radii, reach, cos, sin, lift, touch } = sc;
@@ -152,15 +158,17 @@ function scan(sc: Scanner, centre: number, guess: number): number {
   if (atGuess > best) [best, bestK] = [atGuess, guess];
   for (let dir = 1; dir >= -1; dir -= 2) {
     let k = 1;
+    let open = -1; // the super-block last found able to beat the best: its blocks are tested one by one
     while (k <= reach) {
       const sb = ((centre + dir * k) / SUPER) | 0;
-      if (blockBound(sc, sc.supers, sb, k) <= best) {
+      if (sb !== open && !canBeat(sc, sc.supers, sb, k, best)) {
         k = Math.min(reach, dir > 0 ? (sb + 1) * SUPER - 1 - centre : centre - sb * SUPER) + 1;
         continue;
       }
+      open = sb;
       const b = ((centre + dir * k) / BLOCK) | 0;
       const kEnd = Math.min(reach, dir > 0 ? (b + 1) * BLOCK - 1 - centre : centre - b * BLOCK);
-      if (blockBound(sc, sc.blocks, b, k) <= best) {
+      if (!canBeat(sc, sc.blocks, b, k, best)) {
         k = kEnd + 1;
         continue;
       }
