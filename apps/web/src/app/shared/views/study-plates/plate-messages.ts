@@ -2,11 +2,11 @@ import type { MetalTint, SurfaceLight, SurfaceWindow } from '@barwright/engine';
 
 /** Page → plate worker. */
 export type PlateRequest =
-  /** The two canvases to paint, handed over once (OffscreenCanvas). */
-  | { kind: 'canvases'; flat: OffscreenCanvas; lit: OffscreenCanvas }
+  /** The canvas this worker paints, handed over once (OffscreenCanvas): the flat plate's or the lit one's. */
+  | { kind: 'canvas'; plate: 'flat' | 'lit'; canvas: OffscreenCanvas }
   /**
    * A new study or window: its grooves (x, y pairs, mm), the window and its size in device pixels, and
-   * the flat plate's ink, ground and least stroke (device px). Draws the flat plate, then computes the lit one.
+   * the flat plate's ink, ground and least stroke (device px). The flat worker draws its plate, the lit one computes its surface.
    */
   | {
       kind: 'surface';
@@ -24,7 +24,7 @@ export type PlateRequest =
       /** A draft (the studio's quick preview): the flat plate only; the lit one keeps its surface until the study it was asked for comes. */
       flatOnly?: boolean;
     }
-  /** A new light or metal: reshades the lit plate held, without computing its surface again. */
+  /** A new light or metal (to the lit worker): reshades the surface held, without computing it again. */
   | { kind: 'light'; light: SurfaceLight; tint: MetalTint };
 
 /** Plate worker → page: request `id` is on the canvas named (a reshade names the study its surface is of); `fieldMs` is 0 for a reshade. */

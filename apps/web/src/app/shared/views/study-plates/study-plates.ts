@@ -14,7 +14,7 @@ const HAIRLINE_PX = 1;
 /**
  * The line study's two plates over one window at true scale: flat (ink lines as wide as the grooves)
  * and lit (the engine's height field of the grooves, shaded as polished metal under a light you move,
- * in the metal you choose). Both are drawn in a worker on OffscreenCanvases, so the page's thread
+ * in the metal you choose). Each is drawn in a worker of its own on an OffscreenCanvas, so the page's thread
  * only hands over the lines; moving the light reshades without computing the surface again.
  */
 @Component({
@@ -57,7 +57,8 @@ export class StudyPlates {
   protected readonly frame = computed(() => plateFrame(this.study(), this.window(), this.cssWidth()));
   protected readonly shownLines = computed(() => (this.frame()?.cropped ? 'the middle lines of the study' : 'every line of the study'));
 
-  private worker: Worker | null = null;
+  /** A worker per plate: the lit surface is computed while the flat plate is drawn. */
+  private workers: PlateWorkers | null = null;
   private nextId = 0;
   /** The flat plate's ink and ground as the page resolves them (read once, and again when the theme changes: reading styles forces a style pass). */
   private colours: { ink: string; ground: string } | null = null;
@@ -67,15 +68,17 @@ export class StudyPlates {
   constructor() {
     const destroyRef = inject(DestroyRef);
     afterNextRender(() => {
-      this.worker = startWorker(this.flatCanvas().nativeElement, this.litCanvas().nativeElement);
-      if (!this.worker) {
+      this.workers = startWorkers(this.flatCanvas().nativeElement, this.litCanvas().nativeElement);
+      if (!this.workers) {
         this.supported.set(false);
         return;
       }
-      this.worker.addEventListener('message', (event: MessageEvent<PlateReply>) => {
-        const reply = event.data;
-        (reply.plate === 'flat' ? this.flatShown : this.litShown).set(reply.id);
-      });
+      for (const worker of Object.values(this.workers)) {
+        worker.addEventListener('message', (event: MessageEvent<PlateReply>) => {
+          const reply = event.data;
+          (reply.plate === 'flat' ? this.flatShown : this.litShown).set(reply.id);
+        });
+      }
       const observer = new ResizeObserver(([entry]) => this.cssWidth.set(Math.floor(entry.contentRect.width)));
       observer.observe(this.flatCanvas().nativeElement.parentElement!);
       // The ground toggle (light or dark) changes a class or attribute high up: read the colours again, redraw.
@@ -89,7 +92,10 @@ export class StudyPlates {
         theme.disconnect();
       });
     });
-    destroyRef.onDestroy(() => this.worker?.terminate());
+    destroyRef.onDestroy(() => {
+      this.workers?.flat.terminate();
+      this.workers?.lit.terminate();
+    });
     // A new study or window: new plates (the light goes first, so the first lit paint is right).
     effect(() => {
       const frame = this.frame();
@@ -106,13 +112,16 @@ export class StudyPlates {
         const flatOnly = this.draft();
         this.requested.set(id);
         if (!flatOnly) this.litRequested.set(id);
-        this.post({
+        const request: PlateRequest = {
           kind: 'surface', id, lines, width: study.width, depth: study.depth, vAngle: study.vAngle,
           window: { x0: frame.x0, x1: frame.x1, y0: frame.y0, y1: frame.y1 },
           widthPx: Math.round(frame.widthCss * ratio), heightPx: Math.round(frame.heightCss * ratio),
           ...colours,
           hairlinePx: HAIRLINE_PX * ratio, flatOnly,
-        }, lines.map((l) => l.buffer as ArrayBuffer));
+        };
+        // The flat worker gets a copy of the lines (tens of kB); the lit one takes them over.
+        this.workers?.flat.postMessage(request);
+        this.workers?.lit.postMessage(request, lines.map((l) => l.buffer as ArrayBuffer));
       });
     });
     effect(() => {
@@ -155,23 +164,30 @@ export class StudyPlates {
     const key = `${light.azimuthDeg} ${light.elevationDeg} ${this.tint()}`;
     if (key === this.lightSent) return;
     this.lightSent = key;
-    this.post({ kind: 'light', light, tint: this.tint() });
-  }
-
-  private post(request: PlateRequest, transfer: Transferable[] = []): void {
-    this.worker?.postMessage(request, transfer);
+    this.workers?.lit.postMessage({ kind: 'light', light, tint: this.tint() } satisfies PlateRequest);
   }
 }
 
-/** The plates' worker, holding both canvases; null where a browser has no OffscreenCanvas or module workers. */
-function startWorker(flat: HTMLCanvasElement, lit: HTMLCanvasElement): Worker | null {
+interface PlateWorkers {
+  flat: Worker;
+  lit: Worker;
+}
+
+/** The plates' workers, each holding its canvas; null where a browser has no OffscreenCanvas or module workers. */
+function startWorkers(flat: HTMLCanvasElement, lit: HTMLCanvasElement): PlateWorkers | null {
   if (typeof Worker === 'undefined' || typeof flat.transferControlToOffscreen !== 'function') return null;
+  const started: Worker[] = [];
   try {
-    const worker = new Worker(new URL('./study-plates.worker', import.meta.url), { type: 'module', name: 'study-plates' });
-    const [f, l] = [flat.transferControlToOffscreen(), lit.transferControlToOffscreen()];
-    worker.postMessage({ kind: 'canvases', flat: f, lit: l } satisfies PlateRequest, [f, l]);
-    return worker;
+    const start = (plate: 'flat' | 'lit', element: HTMLCanvasElement): Worker => {
+      const worker = new Worker(new URL('./study-plates.worker', import.meta.url), { type: 'module', name: `study-plates-${plate}` });
+      started.push(worker);
+      const canvas = element.transferControlToOffscreen();
+      worker.postMessage({ kind: 'canvas', plate, canvas } satisfies PlateRequest, [canvas]);
+      return worker;
+    };
+    return { flat: start('flat', flat), lit: start('lit', lit) };
   } catch {
+    for (const worker of started) worker.terminate();
     return null;
   }
 }

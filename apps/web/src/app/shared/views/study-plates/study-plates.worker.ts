@@ -3,15 +3,16 @@ import { computeHeightField, shadeHeightField, type HeightField, type MetalTint,
 import type { PlateReply, PlateRequest } from './plate-messages';
 
 /*
- * The line study's two plates, drawn off the page's thread into the OffscreenCanvases they were
- * handed: the flat one (ink lines at true scale, the groove's width) at once, then, after a frame,
- * the lit one (the engine's height field of the grooves, shaded as metal). A light or metal change
- * only reshades the lit plate. Messages that arrive while it works replace the waiting ones of their
- * kind, so a slider dragged fast paints only its newest position.
+ * One plate of the line study, drawn off the page's thread into the OffscreenCanvas handed over: the
+ * flat plate (ink lines at true scale, the groove's width) or the lit one (the engine's height field
+ * of the grooves, shaded as metal). The page runs a worker per plate, so the lit surface is computed
+ * while the flat plate is drawn, on the machine's other core. A light or metal change only reshades
+ * the lit plate. Messages that arrive while it works replace the waiting ones of their kind, so a
+ * slider dragged fast paints only its newest position.
  */
 type Surface = Extract<PlateRequest, { kind: 'surface' }>;
-let flat: OffscreenCanvas | null = null;
-let lit: OffscreenCanvas | null = null;
+let plate: 'flat' | 'lit' = 'flat';
+let canvas: OffscreenCanvas | null = null;
 let field: HeightField | null = null;
 /** The request the surface held is of. */
 let fieldId = 0;
@@ -19,13 +20,11 @@ let light: SurfaceLight = { azimuthDeg: 60, elevationDeg: 35 };
 let tint: MetalTint = 'silver';
 let pendingSurface: Surface | null = null;
 let pendingLight: Extract<PlateRequest, { kind: 'light' }> | null = null;
-/** A study whose flat plate is drawn and whose lit surface is still to compute. */
-let pendingLit: Surface | null = null;
 let scheduled = false;
 
 addEventListener('message', (event: MessageEvent<PlateRequest>) => {
   const request = event.data;
-  if (request.kind === 'canvases') ({ flat, lit } = request);
+  if (request.kind === 'canvas') ({ plate, canvas } = request);
   else if (request.kind === 'surface') pendingSurface = request;
   else pendingLight = request;
   schedule();
@@ -37,55 +36,39 @@ function schedule(): void {
   setTimeout(work, 0);
 }
 
-/**
- * Schedules the next step after the worker's next frame: a canvas drawn in a worker reaches the page
- * at that frame, which a task straight after would hold back (the flat plate would wait for the lit).
- */
-function scheduleAfterFrame(): void {
-  if (scheduled) return;
-  scheduled = true;
-  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(work, 0));
-  else setTimeout(work, 16);
-}
-
-/** One step: the newest study's flat plate, else the lit plate's surface; a new light reshades the surface held. */
+/** One step: the newest study drawn on this worker's plate; on the lit plate, a new light reshades the surface held. */
 function work(): void {
   scheduled = false;
+  const surface = pendingSurface;
+  pendingSurface = null;
+  if (!canvas) return;
+  if (plate === 'flat') {
+    if (surface) drawFlat(surface, canvas);
+    return;
+  }
   const relit = pendingLight !== null;
   if (pendingLight) {
     ({ light, tint } = pendingLight);
     pendingLight = null;
   }
   let fieldMs = 0;
-  if (pendingSurface) {
-    const s = pendingSurface;
-    pendingSurface = null;
-    drawFlat(s);
-    // A draft leaves the lit plate alone: its surface would be computed only to be replaced by the final one.
-    if (!s.flatOnly) pendingLit = s;
-    if (pendingLit) scheduleAfterFrame();
-    if (!relit) return;
-  } else if (pendingLit && !relit) {
-    const s = pendingLit;
-    pendingLit = null;
+  // A draft leaves the lit plate alone: its surface would be computed only to be replaced by the final one.
+  if (surface && !surface.flatOnly) {
     const started = performance.now();
-    field = computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx });
+    field = computeHeightField({ lines: surface.lines.map(toPoints), depth: surface.depth, vAngle: surface.vAngle, window: surface.window, width: surface.widthPx, height: surface.heightPx });
     fieldMs = performance.now() - started;
-    fieldId = s.id;
-  } else if (pendingLit) {
-    scheduleAfterFrame(); // reshade now; the surface waiting follows
-  }
-  if (!field || !lit) return;
+    fieldId = surface.id;
+  } else if (!relit) return;
+  if (!field) return;
   const started = performance.now();
   const rgba = shadeHeightField(field, light, tint);
-  if (lit.width !== field.width || lit.height !== field.height) [lit.width, lit.height] = [field.width, field.height];
-  lit.getContext('2d')?.putImageData(new ImageData(rgba as Uint8ClampedArray<ArrayBuffer>, field.width, field.height), 0, 0);
+  if (canvas.width !== field.width || canvas.height !== field.height) [canvas.width, canvas.height] = [field.width, field.height];
+  canvas.getContext('2d')?.putImageData(new ImageData(rgba as Uint8ClampedArray<ArrayBuffer>, field.width, field.height), 0, 0);
   self.postMessage({ id: fieldId, plate: 'lit', fieldMs, paintMs: performance.now() - started } satisfies PlateReply);
 }
 
 /** The flat plate: each engraved line in ink, as wide as its groove (at least a hairline), at true scale. */
-function drawFlat(s: Surface): void {
-  if (!flat) return;
+function drawFlat(s: Surface, flat: OffscreenCanvas): void {
   const started = performance.now();
   if (flat.width !== s.widthPx || flat.height !== s.heightPx) [flat.width, flat.height] = [s.widthPx, s.heightPx];
   const ctx = flat.getContext('2d');
