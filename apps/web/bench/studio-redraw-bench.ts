@@ -45,15 +45,23 @@ const INSTRUMENT = `(() => {
       });
     }
   };
-  // The plates worker's own times (its replies carry them), for BENCH_LOG.
+  // For BENCH_LOG: when the page posts to each worker and hears back, with the plate workers' own times (their replies carry them).
   const NativeWorker = window.Worker;
   window.Worker = class extends NativeWorker {
     constructor(...args) {
       super(...args);
+      const name = (args[1] && args[1].name) || String(args[0]).split('/').pop();
       this.addEventListener('message', (e) => {
         const d = e.data;
-        if (window.benchLog && d && d.plate) bench.log.push([Math.round(now() - bench.typed), 0, d.plate + ' plate worker: field ' + Math.round(d.fieldMs) + ' ms, paint ' + Math.round(d.paintMs) + ' ms']);
+        if (!window.benchLog || !bench.typed) return;
+        const times = d && d.plate ? ': field ' + Math.round(d.fieldMs) + ' ms, paint ' + Math.round(d.paintMs) + ' ms' : '';
+        bench.log.push([Math.round(now() - bench.typed), 0, 'reply from ' + name + times]);
       });
+      const post = this.postMessage.bind(this);
+      this.postMessage = (...m) => {
+        if (window.benchLog && bench.typed) bench.log.push([Math.round(now() - bench.typed), 0, 'post to ' + name]);
+        return post(...m);
+      };
     }
   };
   document.addEventListener('input', () => (bench.typed = now()), true);
@@ -108,7 +116,7 @@ async function main(): Promise<void> {
     await settle(editor);
     await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
     const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
-    if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
+    if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: (process.env.BENCH_TRACE_CATEGORIES ?? 'devtools.timeline,disabled-by-default-devtools.timeline').split(',') });
     const solo: number[] = [];
     for (let i = 0; i < EDITS; i++) solo.push(await timeLocalEdit(editor, ...edit(i)));
     const soloLongTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
