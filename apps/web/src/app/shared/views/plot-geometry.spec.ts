@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { svgPoints, thinForDrawing, thinPairs, yRange } from './plot-geometry';
+import { hundredths, svgPoints, thinForDrawing, thinPairs, yRange } from './plot-geometry';
 
 describe('thinForDrawing', () => {
   const n = 10_001;
@@ -24,6 +24,21 @@ describe('thinForDrawing', () => {
     for (let i = 2; i < thin.length; i += 2) expect(thin[i]).toBeGreaterThanOrEqual(thin[i - 2]);
     expect(thin[0]).toBeLessThanOrEqual(20);
     expect(thin[thin.length - 2]).toBeGreaterThanOrEqual(30);
+  });
+});
+
+describe('hundredths', () => {
+  it('writes a count of hundredths as String(r / 100) does, for every count to ±1 000 and a million others', () => {
+    const differing: number[] = [];
+    for (let r = -100_000; r <= 100_000; r++) if (hundredths(r) !== String(r / 100)) differing.push(r);
+    let seed = 3;
+    for (let k = 0; k < 1_000_000; k++) {
+      seed = (seed * 1103515245 + 12345) % 2 ** 31;
+      const r = seed - 2 ** 30;
+      if (hundredths(r) !== String(r / 100)) differing.push(r);
+    }
+    expect(differing).toEqual([]);
+    expect([hundredths(1250), hundredths(-5), hundredths(300), hundredths(-0)]).toEqual(['12.5', '-0.05', '3', '0']);
   });
 });
 

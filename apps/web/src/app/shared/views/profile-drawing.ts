@@ -88,8 +88,10 @@ export function profileDrawing(p: ProfileData, mode: ProfileMode, warnings: read
   const exaggeration = mode === 'detail' || natural >= WHOLE_ASPECT * WIDTH ? 1 : niceFactor((WHOLE_ASPECT * WIDTH) / natural);
   const scale: PlotScale = { x0: from, y1: hi, sx, sy: sx * exaggeration };
   const height = (hi - lo) * scale.sy;
-  const barOutline = `${svgPoints(bar, scale)} ${WIDTH},${round(height)} 0,${round(height)}`;
+  const barEdge = svgPoints(bar, scale);
+  const barOutline = `${barEdge} ${WIDTH},${round(height)} 0,${round(height)}`;
   const amplitude = peakToValley(p.cutter);
+  const upperEdge = upper ? svgPoints(upper, scale) : '';
   const ys = (mm: number) => round((hi - mm) * scale.sy);
   return {
     width: WIDTH,
@@ -98,12 +100,12 @@ export function profileDrawing(p: ProfileData, mode: ProfileMode, warnings: read
     to,
     exaggeration,
     bar: barOutline,
-    barEdge: svgPoints(bar, scale),
+    barEdge,
     cutter: svgPoints(cutter, scale),
     follower: svgPoints(follower, scale),
     nominal: nominal ? svgPoints(nominal, scale) : '',
-    upper: upper ? `${svgPoints(upper, scale)} ${WIDTH},0 0,0` : '',
-    upperEdge: upper ? svgPoints(upper, scale) : '',
+    upper: upperEdge ? `${upperEdge} ${WIDTH},0 0,0` : '',
+    upperEdge,
     discs: discs.map((d) => ({ kind: d.kind, cx: round((d.cx - from) * sx), cy: ys(d.cy), r: round(d.r * sx) })),
     marks: lossStretches(warnings, from, to, p.period, amplitude).map((m) => {
       const width = Math.max(4, (m.to - m.from) * sx); // a place narrower than a few units still shows
