@@ -1,5 +1,6 @@
 import { formatLength, formatLengthRange } from './length-format';
 import type { DetailLossInput } from './detail-loss';
+import { extremesOf } from './path-repeat';
 import type { EngineWarning } from './types';
 
 /** The same nodes and radii the detail-loss check reads. */
@@ -15,17 +16,11 @@ export type EngravingCheckInput = DetailLossInput;
 export function followerRadiusWarnings(input: EngravingCheckInput): EngineWarning[] {
   const { cutter: y, follower: f, from, to, step } = input;
   if (input.followerRadius === input.cutterRadius || to <= from) return [];
-  let yLow = Infinity;
-  let yHigh = -Infinity;
-  let fLow = Infinity;
-  for (let i = from; i <= to; i++) {
-    yLow = Math.min(yLow, y[i]);
-    yHigh = Math.max(yHigh, y[i]);
-    fLow = Math.min(fLow, f[i]);
-  }
+  // Over a tiled bar the extremes are read over one repeat (path-repeat.ts); the zones below still walk the whole stretch.
+  const yLow = extremesOf(y, input.repeat, from, to + 1).low;
+  const fLow = extremesOf(f, input.repeat, from, to + 1).low;
   // The scale is the path's height along the whole bar: the examined stretch can be short of a period.
-  let [low, high] = [yLow, yHigh];
-  for (let i = 0; i < y.length; i++) [low, high] = [Math.min(low, y[i]), Math.max(high, y[i])];
+  const { low, high } = extremesOf(y, input.repeat);
   const height = high - low;
   const threshold = Math.max(1e-4, 1e-3 * height);
   const zones: { from: number; to: number }[] = [];

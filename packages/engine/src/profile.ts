@@ -147,7 +147,7 @@ export function barSamples(design: Design, options: ProfileOptions, tile: boolea
     ...{ period: grid.period, units: design.units, repeat },
   });
   const coarse = coarseSamplingWarning(d, grid, design.units, options.step);
-  const engraving = followerRadiusWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period, units: design.units });
+  const engraving = followerRadiusWarnings({ cutter, follower, step: h, cutterRadius: rc, followerRadius: rf, from, to, period: grid.period, units: design.units, repeat });
   const { low, high } = extremesOf(cutter, repeat);
   const summary = { height: high - low, period: grid.period, periodic: lastNode >= grid.perPeriod, length: grid.length, units: design.units };
   const warnings = summarizeWarnings([...(coarse ? [coarse] : []), ...paths.trackWarnings, ...loss, ...engraving], summary);
