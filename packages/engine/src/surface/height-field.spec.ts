@@ -81,6 +81,22 @@ describe('the height field of engraved V-grooves', () => {
     }
   });
 
+  it('gives the same field when it writes over an old one, taking its arrays', () => {
+    const window = { x0: 0, x1: 2, y0: 0, y1: 2 };
+    const size = { depth: 0.15, vAngle: 100, window, width: 32, height: 32, supersample: 2 };
+    const falling: { points: Point[] } = { points: [[0, 2], [2, 0]] };
+    const old = computeHeightField({ ...size, lines: [straight(0.5)] });
+    const fresh = computeHeightField({ ...size, lines: [straight(1), falling] });
+    const reused = computeHeightField({ ...size, lines: [straight(1), falling], reuse: old });
+    expect(reused.dist2).toBe(old.dist2);
+    expect([...reused.dist2]).toEqual([...fresh.dist2]);
+    expect([...reused.facet]).toEqual([...fresh.facet]);
+    expect([...reused.pixelFacet]).toEqual([...fresh.pixelFacet]);
+    expect([...reused.mixedFacets]).toEqual([...fresh.mixedFacets]);
+    // Another size: fresh arrays.
+    expect(computeHeightField({ ...size, width: 16, lines: [falling], reuse: fresh }).dist2).not.toBe(fresh.dist2);
+  });
+
   it('shows a groove narrower than a pixel, by its samples', () => {
     // Pixels 0.1 mm tall; the groove is 0.04 mm wide at the surface (depth 0.02 mm, 90°).
     const field = computeHeightField({ lines: [straight(0.53)], depth: 0.02, vAngle: 90, window: { x0: 0, x1: 1, y0: 0, y1: 1 }, width: 10, height: 10, supersample: 4 });

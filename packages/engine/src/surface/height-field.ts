@@ -51,6 +51,11 @@ export interface HeightFieldInput {
    * wave's height of a line, so a cap above that changes only the margins outside the study.
    */
   maxReach?: number;
+  /**
+   * A field no longer needed (the one this replaces) whose arrays may be written over when their sizes
+   * match: a new 1280 px field at 2 × 2 is some 20 MB, and fresh memory costs a page fault per 4 kB.
+   */
+  reuse?: HeightField | null;
 }
 
 export interface HeightField {
@@ -94,11 +99,12 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
   const rows = height * s;
   const slope = 1 / Math.tan((input.vAngle * Math.PI) / 360);
   const reach = Math.min(Math.max(0, input.depth) / slope, input.maxReach ?? Infinity); // R: half the groove's width at the surface
-  const dist2 = new Float32Array(cols * rows).fill(reach * reach);
-  const facet = new Uint16Array(cols * rows);
+  const old = input.reuse?.dist2.length === cols * rows && input.reuse.pixelFacet.length === width * height ? input.reuse : null;
+  const dist2 = (old?.dist2 ?? new Float32Array(cols * rows)).fill(reach * reach);
+  const facet = old ? old.facet.fill(0) : new Uint16Array(cols * rows);
   const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
   if (reach > 0) for (const line of input.lines) cutLine(line.points, grid, window);
-  const pixels = pixelFacets(facet, width, height, s);
+  const pixels = pixelFacets(facet, width, height, s, old?.pixelFacet ?? new Uint16Array(width * height));
   return { width, height, supersample: s, window, wallSlope: slope, tipDepth: input.depth, dist2, facet, ...pixels };
 }
 
@@ -116,12 +122,11 @@ export function sampleDepths(field: HeightField): Float32Array {
  * SAME_FACING_BINS of the pixel's first count as the same facing (a wall curving gently across a pixel).
  * Runs row by row of pixels over s rows of samples at once, reading each sample row in order.
  */
-function pixelFacets(facet: Uint16Array, width: number, height: number, s: number): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
+function pixelFacets(facet: Uint16Array, width: number, height: number, s: number, pixelFacet: Uint16Array): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
   const cols = width * s;
-  const pixelFacet = new Uint16Array(width * height);
-  // Room for every pixel (up to half are mixed where walls curve across pixels), trimmed at the end.
-  const mixedPixels = new Uint32Array(width * height);
-  const mixedFacets = new Uint16Array(width * height * s * s);
+  // Room for half the pixels (at most about that many are mixed, where walls curve across pixels), grown if not; trimmed at the end.
+  let mixedPixels = new Uint32Array(Math.max(1024, (width * height) >> 1));
+  let mixedFacets = new Uint16Array(mixedPixels.length * s * s);
   let count = 0;
   for (let py = 0, p = 0; py < height; py++) {
     const rowBase = py * s * cols;
@@ -146,6 +151,10 @@ function pixelFacets(facet: Uint16Array, width: number, height: number, s: numbe
         continue;
       }
       pixelFacet[p] = MIXED_PIXEL;
+      if (count === mixedPixels.length) {
+        mixedPixels = grown(mixedPixels, 2 * count);
+        mixedFacets = grown(mixedFacets, 2 * count * s * s);
+      }
       mixedPixels[count] = p;
       let o = count * s * s;
       for (let j = 0, k0 = base; j < s; j++, k0 += cols) for (let i = 0; i < s; i++) mixedFacets[o++] = facet[k0 + i];
@@ -153,6 +162,12 @@ function pixelFacets(facet: Uint16Array, width: number, height: number, s: numbe
     }
   }
   return { pixelFacet, mixed: mixedPixels.slice(0, count), mixedFacets: mixedFacets.slice(0, count * s * s) };
+}
+
+function grown<T extends Uint16Array | Uint32Array>(a: T, size: number): T {
+  const b = new (a.constructor as new (n: number) => T)(size);
+  b.set(a);
+  return b;
 }
 
 /** Whether two samples' facets shade differently: uncut (0) against cut always, two facings beyond SAME_FACING_BINS apart. */

@@ -55,7 +55,7 @@ function work(): void {
   // A draft leaves the lit plate alone: its surface would be computed only to be replaced by the final one.
   if (surface && !surface.flatOnly) {
     const started = performance.now();
-    field = computeHeightField({ lines: surface.lines.map(toPoints), depth: surface.depth, vAngle: surface.vAngle, window: surface.window, width: surface.widthPx, height: surface.heightPx });
+    field = computeHeightField({ lines: surface.lines.map(toPoints), depth: surface.depth, vAngle: surface.vAngle, window: surface.window, width: surface.widthPx, height: surface.heightPx, reuse: field });
     fieldMs = performance.now() - started;
     fieldId = surface.id;
   } else if (!relit) return;
