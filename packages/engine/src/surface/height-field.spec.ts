@@ -92,7 +92,9 @@ describe('the height field of engraved V-grooves', () => {
     expect([...reused.dist2]).toEqual([...fresh.dist2]);
     expect([...reused.facet]).toEqual([...fresh.facet]);
     expect([...reused.pixelFacet]).toEqual([...fresh.pixelFacet]);
+    expect([...reused.mixed]).toEqual([...fresh.mixed]);
     expect([...reused.mixedFacets]).toEqual([...fresh.mixedFacets]);
+    expect(reused.mixed.buffer).toBe(old.mixed.buffer); // its room for edge pixels too
     // Another size: fresh arrays.
     expect(computeHeightField({ ...size, width: 16, lines: [falling], reuse: fresh }).dist2).not.toBe(fresh.dist2);
   });
@@ -160,6 +162,17 @@ describe('Blinn–Phong shading of the field', () => {
     expect(field.dist2).toEqual(before);
     expect(one).not.toEqual(two);
     expect(one.length).toBe(40 * 40 * 4);
+  });
+
+  it('shades over an earlier picture of the same size to the same bytes as into a new one, and ignores one of another size', () => {
+    const field = computeHeightField({ lines: [straight(1), straight(1.3)], depth: 0.1, vAngle: 90, window: { x0: 0, x1: 2, y0: 0, y1: 2 }, width: 40, height: 40 });
+    const lightA = { azimuthDeg: 30, elevationDeg: 40 };
+    const earlier = shadeHeightField(field, { azimuthDeg: 200, elevationDeg: 20 }, 'gold');
+    const over = shadeHeightField(field, lightA, 'silver', earlier);
+    expect(over).toBe(earlier);
+    expect(over).toEqual(shadeHeightField(field, lightA, 'silver'));
+    const small = new Uint8ClampedArray(16);
+    expect(shadeHeightField(field, lightA, 'silver', small)).not.toBe(small);
   });
 });
 

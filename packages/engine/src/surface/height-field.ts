@@ -77,7 +77,7 @@ export interface HeightField {
   facet: Uint16Array;
   /** Per pixel: the facet all its samples share, or MIXED_PIXEL. */
   pixelFacet: Uint16Array;
-  /** The MIXED_PIXEL pixels (index y·width + x), and their samples' facets, s² each, row by row. */
+  /** The MIXED_PIXEL pixels (index y·width + x), and their samples' facets, s² each, row by row (views of larger buffers kept for reuse). */
   mixed: Uint32Array;
   mixedFacets: Uint16Array;
 }
@@ -104,7 +104,7 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
   const facet = old ? old.facet.fill(0) : new Uint16Array(cols * rows);
   const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
   if (reach > 0) for (const line of input.lines) cutLine(line.points, grid, window);
-  const pixels = pixelFacets(facet, width, height, s, old?.pixelFacet ?? new Uint16Array(width * height));
+  const pixels = pixelFacets(facet, width, height, s, old?.pixelFacet ?? new Uint16Array(width * height), old);
   return { width, height, supersample: s, window, wallSlope: slope, tipDepth: input.depth, dist2, facet, ...pixels };
 }
 
@@ -122,11 +122,15 @@ export function sampleDepths(field: HeightField): Float32Array {
  * SAME_FACING_BINS of the pixel's first count as the same facing (a wall curving gently across a pixel).
  * Runs row by row of pixels over s rows of samples at once, reading each sample row in order.
  */
-function pixelFacets(facet: Uint16Array, width: number, height: number, s: number, pixelFacet: Uint16Array): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
+function pixelFacets(facet: Uint16Array, width: number, height: number, s: number, pixelFacet: Uint16Array, old: HeightField | null): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
   const cols = width * s;
-  // Room for half the pixels (at most about that many are mixed, where walls curve across pixels), grown if not; trimmed at the end.
-  let mixedPixels = new Uint32Array(Math.max(1024, (width * height) >> 1));
-  let mixedFacets = new Uint16Array(mixedPixels.length * s * s);
+  // Room for half the pixels (at most about that many are mixed, where walls curve across pixels), grown
+  // if not; the field keeps views of the part used. A field replaced lends its room (same s): the room
+  // is megabytes, and fresh memory costs a page fault per 4 kB.
+  const room = old ? Math.min(old.mixed.buffer.byteLength >> 2, old.mixedFacets.buffer.byteLength / (2 * s * s)) : 0;
+  const wanted = Math.max(1024, (width * height) >> 1);
+  let mixedPixels = room >= wanted ? new Uint32Array(old!.mixed.buffer, 0, room) : new Uint32Array(wanted);
+  let mixedFacets = room >= wanted ? new Uint16Array(old!.mixedFacets.buffer, 0, room * s * s) : new Uint16Array(mixedPixels.length * s * s);
   let count = 0;
   for (let py = 0, p = 0; py < height; py++) {
     const rowBase = py * s * cols;
@@ -161,7 +165,7 @@ function pixelFacets(facet: Uint16Array, width: number, height: number, s: numbe
       count++;
     }
   }
-  return { pixelFacet, mixed: mixedPixels.slice(0, count), mixedFacets: mixedFacets.slice(0, count * s * s) };
+  return { pixelFacet, mixed: mixedPixels.subarray(0, count), mixedFacets: mixedFacets.subarray(0, count * s * s) };
 }
 
 function grown<T extends Uint16Array | Uint32Array>(a: T, size: number): T {

@@ -51,12 +51,15 @@ export function blinnPhong(nx: number, ny: number, nz: number, light: SurfaceLig
  * The field as RGBA bytes (width × height × 4, row 0 at the top). Cheap: the FACET_BINS + 1 normals
  * are shaded once, then each pixel looks its facet up; pixels an edge or ridge runs through average
  * their samples' linear colours before encoding. One pass over the pixels, one 32-bit write each,
- * and nothing allocated per pixel.
+ * and nothing allocated per pixel. `into`: an earlier picture of the same size to write over (and
+ * return); a new one otherwise.
  */
-export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: MetalTint): Uint8ClampedArray {
+export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: MetalTint, into?: Uint8ClampedArray | null): Uint8ClampedArray {
   const linear = facetColours(field.wallSlope, light, METAL_COLOURS[tint]);
   const { width, height, supersample: s, pixelFacet, mixed, mixedFacets } = field;
-  const out = new Uint8ClampedArray(width * height * 4);
+  // Every pixel is written below, so an earlier picture of the same size can be painted over: 3 MB of
+  // fresh memory a reshade at 1280 × 620 costs more than the shading on a machine slow to fault pages in.
+  const out = into?.length === width * height * 4 && into.byteOffset === 0 ? into : new Uint8ClampedArray(width * height * 4);
   const words = new Uint32Array(out.buffer);
   // The facets' colours as packed RGBA words (in the platform's byte order), one lookup a pixel.
   const packed = new Uint32Array(FACET_BINS + 1);
