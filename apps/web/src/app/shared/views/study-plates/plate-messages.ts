@@ -27,10 +27,14 @@ export type PlateRequest =
   /** A new light or metal (to the lit worker): reshades the surface held, without computing it again. */
   | { kind: 'light'; light: SurfaceLight; tint: MetalTint };
 
-/** Plate worker → page: request `id` is on the canvas named (a reshade names the study its surface is of); `fieldMs` is 0 for a reshade. */
+/**
+ * Plate worker → page: request `id` is on the canvas named (a reshade names the study its surface is of);
+ * `fine` false: the lit plate's quick surface, its anti-aliased one to follow; `fieldMs` is 0 for a reshade.
+ */
 export interface PlateReply {
   id: number;
   plate: 'flat' | 'lit';
+  fine: boolean;
   fieldMs: number;
   paintMs: number;
 }

@@ -48,9 +48,11 @@ export class StudyPlates {
   private readonly cssWidth = signal(0);
   private readonly themeChanges = signal(0);
   protected readonly supported = signal(true);
-  /** The newest request each plate shows (for tests and benchmarks: the plate is drawn when it equals `requested`). */
+  /** The newest request each plate shows finished (for tests and benchmarks: the plate is drawn when it equals `requested`). */
   protected readonly flatShown = signal(0);
   protected readonly litShown = signal(0);
+  /** The newest request the lit plate shows at all: its quick surface, before the anti-aliased one. */
+  protected readonly litFirst = signal(0);
   protected readonly requested = signal(0);
   /** The newest request the lit plate is to show (drafts leave it). */
   protected readonly litRequested = signal(0);
@@ -76,7 +78,11 @@ export class StudyPlates {
       for (const worker of Object.values(this.workers)) {
         worker.addEventListener('message', (event: MessageEvent<PlateReply>) => {
           const reply = event.data;
-          (reply.plate === 'flat' ? this.flatShown : this.litShown).set(reply.id);
+          if (reply.plate === 'flat') this.flatShown.set(reply.id);
+          else {
+            this.litFirst.set(reply.id);
+            if (reply.fine) this.litShown.set(reply.id);
+          }
         });
       }
       const observer = new ResizeObserver(([entry]) => this.cssWidth.set(Math.floor(entry.contentRect.width)));

@@ -9,13 +9,26 @@ import type { PlateReply, PlateRequest } from './plate-messages';
  * while the flat plate is drawn, on the machine's other core. A light or metal change only reshades
  * the lit plate. Messages that arrive while it works replace the waiting ones of their kind, so a
  * slider dragged fast paints only its newest position.
+ *
+ * Where the supersampled surface is slow (over COARSE_WORTH_MS), a new study is shown first from one
+ * sample a pixel, a quarter of the work, and the anti-aliased surface follows unless a newer study
+ * overtakes it: while a maker edits, the plate keeps up with the edits and sharpens when they pause.
  */
 type Surface = Extract<PlateRequest, { kind: 'surface' }>;
+/** A supersampled surface that took longer than this (ms) is preceded by a one-sample-a-pixel one. */
+const COARSE_WORTH_MS = 20;
 let plate: 'flat' | 'lit' = 'flat';
 let canvas: OffscreenCanvas | null = null;
-let field: HeightField | null = null;
-/** The request the surface held is of. */
-let fieldId = 0;
+/** The anti-aliased surface and the quick one: each kept so the next of its kind writes over its memory. */
+let fine: HeightField | null = null;
+let coarse: HeightField | null = null;
+/** The surface on the plate (a light change reshades it), the request it is of, and whether it is the anti-aliased one. */
+let shown: { field: HeightField; id: number; fine: boolean } | null = null;
+/** The study whose anti-aliased surface is still to come after its quick one. */
+let refine: Surface | null = null;
+let lastFineMs = 0;
+/** The picture's bytes, written over by each shading of the same size (fresh memory is slow to fault in). */
+let picture: ImageData | null = null;
 let light: SurfaceLight = { azimuthDeg: 60, elevationDeg: 35 };
 let tint: MetalTint = 'silver';
 let pendingSurface: Surface | null = null;
@@ -51,20 +64,68 @@ function work(): void {
     ({ light, tint } = pendingLight);
     pendingLight = null;
   }
-  let fieldMs = 0;
   // A draft leaves the lit plate alone: its surface would be computed only to be replaced by the final one.
-  if (surface && !surface.flatOnly) {
-    const started = performance.now();
-    field = computeHeightField({ lines: surface.lines.map(toPoints), depth: surface.depth, vAngle: surface.vAngle, window: surface.window, width: surface.widthPx, height: surface.heightPx, reuse: field });
-    fieldMs = performance.now() - started;
-    fieldId = surface.id;
-  } else if (!relit) return;
-  if (!field) return;
+  const next = surface && !surface.flatOnly ? surface : null;
+  if (next) {
+    refine = null;
+    if (lastFineMs > COARSE_WORTH_MS) {
+      const started = performance.now();
+      coarse = surfaceOf(next, 1, coarse);
+      shown = { field: coarse, id: next.id, fine: false };
+      paint(canvas, performance.now() - started);
+      refine = next;
+      // The anti-aliased surface once this frame is out (a task started at once would hold the quick
+      // picture back until it ends), unless a newer study comes first.
+      afterFrame(schedule);
+      return;
+    }
+    drawFine(next, canvas);
+  } else if (refine && !relit) {
+    const study = refine;
+    refine = null;
+    drawFine(study, canvas);
+  } else if (relit && shown) {
+    paint(canvas, 0);
+    if (refine) afterFrame(schedule);
+  }
+}
+
+function drawFine(study: Surface, lit: OffscreenCanvas): void {
   const started = performance.now();
-  const rgba = shadeHeightField(field, light, tint);
-  if (canvas.width !== field.width || canvas.height !== field.height) [canvas.width, canvas.height] = [field.width, field.height];
-  canvas.getContext('2d')?.putImageData(new ImageData(rgba as Uint8ClampedArray<ArrayBuffer>, field.width, field.height), 0, 0);
-  self.postMessage({ id: fieldId, plate: 'lit', fieldMs, paintMs: performance.now() - started } satisfies PlateReply);
+  fine = surfaceOf(study, 2, fine);
+  lastFineMs = performance.now() - started;
+  shown = { field: fine, id: study.id, fine: true };
+  paint(lit, lastFineMs);
+}
+
+function surfaceOf(s: Surface, supersample: number, reuse: HeightField | null): HeightField {
+  return computeHeightField({ lines: s.lines.map(toPoints), depth: s.depth, vAngle: s.vAngle, window: s.window, width: s.widthPx, height: s.heightPx, supersample, reuse });
+}
+
+/** Shades the surface shown under the current light and puts it on the plate. */
+function paint(lit: OffscreenCanvas, fieldMs: number): void {
+  if (!shown) return;
+  const { field, id } = shown;
+  const started = performance.now();
+  if (picture?.width !== field.width || picture.height !== field.height) picture = new ImageData(field.width, field.height);
+  shadeHeightField(field, light, tint, picture.data);
+  if (lit.width !== field.width || lit.height !== field.height) [lit.width, lit.height] = [field.width, field.height];
+  lit.getContext('2d')?.putImageData(picture, 0, 0);
+  reply({ id, plate: 'lit', fine: shown.fine, fieldMs, paintMs: performance.now() - started });
+}
+
+/**
+ * Tells the page once the picture is out: a worker's canvas sends its frame when the worker's task
+ * ends, so the reply waits for the next animation frame (the page's "drawn" then means on screen).
+ */
+function reply(message: PlateReply): void {
+  afterFrame(() => self.postMessage(message));
+}
+
+/** Runs `then` at the worker's next animation frame (OffscreenCanvas workers have one), else after a task. */
+function afterFrame(then: () => void): void {
+  if (typeof self.requestAnimationFrame === 'function') self.requestAnimationFrame(() => then());
+  else setTimeout(then, 0);
 }
 
 /** The flat plate: each engraved line in ink, as wide as its groove (at least a hairline), at true scale. */
@@ -90,7 +151,7 @@ function drawFlat(s: Surface, flat: OffscreenCanvas): void {
     }
   }
   ctx.stroke();
-  self.postMessage({ id: s.id, plate: 'flat', fieldMs: 0, paintMs: performance.now() - started } satisfies PlateReply);
+  reply({ id: s.id, plate: 'flat', fine: true, fieldMs: 0, paintMs: performance.now() - started });
 }
 
 function toPoints(xy: Float64Array): { points: Point[] } {
