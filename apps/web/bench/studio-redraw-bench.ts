@@ -2,7 +2,8 @@
  * Studio redraw benchmark, measured from outside in Debian's Chromium:
  *  - edit to redraw, one maker: 30 edits typed into the studio with no other page on the design, from
  *    the input event to the frame after the last view (bar profile, flat and lit study, cut plan)
- *    changed, with the main-thread long tasks meanwhile;
+ *    changed, with the main-thread long tasks meanwhile; and to the frame after every view first showed
+ *    the edit (the lit plate's quick surface counts: its anti-aliased one may follow);
  *  - two makers: 30 more edits with a second browser context on the same design (its redrawing shares
  *    the machine's two cores): the typing page's edit to redraw, and the other page's field holding
  *    the value and its views redrawn, from the typing page's input event and from the update's arrival.
@@ -32,8 +33,10 @@ const QUIET_MS = 700;
  * long tasks. Page scripts are strings: tsx would wrap named functions in a helper the page lacks.
  */
 const INSTRUMENT = `(() => {
-  const bench = (window.bench = { typed: 0, drawn: 0, longTasks: [], fieldAt: 0, updates: [], log: [] });
+  const bench = (window.bench = { typed: 0, drawn: 0, first: {}, longTasks: [], fieldAt: 0, updates: [], log: [] });
   window.benchLog = ${JSON.stringify(!!process.env.BENCH_LOG)};
+  // BENCH_SURFACE_FILE: the last study the lit plate was given, kept to replay outside the page.
+  window.benchSurface = ${JSON.stringify(!!process.env.BENCH_SURFACE_FILE)};
   const now = () => performance.timeOrigin + performance.now();
   // When each document update (y-websocket's message type 0, not awareness) reaches the page, before Yjs reads it.
   const Native = window.WebSocket;
@@ -54,12 +57,13 @@ const INSTRUMENT = `(() => {
       this.addEventListener('message', (e) => {
         const d = e.data;
         if (!window.benchLog || !bench.typed) return;
-        const times = d && d.plate ? ': field ' + Math.round(d.fieldMs) + ' ms, paint ' + Math.round(d.paintMs) + ' ms' : '';
+        const times = d && d.plate ? ': field ' + Math.round(d.fieldMs) + ' ms, paint ' + Math.round(d.paintMs) + ' ms' : d && d.views ? ': ' + d.views.stage + ' in ' + Math.round(d.views.ms) + ' ms' : '';
         bench.log.push([Math.round(now() - bench.typed), 0, 'reply from ' + name + times]);
       });
       const post = this.postMessage.bind(this);
       this.postMessage = (...m) => {
         if (window.benchLog && bench.typed) bench.log.push([Math.round(now() - bench.typed), 0, 'post to ' + name]);
+        if (window.benchSurface && name === 'study-plates-flat' && m[0] && m[0].kind === 'surface') bench.lastSurface = { ...m[0], lines: m[0].lines.map((l) => Array.from(l)) };
         return post(...m);
       };
     }
@@ -78,6 +82,16 @@ const INSTRUMENT = `(() => {
       requestAnimationFrame(() => bench.log.push([Math.round(at - bench.typed), Math.round(now() - bench.typed), (el?.closest('[data-testid]')?.dataset.testid ?? el?.tagName) + ' ' + r.type + ' ' + (r.attributeName ?? '')]));
     }
     if (changed.length) requestAnimationFrame(() => (bench.drawn = now()));
+    // Each view's first change showing the edit: a plate's when its worker says it painted the study
+    // (the lit plate's quick surface counts), any other view's first change.
+    for (const r of changed) {
+      const el = r.target instanceof Element ? r.target : r.target.parentElement;
+      const key = el?.closest('[data-testid]')?.dataset.testid ?? el?.tagName;
+      if (!key || key in bench.first) continue;
+      if (el instanceof HTMLCanvasElement && r.attributeName !== (el.hasAttribute('data-shown') ? 'data-shown' : 'data-drawn')) continue;
+      bench.first[key] = 0;
+      requestAnimationFrame(() => (bench.first[key] = now()));
+    }
   }).observe(document, { subtree: true, childList: true, attributes: true, characterData: true });
   new PerformanceObserver((list) => { for (const e of list.getEntries()) bench.longTasks.push(e.duration); }).observe({ type: 'longtask' });
 })()`;
@@ -87,6 +101,7 @@ const watchField = (testId: string, value: string) => `(() => {
   const bench = window.bench;
   bench.fieldAt = 0;
   bench.drawn = 0;
+  bench.first = {};
   const input = document.querySelector('[data-testid="${testId}"]');
   const proto = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value');
   Object.defineProperty(input, 'value', {
@@ -100,7 +115,7 @@ const watchField = (testId: string, value: string) => `(() => {
 })()`;
 
 interface BenchWindow {
-  bench: { typed: number; drawn: number; log: [number, number, string][]; longTasks: number[]; fieldAt: number; updates: number[] };
+  bench: { typed: number; drawn: number; first: Record<string, number>; log: [number, number, string][]; longTasks: number[]; fieldAt: number; updates: number[] };
 }
 
 async function main(): Promise<void> {
@@ -118,7 +133,12 @@ async function main(): Promise<void> {
     const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
     if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: (process.env.BENCH_TRACE_CATEGORIES ?? 'devtools.timeline,disabled-by-default-devtools.timeline').split(',') });
     const solo: number[] = [];
-    for (let i = 0; i < EDITS; i++) solo.push(await timeLocalEdit(editor, ...edit(i)));
+    const soloShown: number[] = [];
+    for (let i = 0; i < EDITS; i++) {
+      const t = await timeLocalEdit(editor, ...edit(i));
+      solo.push(t.drawn);
+      soloShown.push(t.shown);
+    }
     const soloLongTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
     if (profiler) await printProfile(profiler);
     if (process.env.BENCH_TRACE) {
@@ -130,6 +150,8 @@ async function main(): Promise<void> {
     // Two makers: the same edits followed on a second page, which redraws too.
     await openStudio(watcher, url);
     const local: number[] = [];
+    const localShown: number[] = [];
+    const remoteShown: number[] = [];
     const remoteField: number[] = [];
     const remoteViews: number[] = [];
     const arrivedField: number[] = [];
@@ -137,8 +159,10 @@ async function main(): Promise<void> {
     await settle(editor, watcher);
     for (const page of [editor, watcher]) await page.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
     for (let i = 0; i < EDITS; i++) {
-      const t = await timeEdit(editor, watcher, ...edit(i + 2)); // from edit(2): phase one's last amplitude is edit(1)'s, which would change nothing
+      const t = await timeEdit(editor, watcher, ...edit(EDITS + i)); // on from phase one's edits: repeating its last value would change nothing
       local.push(t.local);
+      localShown.push(t.localShown);
+      remoteShown.push(t.arrivedShown);
       remoteField.push(t.remoteField);
       remoteViews.push(t.remoteViews);
       arrivedField.push(t.arrivedField);
@@ -146,41 +170,50 @@ async function main(): Promise<void> {
     }
     const watcherLongTasks = await watcher.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
     const longTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
-    const row = (name: string, xs: number[]) => `${name.padEnd(38)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
-    const tasks = (name: string, xs: number[]) => `${name.padEnd(38)} ${xs.length} (longest ${xs.length ? Math.max(...xs).toFixed(0) : 0} ms)`;
+    const row = (name: string, xs: number[]) => `${name.padEnd(46)} p50 ${pct(xs, 50).toFixed(0).padStart(5)} ms   p95 ${pct(xs, 95).toFixed(0).padStart(5)} ms   max ${Math.max(...xs).toFixed(0).padStart(5)} ms`;
+    const tasks = (name: string, xs: number[]) => `${name.padEnd(46)} ${xs.length} (longest ${xs.length ? Math.max(...xs).toFixed(0) : 0} ms)`;
     console.log(`Studio redraw, ${EDITS} edits (lobes and amplitude alternately), Chromium ${browser.version()}, ${WEB_DIST}`);
     console.log('One maker on the design:');
-    console.log(row('  edit to redraw', solo));
+    console.log(row('  edit to every view showing it', soloShown));
+    console.log(row('  edit to redraw (the last view settled)', solo));
     console.log(tasks('  long tasks', soloLongTasks));
     console.log('Two makers (a second page on the design, redrawing too):');
+    console.log(row('  edit to every view showing it (this page)', localShown));
     console.log(row('  edit to redraw (this page)', local));
     console.log(tasks('  long tasks on this page', longTasks));
     console.log(row('  remote edit to the field', remoteField));
     console.log(row('  remote edit to the views', remoteViews));
     console.log(row('  remote: arrived to the field', arrivedField));
+    console.log(row('  remote: arrived to every view showing it', remoteShown));
     console.log(row('  remote: arrived to the views', arrivedViews));
     console.log(tasks('  long tasks on the other page', watcherLongTasks));
   } finally {
     await browser.close();
-    server.kill('SIGTERM');
+    await stopServer(server);
   }
 }
 
 /** Types `value` into the editor's field with no other page on the design; resolves with the ms from the input to the last view redrawn. */
 async function timeLocalEdit(editor: Page, testId: string, value: string): Promise<number> {
-  await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.log = []; });
+  await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.first = {}; b.log = []; });
   await editor.getByTestId(testId).fill(value);
   await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
   await settle(editor);
   const e = await editor.evaluate(() => (window as unknown as BenchWindow).bench);
   if (process.env.BENCH_LOG) console.log(`${testId} = ${value}: ${[...new Set(e.log.map(([a, f, what]) => `${a}/${f} ${what}`))].join('; ')}`);
-  return e.drawn - e.typed;
+  if (process.env.BENCH_SURFACE_FILE) fs.writeFileSync(process.env.BENCH_SURFACE_FILE, JSON.stringify(await editor.evaluate(() => (window as unknown as { bench: { lastSurface: unknown } }).bench.lastSurface)));
+  return { drawn: e.drawn - e.typed, shown: shownAt(e) - e.typed };
+}
+
+/** When every view first showed the edit (the frame after the last of their first changes). */
+function shownAt(b: BenchWindow['bench']): number {
+  return Math.max(...Object.values(b.first));
 }
 
 /** Types `value` into the editor's field; resolves with the three times in ms. */
 async function timeEdit(editor: Page, watcher: Page, testId: string, value: string) {
   await watcher.evaluate(watchField(testId, value));
-  await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.log = []; });
+  await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.first = {}; b.log = []; });
   await watcher.evaluate(() => ((window as unknown as BenchWindow).bench.updates = []));
   await editor.getByTestId(testId).fill(value);
   await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
@@ -195,7 +228,7 @@ async function timeEdit(editor: Page, watcher: Page, testId: string, value: stri
   const w = await watcher.evaluate(() => (window as unknown as BenchWindow).bench);
   // The update that brought the value: the last to arrive before the field took it.
   const arrived = Math.max(...w.updates.filter((t) => t <= w.fieldAt));
-  return { local: e.drawn - e.typed, remoteField: w.fieldAt - e.typed, remoteViews: w.drawn - e.typed, arrivedField: w.fieldAt - arrived, arrivedViews: w.drawn - arrived };
+  return { local: e.drawn - e.typed, localShown: shownAt(e) - e.typed, arrivedShown: shownAt(w) - arrived, remoteField: w.fieldAt - e.typed, remoteViews: w.drawn - e.typed, arrivedField: w.fieldAt - arrived, arrivedViews: w.drawn - arrived };
 }
 
 /** Waits until neither page has redrawn for QUIET_MS. */
@@ -305,6 +338,8 @@ function printTrace(buffer: Buffer): void {
 }
 
 async function startServer(): Promise<ChildProcess> {
+  // A server left on the port (an earlier run's) would answer instead, with its own build.
+  if (await fetch(`${BASE}/api/health`).then(() => true, () => false)) throw new Error(`Port ${PORT} already answers: stop that server or set BENCH_PORT`);
   fs.rmSync(DATA_DIR, { recursive: true, force: true });
   fs.mkdirSync(path.dirname(DATA_DIR), { recursive: true });
   const child = spawn(process.execPath, ['--import', 'tsx', 'apps/server/src/main.ts'], {
@@ -324,6 +359,16 @@ async function startServer(): Promise<ChildProcess> {
   }
   child.kill('SIGTERM');
   throw new Error('The server did not answer /api/health within 2 minutes');
+}
+
+/** Stops the server and waits for it to go (forced after 10 s), so the next run finds the port free. */
+async function stopServer(child: ChildProcess): Promise<void> {
+  if (child.exitCode !== null) return;
+  const gone = new Promise((resolve) => child.once('exit', resolve));
+  child.kill('SIGTERM');
+  const timer = setTimeout(() => child.kill('SIGKILL'), 10_000);
+  await gone;
+  clearTimeout(timer);
 }
 
 function pct(xs: number[], p: number): number {
