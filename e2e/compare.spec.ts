@@ -139,9 +139,12 @@ test('studio: a saved version beside now; the title, the cut plan in a line and,
   // The phase-schedule menu shows its last option whole.
   await page.getByTestId('panel-study').getByRole('button').first().click();
   await page.getByTestId('field-study.schedule.kind').click();
-  const panel = await page.locator('.bw-choice-panel').boundingBox();
-  const last = await page.getByTestId('option-list').boundingBox();
-  expect(last!.y + last!.height).toBeLessThanOrEqual(panel!.y + panel!.height + 0.5);
+  // Measured again until the panel's opening animation has settled (on a loaded machine it is caught mid-way).
+  await expect(async () => {
+    const panel = await page.locator('.bw-choice-panel').boundingBox();
+    const last = await page.getByTestId('option-list').boundingBox();
+    expect(last!.y + last!.height).toBeLessThanOrEqual(panel!.y + panel!.height + 0.5);
+  }).toPass({ timeout: 5_000 });
   await page.keyboard.press('Escape');
 
   // A named version, a change, then the two side by side.
