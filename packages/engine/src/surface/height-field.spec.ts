@@ -88,15 +88,20 @@ describe('the height field of engraved V-grooves', () => {
     const old = computeHeightField({ ...size, lines: [straight(0.5)] });
     const fresh = computeHeightField({ ...size, lines: [straight(1), falling] });
     const reused = computeHeightField({ ...size, lines: [straight(1), falling], reuse: old });
-    expect(reused.dist2).toBe(old.dist2);
+    expect(reused.dist2.buffer).toBe(old.dist2.buffer);
     expect([...reused.dist2]).toEqual([...fresh.dist2]);
     expect([...reused.facet]).toEqual([...fresh.facet]);
     expect([...reused.pixelFacet]).toEqual([...fresh.pixelFacet]);
     expect([...reused.mixed]).toEqual([...fresh.mixed]);
     expect([...reused.mixedFacets]).toEqual([...fresh.mixedFacets]);
     expect(reused.mixed.buffer).toBe(old.mixed.buffer); // its room for edge pixels too
-    // Another size: fresh arrays.
-    expect(computeHeightField({ ...size, width: 16, lines: [falling], reuse: fresh }).dist2).not.toBe(fresh.dist2);
+    // A smaller plate writes over the same memory and gives the same field as fresh; a larger one than it holds gets new memory.
+    const smallSize = { ...size, width: 30, height: 31 };
+    const small = computeHeightField({ ...smallSize, lines: [falling], reuse: reused });
+    expect(small.dist2.buffer).toBe(old.dist2.buffer);
+    const smallFresh = computeHeightField({ ...smallSize, lines: [falling] });
+    for (const key of ['dist2', 'facet', 'pixelFacet', 'mixed', 'mixedFacets'] as const) expect([...small[key]]).toEqual([...smallFresh[key]]);
+    expect(computeHeightField({ ...size, width: 64, lines: [falling], reuse: small }).dist2.buffer).not.toBe(old.dist2.buffer);
   });
 
   it('shows a groove narrower than a pixel, by its samples', () => {
@@ -173,6 +178,10 @@ describe('Blinn–Phong shading of the field', () => {
     expect(over).toEqual(shadeHeightField(field, lightA, 'silver'));
     const small = new Uint8ClampedArray(16);
     expect(shadeHeightField(field, lightA, 'silver', small)).not.toBe(small);
+    // A view of a larger buffer (as a plate keeps room for a taller picture), of any byte length.
+    const roomy = new Uint8ClampedArray(new ArrayBuffer(40 * 40 * 4 * 1.125 + 3), 0, 40 * 40 * 4);
+    expect(shadeHeightField(field, lightA, 'silver', roomy)).toBe(roomy);
+    expect(roomy).toEqual(shadeHeightField(field, lightA, 'silver'));
   });
 });
 

@@ -52,8 +52,9 @@ export interface HeightFieldInput {
    */
   maxReach?: number;
   /**
-   * A field no longer needed (the one this replaces) whose arrays may be written over when their sizes
-   * match: a new 1280 px field at 2 × 2 is some 20 MB, and fresh memory costs a page fault per 4 kB.
+   * A field no longer needed (the one this replaces) whose memory may be written over where it has room
+   * (the new field's arrays are then views of it): a new 1280 px field at 2 × 2 is some 20 MB, and fresh
+   * memory costs a page fault per 4 kB.
    */
   reuse?: HeightField | null;
 }
@@ -99,13 +100,26 @@ export function computeHeightField(input: HeightFieldInput): HeightField {
   const rows = height * s;
   const slope = 1 / Math.tan((input.vAngle * Math.PI) / 360);
   const reach = Math.min(Math.max(0, input.depth) / slope, input.maxReach ?? Infinity); // R: half the groove's width at the surface
-  const old = input.reuse?.dist2.length === cols * rows && input.reuse.pixelFacet.length === width * height ? input.reuse : null;
-  const dist2 = (old?.dist2 ?? new Float32Array(cols * rows)).fill(reach * reach);
-  const facet = old ? old.facet.fill(0) : new Uint16Array(cols * rows);
+  const old = input.reuse ?? null;
+  const dist2 = room(Float32Array, old?.dist2, cols * rows).fill(reach * reach);
+  const facet = room(Uint16Array, old?.facet, cols * rows).fill(0);
   const grid: Raster = { cols, rows, x0: window.x0, y1: window.y1, dx: (window.x1 - window.x0) / cols, dy: (window.y1 - window.y0) / rows, reach, dist2, facet };
   if (reach > 0) for (const line of input.lines) cutLine(line.points, grid, window);
-  const pixels = pixelFacets(facet, width, height, s, old?.pixelFacet ?? new Uint16Array(width * height), old);
+  const pixels = pixelFacets(facet, width, height, s, room(Uint16Array, old?.pixelFacet, width * height), old);
   return { width, height, supersample: s, window, wallSlope: slope, tipDepth: input.depth, dist2, facet, ...pixels };
+}
+
+type Typed = Float32Array | Uint16Array | Uint32Array;
+
+/**
+ * An array of n over the memory of `lent` (an array of a field replaced) when it has room, else over
+ * new memory with an eighth to spare: a plate's height changes by a pixel or two from study to study,
+ * and the next field then still fits.
+ */
+function room<T extends Typed>(Kind: { new (buffer: ArrayBufferLike, offset: number, length: number): T; BYTES_PER_ELEMENT: number }, lent: Typed | undefined, n: number): T {
+  const bytes = Kind.BYTES_PER_ELEMENT;
+  if (lent && lent.buffer.byteLength >= n * bytes) return new Kind(lent.buffer, 0, n);
+  return new Kind(new ArrayBuffer(Math.ceil(n * 1.125) * bytes), 0, n);
 }
 
 /** Depth below the plate (mm, ≥ 0) of each sample of the field, in `dist2`'s order: d − dist·slope inside a groove, 0 on the plate. */
@@ -125,12 +139,12 @@ export function sampleDepths(field: HeightField): Float32Array {
 function pixelFacets(facet: Uint16Array, width: number, height: number, s: number, pixelFacet: Uint16Array, old: HeightField | null): Pick<HeightField, 'pixelFacet' | 'mixed' | 'mixedFacets'> {
   const cols = width * s;
   // Room for half the pixels (at most about that many are mixed, where walls curve across pixels), grown
-  // if not; the field keeps views of the part used. A field replaced lends its room (same s): the room
-  // is megabytes, and fresh memory costs a page fault per 4 kB.
-  const room = old ? Math.min(old.mixed.buffer.byteLength >> 2, old.mixedFacets.buffer.byteLength / (2 * s * s)) : 0;
+  // if not; the field keeps views of the part used. A field replaced lends its room: the room is
+  // megabytes, and fresh memory costs a page fault per 4 kB.
+  const lent = old ? Math.floor(Math.min(old.mixed.buffer.byteLength / 4, old.mixedFacets.buffer.byteLength / (2 * s * s))) : 0;
   const wanted = Math.max(1024, (width * height) >> 1);
-  let mixedPixels = room >= wanted ? new Uint32Array(old!.mixed.buffer, 0, room) : new Uint32Array(wanted);
-  let mixedFacets = room >= wanted ? new Uint16Array(old!.mixedFacets.buffer, 0, room * s * s) : new Uint16Array(mixedPixels.length * s * s);
+  let mixedPixels = lent >= wanted ? new Uint32Array(old!.mixed.buffer, 0, lent) : new Uint32Array(wanted);
+  let mixedFacets = lent >= wanted ? new Uint16Array(old!.mixedFacets.buffer, 0, lent * s * s) : new Uint16Array(mixedPixels.length * s * s);
   let count = 0;
   for (let py = 0, p = 0; py < height; py++) {
     const rowBase = py * s * cols;

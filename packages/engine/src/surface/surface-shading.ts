@@ -59,8 +59,8 @@ export function shadeHeightField(field: HeightField, light: SurfaceLight, tint: 
   const { width, height, supersample: s, pixelFacet, mixed, mixedFacets } = field;
   // Every pixel is written below, so an earlier picture of the same size can be painted over: 3 MB of
   // fresh memory a reshade at 1280 × 620 costs more than the shading on a machine slow to fault pages in.
-  const out = into?.length === width * height * 4 && into.byteOffset === 0 ? into : new Uint8ClampedArray(width * height * 4);
-  const words = new Uint32Array(out.buffer);
+  const out = into?.length === width * height * 4 && into.byteOffset % 4 === 0 ? into : new Uint8ClampedArray(width * height * 4);
+  const words = new Uint32Array(out.buffer, out.byteOffset, out.length >> 2); // `into` may be a view of a larger buffer
   // The facets' colours as packed RGBA words (in the platform's byte order), one lookup a pixel.
   const packed = new Uint32Array(FACET_BINS + 1);
   for (let f = 0; f <= FACET_BINS; f++) packed[f] = packWord(srgbByteByTable(linear[3 * f]), srgbByteByTable(linear[3 * f + 1]), srgbByteByTable(linear[3 * f + 2]));

@@ -107,11 +107,18 @@ function paint(lit: OffscreenCanvas, fieldMs: number): void {
   if (!shown) return;
   const { field, id } = shown;
   const started = performance.now();
-  if (picture?.width !== field.width || picture.height !== field.height) picture = new ImageData(field.width, field.height);
+  if (picture?.width !== field.width || picture.height !== field.height) picture = pictureOf(field.width, field.height, picture);
   shadeHeightField(field, light, tint, picture.data);
   if (lit.width !== field.width || lit.height !== field.height) [lit.width, lit.height] = [field.width, field.height];
   lit.getContext('2d')?.putImageData(picture, 0, 0);
   reply({ id, plate: 'lit', fine: shown.fine, fieldMs, paintMs: performance.now() - started });
+}
+
+/** A picture of w × h over the last one's memory when it has room (the plate's height changes a little from study to study). */
+function pictureOf(w: number, h: number, last: ImageData | null): ImageData {
+  const bytes = w * h * 4;
+  const buffer = last && last.data.buffer.byteLength >= bytes ? last.data.buffer : new ArrayBuffer(4 * Math.ceil(w * h * 1.125));
+  return new ImageData(new Uint8ClampedArray(buffer as ArrayBuffer, 0, bytes), w, h);
 }
 
 /**
