@@ -59,6 +59,10 @@ export interface HeightFieldInput {
   reuse?: HeightField | null;
 }
 
+/**
+ * A field's arrays may be views of larger buffers (memory lent by the field it replaced, or room kept
+ * to spare): read their `length`, not their `buffer`, and copy rather than transfer them.
+ */
 export interface HeightField {
   width: number;
   height: number;
@@ -143,7 +147,7 @@ function pixelFacets(facet: Uint16Array, width: number, height: number, s: numbe
   // megabytes, and fresh memory costs a page fault per 4 kB.
   const lent = old ? Math.floor(Math.min(old.mixed.buffer.byteLength / 4, old.mixedFacets.buffer.byteLength / (2 * s * s))) : 0;
   const wanted = Math.max(1024, (width * height) >> 1);
-  let mixedPixels = lent >= wanted ? new Uint32Array(old!.mixed.buffer, 0, lent) : new Uint32Array(wanted);
+  let mixedPixels = lent >= wanted ? new Uint32Array(old!.mixed.buffer, 0, lent) : new Uint32Array(Math.ceil(wanted * 1.125));
   let mixedFacets = lent >= wanted ? new Uint16Array(old!.mixedFacets.buffer, 0, lent * s * s) : new Uint16Array(mixedPixels.length * s * s);
   let count = 0;
   for (let py = 0, p = 0; py < height; py++) {

@@ -10,12 +10,12 @@ import type { PlateReply, PlateRequest } from './plate-messages';
  * the lit plate. Messages that arrive while it works replace the waiting ones of their kind, so a
  * slider dragged fast paints only its newest position.
  *
- * Where the supersampled surface is slow (over COARSE_WORTH_MS), a new study is shown first from one
- * sample a pixel, a quarter of the work, and the anti-aliased surface follows unless a newer study
- * overtakes it: while a maker edits, the plate keeps up with the edits and sharpens when they pause.
+ * Where the last anti-aliased surface was slow (over COARSE_WORTH_MS), a new study is shown first from
+ * one sample a pixel (about two fifths of the work) and the anti-aliased surface follows once that frame
+ * is out, unless a newer study has come by then.
  */
 type Surface = Extract<PlateRequest, { kind: 'surface' }>;
-/** A supersampled surface that took longer than this (ms) is preceded by a one-sample-a-pixel one. */
+/** When the last anti-aliased surface took longer than this (ms), the next study shows one sample a pixel first. */
 const COARSE_WORTH_MS = 20;
 let plate: 'flat' | 'lit' = 'flat';
 let canvas: OffscreenCanvas | null = null;
@@ -24,8 +24,9 @@ let fine: HeightField | null = null;
 let coarse: HeightField | null = null;
 /** The surface on the plate (a light change reshades it), the request it is of, and whether it is the anti-aliased one. */
 let shown: { field: HeightField; id: number; fine: boolean } | null = null;
-/** The study whose anti-aliased surface is still to come after its quick one. */
+/** The study whose anti-aliased surface is still to come after its quick one, and whether its frame is out. */
 let refine: Surface | null = null;
+let refineDue = false;
 let lastFineMs = 0;
 /** The picture's bytes, written over by each shading of the same size (fresh memory is slow to fault in). */
 let picture: ImageData | null = null;
@@ -70,28 +71,35 @@ function work(): void {
     refine = null;
     if (lastFineMs > COARSE_WORTH_MS) {
       const started = performance.now();
+      shown = null; // its memory may be written over below
       coarse = surfaceOf(next, 1, coarse);
       shown = { field: coarse, id: next.id, fine: false };
       paint(canvas, performance.now() - started);
       refine = next;
+      refineDue = false;
       // The anti-aliased surface once this frame is out (a task started at once would hold the quick
       // picture back until it ends), unless a newer study comes first.
-      afterFrame(schedule);
+      afterFrame(() => {
+        if (refine !== next) return;
+        refineDue = true;
+        schedule();
+      });
       return;
     }
     drawFine(next, canvas);
-  } else if (refine && !relit) {
+  } else if (refine && refineDue && !relit) {
     const study = refine;
     refine = null;
     drawFine(study, canvas);
   } else if (relit && shown) {
     paint(canvas, 0);
-    if (refine) afterFrame(schedule);
+    if (refine && refineDue) afterFrame(schedule);
   }
 }
 
 function drawFine(study: Surface, lit: OffscreenCanvas): void {
   const started = performance.now();
+  shown = null; // its memory may be written over below
   fine = surfaceOf(study, 2, fine);
   lastFineMs = performance.now() - started;
   shown = { field: fine, id: study.id, fine: true };
@@ -108,7 +116,8 @@ function paint(lit: OffscreenCanvas, fieldMs: number): void {
   const { field, id } = shown;
   const started = performance.now();
   if (picture?.width !== field.width || picture.height !== field.height) picture = pictureOf(field.width, field.height, picture);
-  shadeHeightField(field, light, tint, picture.data);
+  const rgba = shadeHeightField(field, light, tint, picture.data);
+  if (rgba !== picture.data) picture = new ImageData(rgba as Uint8ClampedArray<ArrayBuffer>, field.width, field.height);
   if (lit.width !== field.width || lit.height !== field.height) [lit.width, lit.height] = [field.width, field.height];
   lit.getContext('2d')?.putImageData(picture, 0, 0);
   reply({ id, plate: 'lit', fine: shown.fine, fieldMs, paintMs: performance.now() - started });
@@ -129,10 +138,23 @@ function reply(message: PlateReply): void {
   afterFrame(() => self.postMessage(message));
 }
 
-/** Runs `then` at the worker's next animation frame (OffscreenCanvas workers have one), else after a task. */
+/** Frames may stop (a hidden page): no reply or refinement waits longer than this for one (ms). */
+const FRAME_WAIT_MS = 100;
+
+/** Runs `then` once, at the worker's next animation frame (OffscreenCanvas workers have one) or after FRAME_WAIT_MS, whichever is first. */
 function afterFrame(then: () => void): void {
-  if (typeof self.requestAnimationFrame === 'function') self.requestAnimationFrame(() => then());
-  else setTimeout(then, 0);
+  if (typeof self.requestAnimationFrame !== 'function') {
+    setTimeout(then, 0);
+    return;
+  }
+  let done = false;
+  const once = () => {
+    if (done) return;
+    done = true;
+    then();
+  };
+  self.requestAnimationFrame(once);
+  setTimeout(once, FRAME_WAIT_MS);
 }
 
 /** The flat plate: each engraved line in ink, as wide as its groove (at least a hairline), at true scale. */
