@@ -19,8 +19,8 @@ import { DesignCompute } from '../../studio/compute/design-compute';
       <p class="bw-form-alert" role="alert">The engine could not draw this design: {{ error }}</p>
     }
     <div class="drawings">
-      <bw-line-study class="study" [study]="views()?.study ?? null" [units]="design().units" [direction]="design().study.direction"
-                     [period]="views()?.profile?.period ?? null" idPrefix="entry-" />
+      <bw-line-study class="study" [study]="compute.study()?.study ?? null" [units]="design().units" [direction]="design().study.direction"
+                     [period]="compute.study()?.period ?? null" idPrefix="entry-" />
       <bw-bar-profile class="profile" [profile]="views()?.profile ?? null" [units]="design().units" [warnings]="full()?.profile?.warnings ?? []"
                       [crest]="full()?.profile?.crest" [depth]="full()?.plan?.depth ?? null" [other]="views()?.companion ?? null"
                       [nominal]="views()?.placement?.nominal ?? null" [placement]="views()?.placement?.text ?? ''"

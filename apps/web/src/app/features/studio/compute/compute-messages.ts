@@ -1,6 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import type { Companion } from '@barwright/engine';
-import type { DesignViews } from './design-views';
+import type { DesignViews, StudyLead } from './design-views';
 
 /** Page → worker: compute the views of this design (the newest request replaces any waiting one). */
 export interface ComputeRequest {
@@ -10,5 +10,12 @@ export interface ComputeRequest {
   companion?: Companion;
 }
 
-/** Worker → page: one stage of the views of request `id`, or the engine's error. */
-export type ComputeReply = { id: number; views: DesignViews } | { id: number; error: string };
+/**
+ * Worker → page, for each stage of request `id`: first the line study alone (`lead`), as soon as it is
+ * computed, so the plates start on it while the worker finishes the bar's drawings and the plan; then
+ * the rest of the views (`views`, without the study the lead carried); or the engine's error.
+ */
+export type ComputeReply =
+  | { id: number; lead: StudyLead }
+  | { id: number; views: Omit<DesignViews, 'study'> }
+  | { id: number; error: string };

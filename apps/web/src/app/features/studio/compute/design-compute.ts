@@ -2,7 +2,7 @@ import { computed, DestroyRef, inject, Injectable, signal } from '@angular/core'
 import type { Design } from '@barwright/contracts';
 import type { Companion } from '@barwright/engine';
 import type { ComputeReply, ComputeRequest } from './compute-messages';
-import { computeDesignViews, type DesignViews } from './design-views';
+import { computeDesignViews, type DesignViews, type StudyLead } from './design-views';
 
 /** How long a refinement may run before the views say they are still working (ms). */
 const PROGRESS_AFTER_MS = 150;
@@ -17,6 +17,7 @@ export class DesignCompute {
   private nextId = 0;
   private readonly requested = signal(0);
   private readonly shown = signal<{ id: number; views: DesignViews } | null>(null);
+  private readonly lead = signal<{ id: number; lead: StudyLead } | null>(null);
   private readonly refined = signal<{ id: number; views: DesignViews } | null>(null);
   private readonly slow = signal(false);
   private readonly failure = signal<string | null>(null);
@@ -28,6 +29,11 @@ export class DesignCompute {
 
   /** The newest views computed (a preview until the full computation lands). */
   readonly views = computed(() => this.shown()?.views ?? null);
+  /**
+   * The newest line study with its stage and period: it comes ahead of the rest of its views, so the
+   * plates draw it while the worker finishes the bar's drawings (the same object `views` carries after).
+   */
+  readonly study = computed(() => this.lead()?.lead ?? null);
   /** The newest full computation: the cut plan and the warnings come from it. */
   readonly full = computed(() => this.refined()?.views ?? null);
   /** True while the full computation of the newest design has been running for a while. */
@@ -59,7 +65,7 @@ export class DesignCompute {
       this.worker.postMessage({ id, design, companion } satisfies ComputeRequest);
     } else {
       // No worker (an old browser): compute here, after this frame, full stage only.
-      setTimeout(() => this.receive(computeHere(id, design, companion)), 0);
+      setTimeout(() => computeHere(id, design, companion).forEach((reply) => this.receive(reply)), 0);
     }
   }
 
@@ -74,14 +80,22 @@ export class DesignCompute {
       if (reply.id === this.requested()) this.failure.set(reply.error);
       return;
     }
+    if ('lead' in reply) {
+      if (reply.id >= (this.lead()?.id ?? 0)) this.lead.set({ id: reply.id, lead: reply.lead });
+      return;
+    }
     const sent = this.sentAt.get(reply.id);
     if (sent !== undefined) {
       this.latency.set(performance.now() - sent);
       this.sentAt.delete(reply.id);
     }
-    if (reply.id >= (this.shown()?.id ?? 0)) this.shown.set({ id: reply.id, views: reply.views });
-    if (reply.views.stage === 'full' && reply.id >= (this.refined()?.id ?? 0)) {
-      this.refined.set({ id: reply.id, views: reply.views });
+    // The worker sends each stage's lead just before the rest: the newest lead is this stage's.
+    const lead = this.lead();
+    if (lead?.id !== reply.id || lead.lead.stage !== reply.views.stage) return;
+    const views: DesignViews = { ...reply.views, study: lead.lead.study };
+    if (reply.id >= (this.shown()?.id ?? 0)) this.shown.set({ id: reply.id, views });
+    if (views.stage === 'full' && reply.id >= (this.refined()?.id ?? 0)) {
+      this.refined.set({ id: reply.id, views });
       if (reply.id === this.requested()) {
         this.slow.set(false);
         this.failure.set(null);
@@ -99,10 +113,12 @@ function createWorker(): Worker | null {
   }
 }
 
-function computeHere(id: number, design: Design, companion?: Companion): ComputeReply {
+/** The worker's replies, computed on the page: the lead, then the rest. */
+function computeHere(id: number, design: Design, companion?: Companion): ComputeReply[] {
   try {
-    return { id, views: computeDesignViews(design, 'full', companion) };
+    const { study, ...views } = computeDesignViews(design, 'full', companion);
+    return [{ id, lead: { stage: 'full', study, period: views.profile.period } }, { id, views }];
   } catch (error) {
-    return { id, error: error instanceof Error ? error.message : String(error) };
+    return [{ id, error: error instanceof Error ? error.message : String(error) }];
   }
 }

@@ -1,10 +1,10 @@
 /// <reference lib="webworker" />
 import type { ComputeReply, ComputeRequest } from './compute-messages';
-import { computeDesignViews, transferables, type ComputeStage, type DrawingContext } from './design-views';
+import { computeDesignViews, studyTransferables, transferables, type ComputeStage, type DrawingContext, type StudyLead } from './design-views';
 
 /*
  * The engine off the page's thread. For each request: a quick preview, then the full computation
- * (the full alone while it is fast).
+ * (the full alone while it is fast); each stage sends its line study first, then the rest.
  * Requests that arrive meanwhile replace the waiting one, so a slider dragged fast computes only
  * the latest value; between the two stages the worker yields so a newer request can overtake.
  */
@@ -56,7 +56,9 @@ async function work(): Promise<void> {
 
 function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
   try {
-    const views = computeDesignViews(request.design, stage, request.companion, lastMarks);
+    // The study goes ahead (its lines handed over, so the rest is sent without it).
+    const lead = (lead: StudyLead) => self.postMessage({ id, lead } satisfies ComputeReply, { transfer: studyTransferables(lead.study) });
+    const { study: _sent, ...views } = computeDesignViews(request.design, stage, request.companion, lastMarks, lead);
     if (views.plan) lastMarks = { warnings: views.profile.warnings, depth: views.plan.depth };
     self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
   } catch (error) {

@@ -1,7 +1,7 @@
 import { EXAMPLE_DESIGN } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import { profileDrawing } from '../../../shared/views/profile-drawing';
-import { computeDesignViews } from './design-views';
+import { computeDesignViews, type StudyLead } from './design-views';
 
 describe('the bar drawings made beside the views (in the worker)', () => {
   it('are the drawings the bar view would make of the full computation, in both modes', () => {
@@ -23,5 +23,15 @@ describe('the bar drawings made beside the views (in the worker)', () => {
     const views = computeDesignViews(EXAMPLE_DESIGN, 'preview', 'opposite');
     expect(views.drawings.companion).toBe('opposite');
     expect(views.drawings.detail.upper).not.toBe('');
+  });
+});
+
+describe('the line study sent ahead of the rest of the views', () => {
+  it('is given once, and is the study the views carry with their stage and period', () => {
+    const leads: StudyLead[] = [];
+    const views = computeDesignViews(EXAMPLE_DESIGN, 'full', undefined, undefined, (lead) => leads.push(lead));
+    expect(leads).toHaveLength(1);
+    expect(leads[0]).toEqual({ stage: 'full', study: views.study, period: views.profile.period });
+    expect(leads[0].study).toBe(views.study);
   });
 });

@@ -46,23 +46,40 @@ export interface DrawingContext {
   depth: number | null;
 }
 
-/** Runs the engine on a valid design. Pure apart from reading the clock. */
-export function computeDesignViews(design: Design, stage: ComputeStage, companion?: Companion, context?: DrawingContext): DesignViews {
+/** The line study of one stage, sent ahead of the rest of the views (the plates need nothing else). */
+export interface StudyLead {
+  stage: ComputeStage;
+  study: StudyData;
+  /** The period on the bar, mm (the study's windows are in periods). */
+  period: number;
+}
+
+/**
+ * Runs the engine on a valid design. Pure apart from reading the clock and calling `onStudy` with the
+ * line study as soon as it is known, before the bar's drawings and the plan (about half the time).
+ */
+export function computeDesignViews(
+  design: Design,
+  stage: ComputeStage,
+  companion?: Companion,
+  context?: DrawingContext,
+  onStudy?: (lead: StudyLead) => void,
+): DesignViews {
   const started = performance.now();
   const step = stage === 'preview' ? previewStep(design) : undefined;
   const profile = computeProfile(design, step === undefined ? {} : { step });
-  const study = computeLineStudy(design, profile);
-  const plan = stage === 'full' ? planCut(design, profile) : null;
   const mm = toMm(design);
+  const study = { ...studyData(computeLineStudy(design, profile)), depth: mm.study.depth, vAngle: mm.study.vAngle };
+  onStudy?.({ stage, study, period: profile.period });
+  const plan = stage === 'full' ? planCut(design, profile) : null;
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
-  const groove = { depth: mm.study.depth, vAngle: mm.study.vAngle };
   const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion })), ...sizes } } : null;
   const shown = { ...profileData(profile), ...sizes };
   const placement = placementViews(design, profile);
   const marks: DrawingContext = plan ? { warnings: shown.warnings, depth: plan.depth } : (context ?? { warnings: [], depth: null });
   const drawings = profileDrawings(shown, other, placement, marks);
   return {
-    ...{ stage, profile: shown, study: { ...studyData(study), ...groove }, plan },
+    ...{ stage, profile: shown, study, plan },
     ...{ companion: other, placement, drawings, ms: performance.now() - started },
   };
 }
@@ -120,10 +137,19 @@ export function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyDat
   return { spacing: s.spacing, width: s.width, length: s.length, lines };
 }
 
-/** The buffers of a result, handed over to the page without copying (each once: arrays may share one). */
-export function transferables(views: DesignViews): ArrayBuffer[] {
+/** The buffers of a result but its study, handed over to the page without copying (each once: arrays may share one). */
+export function transferables(views: Omit<DesignViews, 'study'>): ArrayBuffer[] {
   const p = views.profile;
   const c = views.companion?.profile;
   const extra = [...(c ? [c.x, c.cutter, c.bar, c.follower] : []), ...(views.placement ? [views.placement.nominal] : [])];
-  return [...new Set([p.x, p.cutter, p.bar, p.follower, ...views.study.lines, ...extra].map((a) => a.buffer as ArrayBuffer))];
+  return buffersOf([p.x, p.cutter, p.bar, p.follower, ...extra]);
+}
+
+/** The buffers of a study's lines, handed over with its lead. */
+export function studyTransferables(study: StudyData): ArrayBuffer[] {
+  return buffersOf(study.lines);
+}
+
+function buffersOf(arrays: Float64Array[]): ArrayBuffer[] {
+  return [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))];
 }

@@ -22,8 +22,8 @@ import { PointerArea } from './pointer-area/pointer-area';
                       [companion]="companion()" [drawn]="views()?.drawings ?? null" (companionChange)="chooseCompanion($event)" />
     </bw-pointer-area>
     <bw-pointer-area view="study">
-      <bw-line-study [study]="views()?.study ?? null" [units]="units()" [direction]="session.lastValid()?.study?.direction"
-                     [period]="views()?.profile?.period ?? null" [draft]="views()?.stage === 'preview'" />
+      <bw-line-study [study]="study()?.study ?? null" [units]="units()" [direction]="session.lastValid()?.study?.direction"
+                     [period]="study()?.period ?? null" [draft]="study()?.stage === 'preview'" />
     </bw-pointer-area>
     <bw-cut-plan [plan]="full()?.plan ?? null" [units]="units()" [working]="compute.working()"
                  emptyNote="The cut plan appears when the design’s fields are all valid." />
@@ -44,6 +44,7 @@ export class StudioViews {
   protected readonly compute = inject(DesignCompute);
   protected readonly session = inject(CollabSession);
   protected readonly views = this.compute.views;
+  protected readonly study = this.compute.study;
   protected readonly full = this.compute.full;
   protected readonly units = computed(() => this.session.lastValid()?.units ?? 'mm');
   protected readonly companion = computed(() => this.compute.companion() ?? 'none');
