@@ -41,6 +41,27 @@ function clientError(error: unknown): { status: number; body: ApiError } | undef
   return { status, body: { code: status === 404 ? 'not_found' : 'bad_request', message } };
 }
 
+/**
+ * PostgreSQL's refusals that mean another request changed the data between this one's checks and its
+ * write (a board or a rack rosette removed meanwhile, the same name saved twice at once): the client's
+ * answer is to reload and try again, not a server error. By SQLSTATE (the same on PGlite and a server).
+ */
+const DATABASE_CONFLICTS: Record<string, string> = {
+  '23503': 'Something this refers to was removed meanwhile. Reload the page and try again.',
+  '23505': 'This clashes with something saved meanwhile. Reload the page and try again.',
+  '40001': 'Another change to the same data came at the same moment. Try again.',
+  '40P01': 'Another change to the same data came at the same moment. Try again.',
+};
+
+/** The conflict a database error (or the driver's or Drizzle's wrapping of one, its `cause`) reports, if any. */
+function databaseConflict(error: unknown): ApiError | undefined {
+  for (let e = error, depth = 0; e && typeof e === 'object' && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === 'string' && Object.hasOwn(DATABASE_CONFLICTS, code)) return { code: 'conflict', message: DATABASE_CONFLICTS[code] };
+  }
+  return undefined;
+}
+
 /** The one error handler, registered last: known errors keep their status, the rest become 500 without details. */
 export function errorMiddleware(log: (error: unknown) => void): ErrorRequestHandler {
   return (error, _req, res, next) => {
@@ -48,9 +69,13 @@ export function errorMiddleware(log: (error: unknown) => void): ErrorRequestHand
     let body: ApiErrorBody;
     let status: number;
     const refused = error instanceof HttpError ? undefined : clientError(error);
+    const conflict = error instanceof HttpError || refused ? undefined : databaseConflict(error);
     if (error instanceof HttpError) {
       status = error.status;
       body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
+    } else if (conflict) {
+      status = 409;
+      body = { error: conflict };
     } else if (refused) {
       status = refused.status;
       body = { error: refused.body };
