@@ -193,8 +193,8 @@ async function main(): Promise<void> {
   }
 }
 
-/** Types `value` into the editor's field with no other page on the design; resolves with the ms from the input to the last view redrawn. */
-async function timeLocalEdit(editor: Page, testId: string, value: string): Promise<number> {
+/** Types `value` into the editor's field with no other page on the design; resolves with the ms from the input to the last view redrawn and to every view showing it. */
+async function timeLocalEdit(editor: Page, testId: string, value: string): Promise<{ drawn: number; shown: number }> {
   await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.first = {}; b.log = []; });
   await editor.getByTestId(testId).fill(value);
   await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000 });
