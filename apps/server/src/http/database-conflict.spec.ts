@@ -17,6 +17,7 @@ const drivers = await availableDrivers();
 describe.each(drivers)('a write refused by the database for a change made meanwhile, on %s', (driver) => {
   let database: TestDatabase;
   const logged: unknown[] = [];
+  const warned: string[] = [];
   beforeAll(async () => {
     database = await openTestDatabase(driver);
   });
@@ -28,7 +29,7 @@ describe.each(drivers)('a write refused by the database for a change made meanwh
     app.post('/write', async () => {
       await write();
     });
-    app.use(errorMiddleware((error) => logged.push(error)));
+    app.use(errorMiddleware((error) => logged.push(error), (message) => warned.push(message)));
     return request(app).post('/write');
   }
 
@@ -36,6 +37,8 @@ describe.each(drivers)('a write refused by the database for a change made meanwh
     const res = await answer(() => database.db.insert(boards).values({ name: 'Orphan', ownerId: randomUUID() }));
     expect(res.status).toBe(409);
     expect(res.body.error).toEqual({ code: 'conflict', message: expect.stringMatching(/removed meanwhile.*try again/) });
+    // Noted for the server's keeper by SQLSTATE, constraint and table, without the values written.
+    expect(warned.at(-1)).toMatch(/^23503 \S+ on boards$/);
   });
 
   it('answers 409 when the same unique value was saved meanwhile', async () => {
@@ -45,12 +48,31 @@ describe.each(drivers)('a write refused by the database for a change made meanwh
     const res = await answer(() => database.db.insert(users).values(user));
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('conflict');
+    expect(warned.at(-1)).toMatch(/^23505 \S+ on users$/);
+    expect(warned.at(-1)).not.toContain(email);
   });
 
-  it('does not log a conflict, and still answers 500, logged, for a database error that is the server’s own', async () => {
+  it('logs a conflict only as a warning, and still answers 500, logged, for a database error that is the server’s own', async () => {
     expect(logged).toHaveLength(0);
+    expect(warned).toHaveLength(2);
     const res = await answer(() => database.db.execute('select * from no_such_table'));
     expect(res.status).toBe(500);
+    expect(logged).toHaveLength(1);
+  });
+});
+
+describe('an error object that cannot be read', () => {
+  it('answers 500 and is logged, rather than throwing in the error handler', async () => {
+    const logged: unknown[] = [];
+    const app = express();
+    app.post('/write', () => {
+      const hostile = Object.create(null, { code: { get() { throw new Error('no reading me'); } } });
+      throw hostile;
+    });
+    app.use(errorMiddleware((error) => logged.push(error), () => {}));
+    const res = await request(app).post('/write');
+    expect(res.status).toBe(500);
+    expect(res.body.error.code).toBe('internal');
     expect(logged).toHaveLength(1);
   });
 });

@@ -53,17 +53,37 @@ const DATABASE_CONFLICTS: Record<string, string> = {
   '40P01': 'Another change to the same data came at the same moment. Try again.',
 };
 
-/** The conflict a database error (or the driver's or Drizzle's wrapping of one, its `cause`) reports, if any. */
-function databaseConflict(error: unknown): ApiError | undefined {
-  for (let e = error, depth = 0; e && typeof e === 'object' && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
-    const code = (e as { code?: unknown }).code;
-    if (typeof code === 'string' && Object.hasOwn(DATABASE_CONFLICTS, code)) return { code: 'conflict', message: DATABASE_CONFLICTS[code] };
+/** A database conflict: what the client is told, and what the server's warning names (never the values). */
+interface DatabaseConflict {
+  body: ApiError;
+  /** SQLSTATE, constraint and table, e.g. "23503 boards_owner_id_users_id_fk on boards". */
+  summary: string;
+}
+
+/**
+ * The conflict a database error (or the driver's or Drizzle's wrapping of one, its `cause`) reports, if any.
+ * Never throws: an error object whose getters throw is simply not a conflict.
+ */
+function databaseConflict(error: unknown): DatabaseConflict | undefined {
+  try {
+    for (let e = error, depth = 0; e && typeof e === 'object' && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
+      const { code, constraint, table } = e as { code?: unknown; constraint?: unknown; table?: unknown };
+      if (typeof code === 'string' && Object.hasOwn(DATABASE_CONFLICTS, code)) {
+        const named = [typeof constraint === 'string' ? constraint : '', typeof table === 'string' ? `on ${table}` : ''].filter(Boolean);
+        return { body: { code: 'conflict', message: DATABASE_CONFLICTS[code] }, summary: [code, ...named].join(' ') };
+      }
+    }
+  } catch {
+    // An error that cannot be read is answered as the server's own (500, logged).
   }
   return undefined;
 }
 
+/** Where a conflict is noted: a warning, since a client caused it and was told, yet many of them say a route races. */
+const warnConflict = (summary: string) => console.warn(`database conflict answered 409: ${summary}`);
+
 /** The one error handler, registered last: known errors keep their status, the rest become 500 without details. */
-export function errorMiddleware(log: (error: unknown) => void): ErrorRequestHandler {
+export function errorMiddleware(log: (error: unknown) => void, warn: (message: string) => void = warnConflict): ErrorRequestHandler {
   return (error, _req, res, next) => {
     if (res.headersSent) return next(error);
     let body: ApiErrorBody;
@@ -74,8 +94,9 @@ export function errorMiddleware(log: (error: unknown) => void): ErrorRequestHand
       status = error.status;
       body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
     } else if (conflict) {
+      warn(conflict.summary);
       status = 409;
-      body = { error: conflict };
+      body = { error: conflict.body };
     } else if (refused) {
       status = refused.status;
       body = { error: refused.body };
