@@ -27,7 +27,7 @@ function vitestSuite(args, report) {
 }
 
 vitestSuite(['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=.tmp/vitest.json'], '.tmp/vitest.json');
-// The web app's component specs (*.component.spec.ts): Angular's unit-test builder compiles them, then Vitest runs them in jsdom.
+// The web app's component and service specs (*.component.spec.ts, *.service.spec.ts): Angular's unit-test builder compiles them, then Vitest runs them in jsdom.
 vitestSuite(['ng', 'test', 'web', '--reporters=default', '--reporters=json', '--output-file=.tmp/vitest-components.json'], '.tmp/vitest-components.json');
 
 if (built === 0) {

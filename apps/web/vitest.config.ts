@@ -6,8 +6,9 @@ export default defineConfig({
   root: fileURLToPath(new URL('.', import.meta.url)),
   test: {
     include: ['src/**/*.spec.ts'],
-    // Component specs (*.component.spec.ts) need the Angular compiler: `ng test web` runs them (angular.json).
-    exclude: [...configDefaults.exclude, 'src/**/*.component.spec.ts'],
+    // Component and service specs (*.component.spec.ts, *.service.spec.ts) need the Angular compiler
+    // (templates, decorators): `ng test web` runs them (angular.json).
+    exclude: [...configDefaults.exclude, 'src/**/*.component.spec.ts', 'src/**/*.service.spec.ts'],
     environment: 'node',
     setupFiles: ['src/test-setup.ts'],
   },

@@ -39,7 +39,7 @@ export class DesignCompute {
   /** True while the full computation of the newest design has been running for a while. */
   readonly working = this.slow.asReadonly();
   readonly error = this.failure.asReadonly();
-  /** From handing the design to the worker to the first views back, ms (the redraw follows in the next frame). */
+  /** From handing the design to the worker to each stage's views back (after its study), ms; the redraw follows in the next frame. */
   readonly lastLatencyMs = this.latency.asReadonly();
   /** The companion bar the bar view shows beside the design's own (null: none). */
   readonly companion = this.companionKind.asReadonly();
@@ -78,6 +78,9 @@ export class DesignCompute {
   private receive(reply: ComputeReply): void {
     if ('error' in reply) {
       if (reply.id === this.requested()) this.failure.set(reply.error);
+      // A stage that sent its study and then failed: the plates go back to the study of the views shown,
+      // so they never show a study whose bar and cut plan do not exist.
+      if (this.lead()?.id === reply.id) this.lead.set(leadOf(this.shown()));
       return;
     }
     if ('lead' in reply) {
@@ -102,6 +105,13 @@ export class DesignCompute {
       }
     }
   }
+}
+
+/** The lead the shown views came with, for going back to it. */
+function leadOf(shown: { id: number; views: DesignViews } | null): { id: number; lead: StudyLead } | null {
+  if (!shown) return null;
+  const { stage, study, profile } = shown.views;
+  return { id: shown.id, lead: { stage, study, period: profile.period } };
 }
 
 function createWorker(): Worker | null {

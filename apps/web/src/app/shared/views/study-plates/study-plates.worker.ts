@@ -172,6 +172,8 @@ function drawFlat(s: Surface, flat: OffscreenCanvas): void {
   ctx.lineJoin = 'round';
   // A stroke per line: one path of every line, stroked at once, took 4× as long in Chromium's software
   // canvas here (26 against 7 ms for the studio's plate, its outline being filled as one shape).
+  // The ink is opaque (a theme colour without alpha): where separate strokes cross, a translucent ink
+  // would darken the crossing, which one path did not.
   for (const xy of s.lines) {
     ctx.beginPath();
     for (let i = 0; i < xy.length; i += 2) {

@@ -1,0 +1,64 @@
+import { DestroyRef, Injector, runInInjectionContext } from '@angular/core';
+import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
+import { describe, expect, it } from 'vitest';
+import type { ComputeReply } from './compute-messages';
+import { DesignCompute } from './design-compute';
+import { computeDesignViews, type StudyLead } from './design-views';
+
+/*
+ * The worker's replies as the page receives them, in the orders they can come: each stage's study
+ * first (`lead`), then the rest of its views, or an error. No request is sent (jsdom has no Worker);
+ * the replies are handed to the service as its worker's would be.
+ */
+const SHORT_BAR: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 30 } };
+
+function service(): { compute: DesignCompute; receive: (reply: ComputeReply) => void } {
+  const injector = Injector.create({ providers: [{ provide: DestroyRef, useValue: { onDestroy: () => () => {} } }] });
+  const compute = runInInjectionContext(injector, () => new DesignCompute());
+  const receive = (reply: ComputeReply) => (compute as unknown as { receive(r: ComputeReply): void }).receive(reply);
+  return { compute, receive };
+}
+
+/** A stage's two replies, as the worker sends them. */
+function replies(id: number, design: Design, stage: 'preview' | 'full'): [ComputeReply, ComputeReply] {
+  const { study, ...views } = computeDesignViews(design, stage);
+  const lead: StudyLead = { stage, study, period: views.profile.period };
+  return [{ id, lead }, { id, views }];
+}
+
+describe('the studio compute service receiving its worker’s replies', () => {
+  it('shows a stage’s views with the study its lead sent ahead', () => {
+    const { compute, receive } = service();
+    const [lead, rest] = replies(1, SHORT_BAR, 'full');
+    receive(lead);
+    expect(compute.study()).toBe((lead as { lead: StudyLead }).lead);
+    expect(compute.views()).toBeNull();
+    receive(rest);
+    expect(compute.views()?.study).toBe((lead as { lead: StudyLead }).lead.study);
+    expect(compute.full()).toBe(compute.views());
+  });
+
+  it('goes back to the shown views’ study when a stage sends its study and then fails', () => {
+    const { compute, receive } = service();
+    replies(1, SHORT_BAR, 'full').forEach(receive);
+    const shownStudy = compute.views()!.study;
+    const [lead] = replies(2, { ...SHORT_BAR, bar: { ...SHORT_BAR.bar, length: 40 } }, 'full');
+    receive(lead);
+    expect(compute.study()?.study).not.toBe(shownStudy);
+    receive({ id: 2, error: 'The bar could not be drawn.' });
+    // The plates never keep a study whose bar and cut plan do not exist.
+    expect(compute.study()?.study).toBe(shownStudy);
+    expect(compute.views()?.study).toBe(shownStudy);
+  });
+
+  it('drops the rest of an older stage once a newer study has come', () => {
+    const { compute, receive } = service();
+    const [oldLead, oldRest] = replies(1, SHORT_BAR, 'full');
+    const [newLead] = replies(2, SHORT_BAR, 'preview');
+    receive(oldLead);
+    receive(newLead);
+    receive(oldRest);
+    expect(compute.views()).toBeNull();
+    expect(compute.study()).toBe((newLead as { lead: StudyLead }).lead);
+  });
+});
