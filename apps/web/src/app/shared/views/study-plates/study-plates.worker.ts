@@ -15,8 +15,15 @@ import type { PlateReply, PlateRequest } from './plate-messages';
  * is out, unless a newer study has come by then.
  */
 type Surface = Extract<PlateRequest, { kind: 'surface' }>;
-/** When the last anti-aliased surface took longer than this (ms), the next study shows one sample a pixel first. */
-const COARSE_WORTH_MS = 20;
+/**
+ * When the last anti-aliased surface took longer than this (ms), the next study shows one sample a pixel
+ * first: for a plate that takes several frames (a large plate on a dense screen). At 20 ms it served the
+ * studio's own plate (13–22 ms alone, up to ~50 ms while the compute worker shares the two cores) and
+ * cost more than it showed: in the studio bench, taken in turns with it off, the quick surface showed
+ * the edit no sooner (p50 103–106 against 104–112 ms), while the extra pass and the frame the refinement
+ * waits for made the last view later (p95 139–190 against 156–249 ms) and gave 1–2 long tasks a run (none off).
+ */
+const COARSE_WORTH_MS = 60;
 let plate: 'flat' | 'lit' = 'flat';
 let canvas: OffscreenCanvas | null = null;
 /** The anti-aliased surface and the quick one: each kept so the next of its kind writes over its memory. */
