@@ -34,11 +34,15 @@ describe.each(drivers)('a write refused by the database for a change made meanwh
   }
 
   it('answers 409 when what it refers to was removed (foreign key)', async () => {
-    const res = await answer(() => database.db.insert(boards).values({ name: 'Orphan', ownerId: randomUUID() }));
+    const ownerId = randomUUID();
+    const loggedBefore = logged.length;
+    const res = await answer(() => database.db.insert(boards).values({ name: 'Orphan', ownerId }));
     expect(res.status).toBe(409);
     expect(res.body.error).toEqual({ code: 'conflict', message: expect.stringMatching(/removed meanwhile.*try again/) });
     // Noted for the server's keeper by SQLSTATE, constraint and table, without the values written.
     expect(warned.at(-1)).toMatch(/^23503 \S+ on boards$/);
+    expect(warned.at(-1)).not.toContain(ownerId);
+    expect(logged).toHaveLength(loggedBefore); // a warning, not an error
   });
 
   it('answers 409 when the same unique value was saved meanwhile', async () => {
@@ -52,27 +56,44 @@ describe.each(drivers)('a write refused by the database for a change made meanwh
     expect(warned.at(-1)).not.toContain(email);
   });
 
-  it('logs a conflict only as a warning, and still answers 500, logged, for a database error that is the server’s own', async () => {
-    expect(logged).toHaveLength(0);
-    expect(warned).toHaveLength(2);
+  it('still answers 500, logged and not as a conflict, for a database error that is the server’s own', async () => {
+    const [loggedBefore, warnedBefore] = [logged.length, warned.length];
     const res = await answer(() => database.db.execute('select * from no_such_table'));
     expect(res.status).toBe(500);
-    expect(logged).toHaveLength(1);
+    expect(logged).toHaveLength(loggedBefore + 1);
+    expect(warned).toHaveLength(warnedBefore);
   });
 });
 
-describe('an error object that cannot be read', () => {
-  it('answers 500 and is logged, rather than throwing in the error handler', async () => {
+describe('an error object that cannot be read, or a warning that fails', () => {
+  function appThrowing(error: () => unknown, warn: (message: string) => void = () => {}) {
     const logged: unknown[] = [];
     const app = express();
     app.post('/write', () => {
-      const hostile = Object.create(null, { code: { get() { throw new Error('no reading me'); } } });
-      throw hostile;
+      throw error();
     });
-    app.use(errorMiddleware((error) => logged.push(error), () => {}));
+    app.use(errorMiddleware((e) => logged.push(e), warn));
+    return { app, logged };
+  }
+  const throwing = (key: string) => Object.create(null, { [key]: { get() { throw new Error('no reading me'); } } });
+
+  it.each(['code', 'cause', 'status', 'statusCode', 'type'])('answers 500 and logs it when reading %s throws', async (key) => {
+    const { app, logged } = appThrowing(() => throwing(key));
     const res = await request(app).post('/write');
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe('internal');
     expect(logged).toHaveLength(1);
+  });
+
+  it('answers 500 when the error is a Proxy that throws on every read', async () => {
+    const { app } = appThrowing(() => new Proxy({}, { get() { throw new Error('no'); }, getPrototypeOf() { throw new Error('no'); } }));
+    expect((await request(app).post('/write')).status).toBe(500);
+  });
+
+  it('still answers 409 when noting the conflict fails', async () => {
+    const { app } = appThrowing(() => Object.assign(new Error('x'), { code: '23505' }), () => { throw new Error('log sink down'); });
+    const res = await request(app).post('/write');
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('conflict');
   });
 });

@@ -60,51 +60,53 @@ interface DatabaseConflict {
   summary: string;
 }
 
-/**
- * The conflict a database error (or the driver's or Drizzle's wrapping of one, its `cause`) reports, if any.
- * Never throws: an error object whose getters throw is simply not a conflict.
- */
+/** The conflict a database error (or the driver's or Drizzle's wrapping of one, its `cause`) reports, if any. */
 function databaseConflict(error: unknown): DatabaseConflict | undefined {
-  try {
-    for (let e = error, depth = 0; e && typeof e === 'object' && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
-      const { code, constraint, table } = e as { code?: unknown; constraint?: unknown; table?: unknown };
-      if (typeof code === 'string' && Object.hasOwn(DATABASE_CONFLICTS, code)) {
-        const named = [typeof constraint === 'string' ? constraint : '', typeof table === 'string' ? `on ${table}` : ''].filter(Boolean);
-        return { body: { code: 'conflict', message: DATABASE_CONFLICTS[code] }, summary: [code, ...named].join(' ') };
-      }
+  for (let e = error, depth = 0; e && typeof e === 'object' && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
+    const { code, constraint, table } = e as { code?: unknown; constraint?: unknown; table?: unknown };
+    if (typeof code === 'string' && Object.hasOwn(DATABASE_CONFLICTS, code)) {
+      const named = [typeof constraint === 'string' ? constraint : '', typeof table === 'string' ? `on ${table}` : ''].filter(Boolean);
+      return { body: { code: 'conflict', message: DATABASE_CONFLICTS[code] }, summary: [code, ...named].join(' ') };
     }
-  } catch {
-    // An error that cannot be read is answered as the server's own (500, logged).
   }
   return undefined;
 }
 
 /** Where a conflict is noted: a warning, since a client caused it and was told, yet many of them say a route races. */
-const warnConflict = (summary: string) => console.warn(`database conflict answered 409: ${summary}`);
+const warnConflict = (summary: string) => console.warn(`[barwright] database conflict answered 409: ${summary}`);
 
 /** The one error handler, registered last: known errors keep their status, the rest become 500 without details. */
 export function errorMiddleware(log: (error: unknown) => void, warn: (message: string) => void = warnConflict): ErrorRequestHandler {
+  const internal: ApiErrorBody = { error: { code: 'internal', message: 'Something went wrong on our side. Try again in a moment.' } };
   return (error, _req, res, next) => {
     if (res.headersSent) return next(error);
-    let body: ApiErrorBody;
-    let status: number;
-    const refused = error instanceof HttpError ? undefined : clientError(error);
-    const conflict = error instanceof HttpError || refused ? undefined : databaseConflict(error);
-    if (error instanceof HttpError) {
-      status = error.status;
-      body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
-    } else if (conflict) {
-      warn(conflict.summary);
-      status = 409;
-      body = { error: conflict.body };
-    } else if (refused) {
-      status = refused.status;
-      body = { error: refused.body };
-    } else {
-      log(error);
-      status = 500;
-      body = { error: { code: 'internal', message: 'Something went wrong on our side. Try again in a moment.' } };
+    let answer: { status: number; body: ApiErrorBody } | undefined;
+    try {
+      answer = classify(error, warn);
+    } catch {
+      // An error object that cannot be read (a throwing getter, a Proxy) is the server's own.
     }
-    res.status(status).json(body);
+    if (!answer) {
+      log(error);
+      answer = { status: 500, body: internal };
+    }
+    res.status(answer.status).json(answer.body);
   };
+}
+
+/** The answer a known error gets (undefined: the server's own, a 500). */
+function classify(error: unknown, warn: (message: string) => void): { status: number; body: ApiErrorBody } | undefined {
+  if (error instanceof HttpError) {
+    return { status: error.status, body: { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) } } };
+  }
+  const refused = clientError(error);
+  if (refused) return { status: refused.status, body: { error: refused.body } };
+  const conflict = databaseConflict(error);
+  if (!conflict) return undefined;
+  try {
+    warn(conflict.summary);
+  } catch {
+    // The warning is for the keeper; the client's answer does not depend on it.
+  }
+  return { status: 409, body: { error: conflict.body } };
 }
