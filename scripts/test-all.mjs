@@ -1,4 +1,4 @@
-// `npm test`: builds the web app, runs every Vitest suite (the web app's component specs through `ng test web`)
+// `npm test`: builds the web app, runs every Vitest suite (the web app's component and service specs through `ng test web`)
 // and every Playwright journey, and ends with one plain line `N passed, N failed` totalling them (the line CI reads).
 import fs from 'node:fs';
 import { spawnSync } from 'node:child_process';

@@ -6,8 +6,8 @@ import { DesignCompute } from './design-compute';
 import { computeDesignViews, type StudyLead } from './design-views';
 
 /*
- * The worker's replies as the page receives them, in the orders they can come: each stage's study
- * first (`lead`), then the rest of its views, or an error. No request is sent (jsdom has no Worker);
+ * The worker's replies as the page receives them, in the orders they can come: for each stage its
+ * study first (`lead`) and the rest of its views straight after, or an error in place of either. No request is sent (jsdom has no Worker);
  * the replies are handed to the service as its worker's would be.
  */
 const SHORT_BAR: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 30 } };
@@ -51,14 +51,34 @@ describe('the studio compute service receiving its worker’s replies', () => {
     expect(compute.views()?.study).toBe(shownStudy);
   });
 
-  it('drops the rest of an older stage once a newer study has come', () => {
+  it('makes a preview’s study final when the full computation after it fails, so the lit plate draws it', () => {
     const { compute, receive } = service();
-    const [oldLead, oldRest] = replies(1, SHORT_BAR, 'full');
-    const [newLead] = replies(2, SHORT_BAR, 'preview');
-    receive(oldLead);
-    receive(newLead);
-    receive(oldRest);
-    expect(compute.views()).toBeNull();
-    expect(compute.study()).toBe((newLead as { lead: StudyLead }).lead);
+    const longer = { ...SHORT_BAR, bar: { ...SHORT_BAR.bar, length: 40 } };
+    replies(1, longer, 'preview').forEach(receive);
+    expect(compute.studyIsDraft()).toBe(true);
+    const previewStudy = compute.views()!.study;
+    const [fullLead] = replies(1, longer, 'full');
+    receive(fullLead);
+    expect(compute.studyIsDraft()).toBe(false);
+    receive({ id: 1, error: 'The cut plan could not be made.' });
+    expect(compute.study()?.study).toBe(previewStudy);
+    expect(compute.studyIsDraft()).toBe(false);
+  });
+
+  it('does the same when the full computation fails before its study', () => {
+    const { compute, receive } = service();
+    replies(1, SHORT_BAR, 'preview').forEach(receive);
+    receive({ id: 1, error: 'The bar could not be computed.' });
+    expect(compute.study()?.study).toBe(compute.views()!.study);
+    expect(compute.studyIsDraft()).toBe(false);
+  });
+
+  it('leaves the study alone for an error of an older request', () => {
+    const { compute, receive } = service();
+    replies(2, SHORT_BAR, 'full').forEach(receive);
+    const study = compute.study();
+    receive({ id: 1, error: 'stale' });
+    expect(compute.study()).toBe(study);
+    expect(compute.views()?.study).toBe(study?.study);
   });
 });

@@ -17,7 +17,8 @@ export class DesignCompute {
   private nextId = 0;
   private readonly requested = signal(0);
   private readonly shown = signal<{ id: number; views: DesignViews } | null>(null);
-  private readonly lead = signal<{ id: number; lead: StudyLead } | null>(null);
+  /** `settled`: no later stage will replace this study (it was put back after a stage failed), so even a preview's is final. */
+  private readonly lead = signal<{ id: number; lead: StudyLead; settled?: boolean } | null>(null);
   private readonly refined = signal<{ id: number; views: DesignViews } | null>(null);
   private readonly slow = signal(false);
   private readonly failure = signal<string | null>(null);
@@ -34,12 +35,20 @@ export class DesignCompute {
    * plates draw it while the worker finishes the bar's drawings (the same object `views` carries after).
    */
   readonly study = computed(() => this.lead()?.lead ?? null);
+  /**
+   * True while the study is a preview's with the full computation to follow: the plates then draw only
+   * the flat plate (the lit one waits for the final study).
+   */
+  readonly studyIsDraft = computed(() => {
+    const lead = this.lead();
+    return lead?.lead.stage === 'preview' && !lead.settled;
+  });
   /** The newest full computation: the cut plan and the warnings come from it. */
   readonly full = computed(() => this.refined()?.views ?? null);
   /** True while the full computation of the newest design has been running for a while. */
   readonly working = this.slow.asReadonly();
   readonly error = this.failure.asReadonly();
-  /** From handing the design to the worker to each stage's views back (after its study), ms; the redraw follows in the next frame. */
+  /** From handing the design to the worker to the first of its views back (after their study), ms; the redraw follows in the next frame. */
   readonly lastLatencyMs = this.latency.asReadonly();
   /** The companion bar the bar view shows beside the design's own (null: none). */
   readonly companion = this.companionKind.asReadonly();
@@ -79,7 +88,8 @@ export class DesignCompute {
     if ('error' in reply) {
       if (reply.id === this.requested()) this.failure.set(reply.error);
       // A stage that sent its study and then failed: the plates go back to the study of the views shown,
-      // so they never show a study whose bar and cut plan do not exist.
+      // so they never show a study whose bar and cut plan do not exist; nothing follows it, so the lit
+      // plate draws it even when it is a preview's.
       if (this.lead()?.id === reply.id) this.lead.set(leadOf(this.shown()));
       return;
     }
@@ -108,10 +118,10 @@ export class DesignCompute {
 }
 
 /** The lead the shown views came with, for going back to it. */
-function leadOf(shown: { id: number; views: DesignViews } | null): { id: number; lead: StudyLead } | null {
+function leadOf(shown: { id: number; views: DesignViews } | null): { id: number; lead: StudyLead; settled: true } | null {
   if (!shown) return null;
   const { stage, study, profile } = shown.views;
-  return { id: shown.id, lead: { stage, study, period: profile.period } };
+  return { id: shown.id, lead: { stage, study, period: profile.period }, settled: true };
 }
 
 function createWorker(): Worker | null {

@@ -102,10 +102,12 @@ export class StudyPlates {
       this.workers?.flat.terminate();
       this.workers?.lit.terminate();
     });
-    // A new study or window: new plates (the light goes first, so the first lit paint is right).
+    // A new study or window: new plates (the light goes first, so the first lit paint is right). A draft
+    // made final (its full computation failed, so it stays) is drawn again, the lit plate this time.
     effect(() => {
       const frame = this.frame();
       const study = this.study();
+      const flatOnly = this.draft();
       this.themeChanges();
       if (!frame) return;
       untracked(() => {
@@ -115,7 +117,6 @@ export class StudyPlates {
         const lines = linesInWindow(study.lines, frame.x0, frame.x1, reach);
         const colours = this.colours ?? this.readColours();
         const id = ++this.nextId;
-        const flatOnly = this.draft();
         this.requested.set(id);
         if (!flatOnly) this.litRequested.set(id);
         const request: PlateRequest = {

@@ -19,9 +19,9 @@ type Surface = Extract<PlateRequest, { kind: 'surface' }>;
  * When the last anti-aliased surface took longer than this (ms), the next study shows one sample a pixel
  * first: for a plate that takes several frames (a large plate on a dense screen). At 20 ms it served the
  * studio's own plate (13–22 ms alone, up to ~50 ms while the compute worker shares the two cores) and
- * cost more than it showed: in the studio bench, taken in turns with it off, the quick surface showed
- * the edit no sooner (p50 103–106 against 104–112 ms), while the extra pass and the frame the refinement
- * waits for made the last view later (p95 139–190 against 156–249 ms) and gave 1–2 long tasks a run (none off).
+ * cost more than it showed: in the studio bench, taken in turns, with it off the edit showed as soon
+ * (p50 103–106 ms off, 104–112 ms on), and without the extra pass and the frame the refinement waits
+ * for the last view came sooner (p95 139–190 ms off, 156–249 ms on) with no long task (1–2 a run on).
  */
 const COARSE_WORTH_MS = 60;
 let plate: 'flat' | 'lit' = 'flat';
