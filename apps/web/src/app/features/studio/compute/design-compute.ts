@@ -2,7 +2,7 @@ import { computed, DestroyRef, inject, Injectable, signal } from '@angular/core'
 import type { Design } from '@barwright/contracts';
 import type { Companion } from '@barwright/engine';
 import type { ComputeReply, ComputeRequest } from './compute-messages';
-import { computeDesignViews, type DesignViews, type StudyLead } from './design-views';
+import { computeDesignViews, studyLeadOf, type DesignViews, type StudyLead } from './design-views';
 
 /** How long a refinement may run before the views say they are still working (ms). */
 const PROGRESS_AFTER_MS = 150;
@@ -119,9 +119,7 @@ export class DesignCompute {
 
 /** The lead the shown views came with, for going back to it. */
 function leadOf(shown: { id: number; views: DesignViews } | null): { id: number; lead: StudyLead; settled: true } | null {
-  if (!shown) return null;
-  const { stage, study, profile } = shown.views;
-  return { id: shown.id, lead: { stage, study, period: profile.period }, settled: true };
+  return shown && { id: shown.id, lead: studyLeadOf(shown.views), settled: true };
 }
 
 function createWorker(): Worker | null {
@@ -136,8 +134,9 @@ function createWorker(): Worker | null {
 /** The worker's replies, computed on the page: the lead, then the rest. */
 function computeHere(id: number, design: Design, companion?: Companion): ComputeReply[] {
   try {
-    const { study, ...views } = computeDesignViews(design, 'full', companion);
-    return [{ id, lead: { stage: 'full', study, period: views.profile.period } }, { id, views }];
+    const replies: ComputeReply[] = [];
+    const { study: _sent, ...views } = computeDesignViews(design, 'full', companion, undefined, (lead) => replies.push({ id, lead }));
+    return [...replies, { id, views }];
   } catch (error) {
     return [{ id, error: error instanceof Error ? error.message : String(error) }];
   }

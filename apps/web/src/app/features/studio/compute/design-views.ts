@@ -54,6 +54,11 @@ export interface StudyLead {
   period: number;
 }
 
+/** The line study of a stage's views with what the plates need beside it. */
+export function studyLeadOf({ stage, study, profile }: Pick<DesignViews, 'stage' | 'study'> & { profile: { period: number } }): StudyLead {
+  return { stage, study, period: profile.period };
+}
+
 /**
  * Runs the engine on a valid design. Pure apart from reading the clock and calling `onStudy` with the
  * line study as soon as it is known, before the bar's drawings and the plan (about half the time).
@@ -70,7 +75,7 @@ export function computeDesignViews(
   const profile = computeProfile(design, step === undefined ? {} : { step });
   const mm = toMm(design);
   const study = { ...studyData(computeLineStudy(design, profile)), depth: mm.study.depth, vAngle: mm.study.vAngle };
-  onStudy?.({ stage, study, period: profile.period });
+  onStudy?.(studyLeadOf({ stage, study, profile }));
   const plan = stage === 'full' ? planCut(design, profile) : null;
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
   const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion })), ...sizes } } : null;
