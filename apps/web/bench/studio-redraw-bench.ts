@@ -9,6 +9,8 @@
  *    the value and its views redrawn, from the typing page's input event and from the update's arrival.
  * It starts a real server on a fresh data directory with the demo data (WEB_DIST: the web build to
  * serve, default dist/web/browser). Run: node --import tsx apps/web/bench/studio-redraw-bench.ts
+ * BENCH_CPU=1 adds every process's CPU over the one-maker edits (the server, Chromium's processes, the
+ * bench itself); BENCH_PROFILE_FILE=path keeps BENCH_PROFILE's raw CPU profile.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -132,6 +134,7 @@ async function main(): Promise<void> {
     await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
     const profiler = process.env.BENCH_PROFILE ? await startProfile(editor) : null;
     if (process.env.BENCH_TRACE) await browser.startTracing(editor, { categories: (process.env.BENCH_TRACE_CATEGORIES ?? 'devtools.timeline,disabled-by-default-devtools.timeline').split(',') });
+    const cpuBefore = process.env.BENCH_CPU ? processCpu() : null;
     const solo: number[] = [];
     const soloShown: number[] = [];
     for (let i = 0; i < EDITS; i++) {
@@ -140,6 +143,7 @@ async function main(): Promise<void> {
       soloShown.push(t.shown);
     }
     const soloLongTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
+    if (cpuBefore) printProcessCpu(cpuBefore, processCpu(), EDITS);
     if (profiler) await printProfile(profiler);
     if (process.env.BENCH_TRACE) {
       const trace = await browser.stopTracing();
@@ -291,6 +295,7 @@ async function startProfile(page: Page): Promise<CDPSession> {
 /** The 25 functions with the most self time over the edits (a development build names them). */
 async function printProfile(cdp: CDPSession): Promise<void> {
   const { profile } = await cdp.send('Profiler.stop');
+  if (process.env.BENCH_PROFILE_FILE) fs.writeFileSync(process.env.BENCH_PROFILE_FILE, JSON.stringify(profile));
   const self = new Map<string, number>();
   const dt = new Map<number, number>();
   profile.samples?.forEach((id, k) => dt.set(id, (dt.get(id) ?? 0) + (profile.timeDeltas?.[k] ?? 0)));
@@ -335,6 +340,34 @@ function printTrace(buffer: Buffer): void {
   }
   console.log('Main-thread own time by kind (ms) over the edits:');
   for (const [name, us] of [...own].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`${(us / 1000).toFixed(0).padStart(7)}  ${name}`);
+}
+
+/** Every process's CPU so far (Linux /proc: user plus system ticks), keyed by pid, with a name telling Chromium's process types and the server apart. */
+function processCpu(): Map<string, { name: string; ms: number }> {
+  const tick = 1000 / 100; // USER_HZ is 100 on Linux
+  const out = new Map<string, { name: string; ms: number }>();
+  for (const pid of fs.readdirSync('/proc').filter((p) => /^\d+$/.test(p))) {
+    try {
+      const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
+      const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      const args = fs.readFileSync(`/proc/${pid}/cmdline`, 'utf8').split(/[\0 ]/); // Chromium rewrites its own as one string
+      const flag = (name: string) => args.find((a) => a.startsWith(`--${name}=`))?.slice(name.length + 3);
+      const kind = flag('type') ? `chromium ${flag('type')}${flag('utility-sub-type') ? ` (${flag('utility-sub-type')})` : ''}` : args.some((a) => a.endsWith('main.ts')) ? 'server' : args.some((a) => a.includes('studio-redraw-bench')) ? 'bench (Playwright)' : path.basename(args[0] ?? '?');
+      out.set(pid, { name: kind, ms: (Number(fields[11]) + Number(fields[12])) * tick });
+    } catch {
+      // gone meanwhile
+    }
+  }
+  return out;
+}
+
+/** BENCH_CPU: the machine's CPU over the one-maker edits, by kind of process, per edit. */
+function printProcessCpu(before: Map<string, { name: string; ms: number }>, after: Map<string, { name: string; ms: number }>, edits: number): void {
+  const byName = new Map<string, number>();
+  for (const [pid, { name, ms }] of after) byName.set(name, (byName.get(name) ?? 0) + ms - (before.get(pid)?.ms ?? 0));
+  const total = [...byName.values()].reduce((a, b) => a + b, 0);
+  console.log(`CPU of every process over the one-maker edits, per edit (${(total / edits).toFixed(0)} ms in all; the bench's settling waits included):`);
+  for (const [name, ms] of [...byName].sort((a, b) => b[1] - a[1]).filter(([, ms]) => ms > 0)) console.log(`${(ms / edits).toFixed(1).padStart(8)} ms  ${name}`);
 }
 
 async function startServer(): Promise<ChildProcess> {
