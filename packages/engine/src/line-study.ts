@@ -1,5 +1,4 @@
 import type { Design } from '@barwright/contracts';
-import { barGrid } from './bar-grid';
 import { periodProfile } from './period-profile';
 import { profileSamples } from './profile';
 import { linePhase, reducedPhase } from './phase-schedule';
@@ -32,14 +31,10 @@ interface Template {
  * endless bar (no end effects), decimated once to an error of 2 % of its height (at most 0.02 mm,
  * a tenth of a pixel on a whole-bar view and well inside the groove's stroke; at least 0.5 µm),
  * so each line is that template laid end to end. A given profile (in mm, as computeProfile returns
- * it; a companion's too) supplies that period when the bar holds one clear of its ends. Given instead
- * the `step` computeProfile would take (mm, its default when left out), the study is that profile's,
- * laid from one period on the same grid before (or without) the whole bar being computed: the studio
- * shows its plates a bar's computation sooner.
+ * it; a companion's too) supplies that period when the bar holds one clear of its ends.
  */
-export function computeLineStudy(design: Design, profile?: Profile | { step?: number }): LineStudy {
+export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
   const mm = design.units === 'mm' ? design : toMm(design);
-  if (profile && !('period' in profile)) return periodLineStudy(mm.study, periodFromDesign(mm, barGrid(mm, profile.step).step), mm.bar.length);
   const period = (profile && periodFromProfile(mm, profile)) ?? periodFromDesign(mm, profile?.step);
   return periodLineStudy(mm.study, period, mm.bar.length);
 }

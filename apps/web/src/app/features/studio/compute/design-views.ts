@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { barGrid, computeLineStudy, computeProfile, planCut, profileSamples, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
+import { computeLineStudy, computeProfile, planCut, profileSamples, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
 import { profileDrawing, type ProfileDrawing, type ProfileMode } from '../../../shared/views/profile-drawing';
 import type { ProfileData, StudyData } from '../../../shared/views/view-data';
 import { placementViews, type PlacementViews } from './placement-views';
@@ -61,7 +61,7 @@ export function studyLeadOf({ stage, study, profile }: Pick<DesignViews, 'stage'
 
 /**
  * Runs the engine on a valid design. Pure apart from reading the clock and calling `onStudy` with the
- * line study as soon as it is known: first, before the bar's profile, its drawings and the plan.
+ * line study as soon as it is known, before the bar's drawings and the plan (about half the time).
  */
 export function computeDesignViews(
   design: Design,
@@ -72,13 +72,10 @@ export function computeDesignViews(
 ): DesignViews {
   const started = performance.now();
   const step = stage === 'preview' ? previewStep(design) : undefined;
-  const mm = toMm(design);
-  // The study is laid from one period on the profile's own grid, before the whole bar is computed
-  // (a few ms against the bar's 10–25), so the plates start on it that much sooner; it is the profile's
-  // study point for point (line-study-ahead.spec.ts).
-  const study = { ...studyData(computeLineStudy(design, { step })), depth: mm.study.depth, vAngle: mm.study.vAngle };
-  onStudy?.(studyLeadOf({ stage, study, profile: barGrid(mm, step) }));
   const profile = computeProfile(design, step === undefined ? {} : { step });
+  const mm = toMm(design);
+  const study = { ...studyData(computeLineStudy(design, profile)), depth: mm.study.depth, vAngle: mm.study.vAngle };
+  onStudy?.(studyLeadOf({ stage, study, profile }));
   const plan = stage === 'full' ? planCut(design, profile) : null;
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
   const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion })), ...sizes } } : null;
