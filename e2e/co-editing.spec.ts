@@ -48,17 +48,17 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
 
   // Presence: each sees the other two.
   for (const page of [maren, ibrahim, saskia]) await expect(page.getByTestId('presence-peer')).toHaveCount(2);
+  await expect(maren.getByTestId('presence-peer').filter({ has: maren.locator('[data-name="Ibrahim Coldwell"]') }).or(maren.locator('[data-name="Ibrahim Coldwell"]'))).toHaveCount(1);
 
-  // Material's transitions are off in the studio (each edit redraws four views on the same cores), on elsewhere:
-  // a form field is marked animated 300 ms after it is made, and the studio's have been up longer than that.
+  // Material's transitions are off in the studio (each edit redraws four views on the same cores), on elsewhere.
+  // A form field is marked animated 300 ms after it is made: once a field made now on another page has the
+  // mark, the studio's fields, made before it, would have theirs.
   const fieldOf = (page: Page, testId: string) => page.locator('mat-form-field').filter({ has: page.getByTestId(testId) });
-  await expect(fieldOf(maren, LOBES)).toBeVisible();
-  expect(await fieldOf(maren, LOBES).getAttribute('class')).not.toMatch(/mat-form-field-animations-enabled/);
   const boards = await maren.context().newPage();
   await boards.goto('/boards');
   await expect(fieldOf(boards, 'board-create-name')).toHaveClass(/mat-form-field-animations-enabled/);
   await boards.close();
-  await expect(maren.getByTestId('presence-peer').filter({ has: maren.locator('[data-name="Ibrahim Coldwell"]') }).or(maren.locator('[data-name="Ibrahim Coldwell"]'))).toHaveCount(1);
+  expect(await fieldOf(maren, LOBES).getAttribute('class')).not.toMatch(/mat-form-field-animations-enabled/);
 
   // The viewer follows but cannot type, and is told so.
   await expect(saskia.getByTestId('viewer-banner')).toContainText('You are a viewer on this board: you can follow changes but not make them.');

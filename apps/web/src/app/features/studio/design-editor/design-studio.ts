@@ -1,9 +1,9 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, effect, ElementRef, inject, input, OnInit, signal, untracked } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { MatDialog } from '@angular/material/dialog';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
@@ -15,6 +15,7 @@ import { map } from 'rxjs';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { Notifier } from '../../../core/error-handling/notifier';
 import { ApiError } from '../../../core/http/api-error';
+import { KeepMotion } from '../../../shared/motion/keep-motion';
 import { askForName } from '../../../shared/name-dialog/name-dialog';
 import { openPublishDialog } from '../../../shared/publish-dialog/publish-dialog';
 import { CollabSession } from '../collab/collab-session';
@@ -57,16 +58,17 @@ export const PANELS = [
 @Component({
   selector: 'bw-design-studio',
   imports: [
-    RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
+    KeepMotion, RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
     ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
     FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons, LiveSummary, StudioRackActions,
   ],
   providers: [
     CollabSession, DesignCompute, StudioStore,
-    // Material's own transitions off in the studio: each edit redraws four views on the same cores, and
-    // a field's label and outline fading as the focus moves repainted and rastered the page every frame
-    // meanwhile (about 9 frames an edit in the studio bench's trace). The fields change at once. Studio
-    // bench, one maker, p95 over three runs each: 114–137 ms before, 97–108 ms after.
+    // Material's own transitions off for what the studio holds: each edit redraws four views on the same
+    // cores, and a field's label changing colour and place as the focus moved repainted and rastered the
+    // page every frame meanwhile (about nine frames an edit; figures in apps/web/bench/studio-redraw-notes.md).
+    // The fields change at once. Progress bars keep their motion (KeepMotion); dialogs, snack bars and
+    // button ripples are made from the root and keep theirs.
     { provide: MATERIAL_ANIMATIONS, useValue: { animationsDisabled: true } },
   ],
   templateUrl: './design-studio.html',

@@ -12,11 +12,12 @@ import { StudioStore } from '../studio-store';
 import { openCompare } from '../../../shared/compare/compare-dialog';
 import { dateText } from '../../../shared/dates/date-text';
 import { DateTextPipe, READER_LOCALE } from '../../../shared/dates/date-text-pipe';
+import { KeepMotion } from '../../../shared/motion/keep-motion';
 
 /** Named versions of the design: save one, compare one with now side by side, restore one as a new edit. */
 @Component({
   selector: 'bw-history-panel',
-  imports: [DateTextPipe, MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [DateTextPipe, KeepMotion, MatButtonModule, MatIconModule, MatProgressBarModule],
   templateUrl: './history-panel.html',
   styleUrl: './history-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,12 +4,13 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import type { Units } from '@barwright/contracts';
 import { SAFETY_CAUTIONS, type CutPlan as Plan } from '@barwright/engine';
 import { MATERIAL_NAMES } from '../../entry-facts/entry-facts';
+import { KeepMotion } from '../../motion/keep-motion';
 import { planFigures } from '../plan-figures';
 
 /** A cut plan: figures, warnings, set-up reminders, heat treatment and, always (even before a plan), the cautions. */
 @Component({
   selector: 'bw-cut-plan',
-  imports: [MatIconModule, MatProgressBarModule],
+  imports: [KeepMotion, MatIconModule, MatProgressBarModule],
   templateUrl: './cut-plan.html',
   styleUrl: './cut-plan.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
