@@ -9,8 +9,8 @@
  *    the value and its views redrawn, from the typing page's input event and from the update's arrival.
  * It starts a real server on a fresh data directory with the demo data (WEB_DIST: the web build to
  * serve, default dist/web/browser). Run: node --import tsx apps/web/bench/studio-redraw-bench.ts
- * BENCH_CPU=1 adds every process's CPU over the one-maker edits (the server, Chromium's processes, the
- * bench itself); BENCH_PROFILE_FILE=path keeps BENCH_PROFILE's raw CPU profile.
+ * BENCH_CPU=1 adds the CPU of the bench's processes over the one-maker edits (the server, Chromium's
+ * processes, the bench itself); BENCH_PROFILE_FILE=path keeps BENCH_PROFILE's raw CPU profile.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -342,31 +342,43 @@ function printTrace(buffer: Buffer): void {
   for (const [name, us] of [...own].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`${(us / 1000).toFixed(0).padStart(7)}  ${name}`);
 }
 
-/** Every process's CPU so far (Linux /proc: user plus system ticks), keyed by pid, with a name telling Chromium's process types and the server apart. */
+/**
+ * The CPU so far (Linux /proc: user plus system ticks) of this bench and every process it started (the
+ * server, Chromium's processes), keyed by pid, named by what each is; other processes on the machine are
+ * left out.
+ */
 function processCpu(): Map<string, { name: string; ms: number }> {
   const tick = 1000 / 100; // USER_HZ is 100 on Linux
-  const out = new Map<string, { name: string; ms: number }>();
+  const all = new Map<string, { parent: string; name: string; ms: number }>();
   for (const pid of fs.readdirSync('/proc').filter((p) => /^\d+$/.test(p))) {
     try {
       const stat = fs.readFileSync(`/proc/${pid}/stat`, 'utf8');
-      const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' '); // fields[0] is the state, the stat's third field
       const args = fs.readFileSync(`/proc/${pid}/cmdline`, 'utf8').split(/[\0 ]/); // Chromium rewrites its own as one string
       const flag = (name: string) => args.find((a) => a.startsWith(`--${name}=`))?.slice(name.length + 3);
-      const kind = flag('type') ? `chromium ${flag('type')}${flag('utility-sub-type') ? ` (${flag('utility-sub-type')})` : ''}` : args.some((a) => a.endsWith('main.ts')) ? 'server' : args.some((a) => a.includes('studio-redraw-bench')) ? 'bench (Playwright)' : path.basename(args[0] ?? '?');
-      out.set(pid, { name: kind, ms: (Number(fields[11]) + Number(fields[12])) * tick });
+      const program = path.basename(args[0] || stat.slice(stat.indexOf('(') + 1, stat.lastIndexOf(')')));
+      const chromium = /chrom/.test(program) || args.some((a) => a.startsWith('--type='));
+      const kind = chromium
+        ? `chromium ${flag('type') ?? 'browser'}${flag('utility-sub-type') ? ` (${flag('utility-sub-type')})` : ''}`
+        : args.some((a) => a.endsWith('main.ts')) ? 'server' : Number(pid) === process.pid ? 'bench (Playwright)' : program;
+      all.set(pid, { parent: fields[1], name: kind, ms: (Number(fields[11]) + Number(fields[12])) * tick }); // ppid; utime and stime
     } catch {
       // gone meanwhile
     }
   }
-  return out;
+  const ours = (pid: string): boolean => {
+    for (let p: string | undefined = pid, hops = 0; p && hops < 64; p = all.get(p)?.parent, hops++) if (Number(p) === process.pid) return true;
+    return false;
+  };
+  return new Map([...all].filter(([pid]) => ours(pid)).map(([pid, { name, ms }]) => [pid, { name, ms }]));
 }
 
-/** BENCH_CPU: the machine's CPU over the one-maker edits, by kind of process, per edit. */
+/** BENCH_CPU: the CPU of the bench's processes over the one-maker edits, by kind of process, per edit (a process that ended meanwhile is not counted). */
 function printProcessCpu(before: Map<string, { name: string; ms: number }>, after: Map<string, { name: string; ms: number }>, edits: number): void {
   const byName = new Map<string, number>();
   for (const [pid, { name, ms }] of after) byName.set(name, (byName.get(name) ?? 0) + ms - (before.get(pid)?.ms ?? 0));
   const total = [...byName.values()].reduce((a, b) => a + b, 0);
-  console.log(`CPU of every process over the one-maker edits, per edit (${(total / edits).toFixed(0)} ms in all; the bench's settling waits included):`);
+  console.log(`CPU of the bench's processes over the one-maker edits, per edit (${(total / edits).toFixed(0)} ms in all; the bench's settling waits included):`);
   for (const [name, ms] of [...byName].sort((a, b) => b[1] - a[1]).filter(([, ms]) => ms > 0)) console.log(`${(ms / edits).toFixed(1).padStart(8)} ms  ${name}`);
 }
 
