@@ -3,12 +3,12 @@ import { EXAMPLE_DESIGN, type Design } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
 import type { ComputeReply } from './compute-messages';
 import { DesignCompute } from './design-compute';
-import { computeDesignViews, type StudyLead } from './design-views';
+import { computeDesignViews, studyLeadOf, type StudyLead } from './design-views';
 
 /*
  * The worker's replies as the page receives them, in the orders they can come: for each stage its
- * study first (`lead`) and the rest of its views straight after, or an error in place of either. No request is sent (jsdom has no Worker);
- * the replies are handed to the service as its worker's would be.
+ * study first (`lead`) and the rest of its views straight after, or an error in place of either. No
+ * request is sent (jsdom has no Worker); the replies are handed to the service as its worker's would be.
  */
 const SHORT_BAR: Design = { ...EXAMPLE_DESIGN, bar: { ...EXAMPLE_DESIGN.bar, length: 30 } };
 
@@ -22,8 +22,7 @@ function service(): { compute: DesignCompute; receive: (reply: ComputeReply) => 
 /** A stage's two replies, as the worker sends them. */
 function replies(id: number, design: Design, stage: 'preview' | 'full'): [ComputeReply, ComputeReply] {
   const { study, ...views } = computeDesignViews(design, stage);
-  const lead: StudyLead = { stage, study, period: views.profile.period };
-  return [{ id, lead }, { id, views }];
+  return [{ id, lead: studyLeadOf({ stage, study, profile: views.profile }) }, { id, views }];
 }
 
 describe('the studio compute service receiving its worker’s replies', () => {
@@ -49,6 +48,17 @@ describe('the studio compute service receiving its worker’s replies', () => {
     // The plates never keep a study whose bar and cut plan do not exist.
     expect(compute.study()?.study).toBe(shownStudy);
     expect(compute.views()?.study).toBe(shownStudy);
+  });
+
+  it('drops the rest of an older stage once a newer study has come', () => {
+    const { compute, receive } = service();
+    const [oldLead, oldRest] = replies(1, SHORT_BAR, 'full');
+    const [newLead] = replies(2, SHORT_BAR, 'preview');
+    receive(oldLead);
+    receive(newLead);
+    receive(oldRest);
+    expect(compute.views()).toBeNull();
+    expect(compute.study()).toBe((newLead as { lead: StudyLead }).lead);
   });
 
   it('makes a preview’s study final when the full computation after it fails, so the lit plate draws it', () => {
