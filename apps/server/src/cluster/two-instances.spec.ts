@@ -176,6 +176,12 @@ describe.skipIf(!services)('two instances on PostgreSQL and Redis', () => {
     const designId = await newDesign('Burst');
     const clients = Array.from({ length: 6 }, () => collabClient(pair.proxyUrl, designId, owner.cookie()));
     await Promise.all(clients.map((c) => c.synced()));
+    // Each client's closings, so a client that does not come back says why.
+    const closings = clients.map((c) => {
+      const codes: string[] = [];
+      c.provider.on('connection-close', (e: CloseEvent | null) => codes.push(e ? `${e.code}${e.reason ? ` ${e.reason}` : ''}` : 'none'));
+      return codes;
+    });
     const sent = new Set<string>();
     let n = 0;
     const type = () => {
@@ -193,7 +199,10 @@ describe.skipIf(!services)('two instances on PostgreSQL and Redis', () => {
     await new Promise((r) => setTimeout(r, 300));
     clearInterval(typing);
     // Clients that were on A reconnect through the proxy to B and send what B lacks; it is stored before it is relayed.
-    await eventually(() => clients.every((c) => c.provider.wsconnected && c.provider.synced), 15000, 'every client to be back, on B');
+    await eventually(() => clients.every((c) => c.provider.wsconnected && c.provider.synced), 15000, 'every client to be back, on B').catch((error: Error) => {
+      const states = clients.map((c, i) => `client ${i}: connected ${c.provider.wsconnected}, connecting ${c.provider.wsconnecting}, synced ${c.provider.synced}, closings [${closings[i].join(', ')}]`);
+      throw new Error(`${error.message}\n${states.join('\n')}\nB said:\n${pair.b.output().slice(-3000)}`);
+    });
     const stored = async () => (await storedDoc(pool, designId)).getText('notes').toString();
     let text = '';
     for (let i = 0; i < 50 && ![...sent].every((t) => text.includes(t)); i++) {

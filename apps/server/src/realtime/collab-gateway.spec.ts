@@ -74,6 +74,36 @@ describe('collaboration gateway', () => {
     expect(lobes(stored)).toBe(36);
   });
 
+  it('an edit typed the moment the connection returns, after edits made offline, is asked for again, not refused: both arrive and are stored', async () => {
+    const a = open(ownerCookie);
+    await a.synced();
+    const closings: number[] = [];
+    a.provider.on('connection-close', (e: CloseEvent | null) => e && closings.push(e.code));
+    a.provider.disconnect();
+    a.doc.getText('notes').insert(0, 'offline;');
+    // On open the client sends its step 1 and, at once, this edit; what it made offline goes only in
+    // its answer to the server's step 1, which is still on the way. The edit builds on the offline one.
+    const typeOnOpen = ({ status }: { status: string }) => {
+      if (status !== 'connected') return;
+      a.provider.off('status', typeOnOpen);
+      a.doc.getText('notes').insert(0, 'at-reconnect;');
+    };
+    a.provider.on('status', typeOnOpen);
+    a.provider.connect();
+    await eventually(() => a.provider.synced, 5000, 'the client to sync');
+    const expected = 'at-reconnect;offline;';
+    let stored = '';
+    for (let i = 0; i < 50 && stored !== expected; i++) {
+      if (i) await new Promise((r) => setTimeout(r, 100));
+      stored = (await server.collab.store.loadDoc(designId)).getText('notes').toString();
+    }
+    expect(stored).toBe(expected);
+    expect(closings).toEqual([]);
+    const b = open(ownerCookie);
+    await b.synced();
+    expect(b.doc.getText('notes').toString()).toBe(expected);
+  });
+
   it('drops a viewer\'s edits: never relayed, never stored', async () => {
     const { cookie } = await member('vi@example.test', 'viewer');
     const a = open(ownerCookie);

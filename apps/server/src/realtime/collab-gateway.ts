@@ -5,6 +5,7 @@ import { WebSocketServer, type WebSocket, type RawData } from 'ws';
 import * as Y from 'yjs';
 import * as decoding from 'lib0/decoding';
 import * as encoding from 'lib0/encoding';
+import * as syncProtocol from 'y-protocols/sync';
 import { CLOSE_CODES, type BoardRole } from '@barwright/contracts';
 import { docs, setPersistence, setupWSConnection, type WSSharedDoc } from '@y/websocket-server/utils';
 import type { Db } from '../database/database';
@@ -17,7 +18,7 @@ import type { CloseMatch, ControlMessage, RedisRelay } from './redis-relay';
 import { CLIENT_IDS_PER_SOCKET, stampPresence } from './presence-stamp';
 import { sessionIdOf, sessionUser } from './handshake-session';
 import { AccountBuckets, DEFAULT_REALTIME_LIMITS, type RealtimeLimits, type TokenBucket } from './realtime-limits';
-import { UpdateCheck } from './update-check';
+import { MISSING_EDITS, UpdateCheck } from './update-check';
 
 const MESSAGE_SYNC = 0;
 const MESSAGE_AWARENESS = 1;
@@ -40,6 +41,8 @@ interface Connection {
   awareness: TokenBucket;
   /** The Yjs client ids whose presence this socket speaks for. */
   clientIds: Set<number>;
+  /** The server has asked this client for the edits an update of its built on (a sync step 1) and awaits its answer. */
+  askedForMissing: boolean;
 }
 
 export interface CollabGatewayDeps {
@@ -58,10 +61,13 @@ export interface CollabGatewayDeps {
   relay?: RedisRelay;
 }
 
-/** What a y-websocket message carries: a sync step 1, an update (sync step 2 or update), presence, or something else. */
+/**
+ * What a y-websocket message carries: a sync step 1, an update (`answer`: a sync step 2, the client's
+ * answer to the server's step 1; otherwise an edit as it is made), presence, or something else.
+ */
 export function readMessage(message: Uint8Array):
   | { kind: 'step1' }
-  | { kind: 'update'; update: Uint8Array }
+  | { kind: 'update'; update: Uint8Array; answer: boolean }
   | { kind: 'awareness'; update: Uint8Array }
   | { kind: 'other' } {
   const decoder = decoding.createDecoder(message);
@@ -70,9 +76,17 @@ export function readMessage(message: Uint8Array):
   if (type !== MESSAGE_SYNC) return { kind: 'other' };
   const step = decoding.readVarUint(decoder);
   if (step === SYNC_STEP_1) return { kind: 'step1' };
-  if (step === SYNC_STEP_2 || step === SYNC_UPDATE) return { kind: 'update', update: decoding.readVarUint8Array(decoder) };
+  if (step === SYNC_STEP_2 || step === SYNC_UPDATE) return { kind: 'update', update: decoding.readVarUint8Array(decoder), answer: step === SYNC_STEP_2 };
   return { kind: 'other' };
 }
+
+/** The server's sync step 1 for `doc`: the client answers with everything it has that `doc` lacks. */
+const step1Message = (doc: Y.Doc) => {
+  const encoder = encoding.createEncoder();
+  encoding.writeVarUint(encoder, MESSAGE_SYNC);
+  syncProtocol.writeSyncStep1(encoder, doc);
+  return encoding.toUint8Array(encoder);
+};
 
 const awarenessMessage = (update: Uint8Array) => {
   const encoder = encoding.createEncoder();
@@ -171,7 +185,7 @@ export class CollabGateway {
     this.wss.handleUpgrade(req, socket, head, (ws) =>
       this.connect(ws, req, {
         ws, userId: user.id, sessionId: session.sessionId, displayName: user.displayName, boardId: design.boardId, designId, role,
-        ...this.buckets.of(user.id), clientIds: new Set(),
+        ...this.buckets.of(user.id), clientIds: new Set(), askedForMissing: false,
       }),
     );
   }
@@ -230,9 +244,20 @@ export class CollabGateway {
       if (!conn.updates.take()) return conn.ws.close(CLOSE_CODES.rateLimited, 'too many updates: slow down');
       if (conn.role === 'viewer') return; // read-only: never applied, never stored
       await doc.whenInitialized; // the check and the relay see the stored state first
+      if (message.answer) conn.askedForMissing = false;
       if (message.update.length > 2) {
         const check = this.checks.get(doc);
         const refusal = check ? check.refusal(message.update) : 'the design is not loaded';
+        // An edit that builds on edits this document lacks, from an honest client: it reconnected and
+        // typed before answering the server's step 1 (its answer carries what it made offline), or the
+        // instance it was on died holding its last edits. The client is asked once for all this document
+        // lacks (a step 1); its answer carries the missing edits and this one, and edits that arrive
+        // before it are dropped the same way. An answer that still lacks them is final, as before.
+        if (refusal === MISSING_EDITS && !message.answer) {
+          if (!conn.askedForMissing) conn.ws.send(step1Message(doc));
+          conn.askedForMissing = true;
+          return;
+        }
         if (refusal) {
           this.log(new Error(`collab: refused an update to design ${conn.designId} from user ${conn.userId}: ${refusal}`));
           return conn.ws.close(CLOSE_CODES.invalidUpdate, 'an update that does not apply');

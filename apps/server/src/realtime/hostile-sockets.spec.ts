@@ -20,6 +20,14 @@ const updateMessage = (update: Uint8Array) => {
   syncProtocol.writeUpdate(e, update);
   return encoding.toUint8Array(e);
 };
+/** A y-websocket sync step 2 (the answer to a step 1) carrying `update`. */
+const answerMessage = (update: Uint8Array) => {
+  const e = encoding.createEncoder();
+  encoding.writeVarUint(e, 0);
+  encoding.writeVarUint(e, 1); // y-protocols' messageYjsSyncStep2
+  encoding.writeVarUint8Array(e, update);
+  return encoding.toUint8Array(e);
+};
 /** 9 bytes: a sync-update message whose 6-byte update does not decode (Yjs: "Unexpected end of array"). */
 const POISON = new Uint8Array([0, 2, 6, 1, 1, 1, 1, 9, 9]);
 const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -175,7 +183,9 @@ describe('hostile collab sockets', () => {
     const big = 'a'.repeat(DEFAULT_REALTIME_LIMITS.maxDesignJsonBytes);
     expect(await send((doc) => doc.getMap('design').set('padding', big))).toBe(CLOSE_CODES.invalidUpdate);
     expect(await send((doc) => doc.getText('notes').insert(0, 'n'.repeat(DEFAULT_REALTIME_LIMITS.maxNotesChars + 1)))).toBe(CLOSE_CODES.invalidUpdate);
-    // The refused edit's successor from the same client waits for it forever: refused too, not stored as pending bytes.
+    // The refused edit's successor from the same client waits for it forever: never stored as pending
+    // bytes. Sent as an edit, the server asks the client for what it builds on (a step 1: an honest client
+    // that typed on reconnecting answers with its offline edits); an answer still without it is final.
     const refusedFirst = new Y.Doc();
     refusedFirst.getMap('design').set('padding', big);
     const successor = (() => {
@@ -186,7 +196,17 @@ describe('hostile collab sockets', () => {
     })();
     const ws = await open();
     const closed = closeOf(ws);
+    const stepOnes = () => received.filter((m) => m[0] === 0 && m[1] === 0).length;
+    const received: Uint8Array[] = [];
+    ws.on('message', (data: Buffer) => received.push(new Uint8Array(data)));
+    await wait(300); // the server's own step 1 on connecting
+    const before = stepOnes();
     ws.send(updateMessage(successor));
+    ws.send(updateMessage(successor)); // asked once, not once per edit
+    await wait(300);
+    expect(stepOnes()).toBe(before + 1);
+    expect(ws.readyState).toBe(WebSocket.OPEN);
+    ws.send(answerMessage(successor));
     expect(await Promise.race([closed.then((c) => c.code), wait(1500).then(() => 0)])).toBe(CLOSE_CODES.invalidUpdate);
     expect(await server.collab.store.rowCount(designId)).toBe(rows);
     // A design under the limits is still accepted.

@@ -3,6 +3,12 @@ import { WebSocket } from 'ws';
 import { DESIGN_MAP, NOTES_TEXT, readDesign } from '@barwright/contracts/design-doc';
 import type { RealtimeLimits } from './realtime-limits';
 
+/**
+ * Why an update that builds on edits this server has not received is refused. The gateway asks an
+ * honest client for them instead of closing (see CollabGateway.receive).
+ */
+export const MISSING_EDITS = 'an update that depends on edits the server does not have';
+
 /** The only top-level types a design document has; an update that adds another is refused. */
 const TOP_LEVEL = new Set([DESIGN_MAP, NOTES_TEXT]);
 
@@ -53,7 +59,7 @@ export class UpdateCheck {
       Y.applyUpdate(this.shadow, update, 'check');
       // An update that waits for one the server never had (the client's refused or lost edit) would be
       // stored, and sent to everyone, whole and unread; no check here can see inside it.
-      if (pendingBytes(this.shadow) > pendingBefore) throw new Error('an update that depends on edits the server does not have');
+      if (pendingBytes(this.shadow) > pendingBefore) throw new Error(MISSING_EDITS);
       // Only names this update adds: a document stored before the check may hold others, and must stay editable.
       for (const name of this.shadow.share.keys()) {
         if (!TOP_LEVEL.has(name) && !namesBefore.has(name)) throw new Error(`a top-level type "${name.slice(0, 40)}" that a design does not have`);
