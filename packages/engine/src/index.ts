@@ -13,7 +13,7 @@ export { layerDerivatives, type LayerDerivatives, type WaveJet, type WaveCorner 
 export { type DetailLossInput, detailLossWarnings } from './detail-loss';
 export { type BarGrid, barGrid, defaultStep, finestFeature, neededStep } from './bar-grid';
 export { NonFiniteResultError } from './finite-output';
-export { type ProfileOptions, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';
+export { type ProfileOptions, type ArrayAllocator, type BarSamples, computeProfile, computeBarSamples, counterPhaseProfile, invertedProfile } from './profile';
 export { type Companion, type ProfileSamples, COMPANIONS, oppositeProfile, profileSamples } from './profile';
 export { type CutPair, shownAndOpposite } from './cut-pair';
 export { type CutterPlacement, type PlacementFigures, cutterPlacement, placementFigures, placementText, alongBarShift, acrossBarHeight } from './cutter-placement';

@@ -24,8 +24,12 @@ export interface BarPaths {
   repeat?: PathRepeat;
 }
 
+/** Where a profile's four output arrays come from: a zero-filled array of the length asked (ProfileOptions.allocate). */
+export type ArrayAllocator = (length: number) => Float64Array;
+export const newArray: ArrayAllocator = (length) => new Float64Array(length);
+
 /** The paths over the whole bar: the rubber read at every node from a cutter radius before the start to one past the end. */
-export function fullBarPaths(d: Design, grid: BarGrid, companion: Companion | undefined, units: Design['units']): BarPaths {
+export function fullBarPaths(d: Design, grid: BarGrid, companion: Companion | undefined, units: Design['units'], allocate: ArrayAllocator = newArray): BarPaths {
   const { step: h, lastNode } = grid;
   const rc = d.cutter.diameter / 2;
   const rf = d.follower.radius;
@@ -47,17 +51,17 @@ export function fullBarPaths(d: Design, grid: BarGrid, companion: Companion | un
   const edgeExt = barEdge(yExt, h, rc);
   const cutterAt = (i: number) => yExt[margin + i];
   const leads = companion === undefined ? leadPaths(cutterAt, margin, grid, rc) : {};
-  const x = barPoints(grid);
+  const x = barPoints(grid, allocate);
   const count = x.length;
-  const cutter = new Float64Array(count);
-  const bar = new Float64Array(count);
+  const cutter = allocate(count);
+  const bar = allocate(count);
   cutter.set(yExt.subarray(margin, margin + lastNode + 1));
   bar.set(edgeExt.subarray(margin, margin + lastNode + 1));
   if (offGrid) {
     cutter[count - 1] = yEnd;
     bar[count - 1] = addEndToEdge(bar, cutterAt, -margin, lastNode + margin, grid, rc, yEnd);
   }
-  const follower = new Float64Array(count);
+  const follower = allocate(count);
   follower.set(followerPath(bar.subarray(0, lastNode + 1), h, rf));
   followerOverBar(bar, x, grid, rf, offGrid, follower);
   const onePeriod = track.s.subarray(-track.first, -track.first + Math.min(grid.perPeriod, lastNode + 1));
@@ -65,9 +69,9 @@ export function fullBarPaths(d: Design, grid: BarGrid, companion: Companion | un
 }
 
 /** The bar's points: the nodes 0 … lastNode, then its end if off the grid (mm). */
-export function barPoints(grid: BarGrid): Float64Array {
+export function barPoints(grid: BarGrid, allocate: ArrayAllocator = newArray): Float64Array {
   const count = grid.lastNode + 1 + (grid.endOnGrid ? 0 : 1);
-  const x = new Float64Array(count);
+  const x = allocate(count);
   const h = grid.step;
   for (let i = 0; i <= grid.lastNode; i++) x[i] = i * h; // as nodeX, whose last node may be the end
   x[count - 1] = grid.endOnGrid ? nodeX(grid, grid.lastNode) : grid.length;

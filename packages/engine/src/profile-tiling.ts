@@ -5,7 +5,7 @@ import { cutterPlacement } from './cutter-placement';
 import { followerPath } from './follower';
 import { periodicEnvelope } from './period-profile';
 import type { Companion } from './profile';
-import { addEndToEdge, barPoints, followerOverBar, leadPaths, maxOf, minOf, type BarPaths } from './profile-paths';
+import { addEndToEdge, barPoints, followerOverBar, leadPaths, maxOf, minOf, newArray, type ArrayAllocator, type BarPaths } from './profile-paths';
 import { rubberAt, trackRubber } from './rubber-track';
 
 /** Fewest whole periods on the bar for tiling to be worth its set-up (below this the whole bar is cheap anyway). */
@@ -31,7 +31,7 @@ const MIN_PERIODS = 3;
  * noise (the envelopes' crossing points are computed from node indices that differ by whole
  * periods): profile-tiling.spec.ts.
  */
-export function tiledBarPaths(d: Design, grid: BarGrid, companion: Companion | undefined, units: Design['units']): BarPaths | undefined {
+export function tiledBarPaths(d: Design, grid: BarGrid, companion: Companion | undefined, units: Design['units'], allocate: ArrayAllocator = newArray): BarPaths | undefined {
   const { step: h, lastNode, perPeriod: m } = grid;
   const rc = d.cutter.diameter / 2;
   const rf = d.follower.radius;
@@ -60,10 +60,10 @@ export function tiledBarPaths(d: Design, grid: BarGrid, companion: Companion | u
   const edgePeriod = periodicEnvelope(yPeriod, cutPad, (y) => barEdge(y, h, rc));
   const cutterAt = (i: number) => yPeriod[((i % m) + m) % m];
 
-  const x = barPoints(grid);
+  const x = barPoints(grid, allocate);
   const count = x.length;
-  const cutter = new Float64Array(count);
-  const bar = new Float64Array(count);
+  const cutter = allocate(count);
+  const bar = allocate(count);
   tile(cutter, yPeriod, nodes);
   tile(bar, edgePeriod, nodes);
   if (offGrid) {
@@ -71,7 +71,7 @@ export function tiledBarPaths(d: Design, grid: BarGrid, companion: Companion | u
     bar[count - 1] = addEndToEdge(bar, cutterAt, -cutPad, lastNode + cutPad, grid, rc, yEnd);
   }
 
-  const follower = new Float64Array(count);
+  const follower = allocate(count);
   tile(follower, periodicEnvelope(edgePeriod, followPad, (y) => followerPath(y, h, rf)), nodes);
   // Near the ends the follower runs out of bar: its path there over the end stretches alone, which hold every sample within its reach.
   follower.set(followerPath(bar.subarray(0, headSpan), h, rf).subarray(0, headWidth));

@@ -6,7 +6,9 @@ import { detailLossWarnings } from './detail-loss';
 import { followerRadiusWarnings } from './engraving-check';
 import { assertFinite, assertFiniteWarnings } from './finite-output';
 import { extremesOf, stretchesToRead, type PathRepeat } from './path-repeat';
-import { fullBarPaths } from './profile-paths';
+import { fullBarPaths, type ArrayAllocator } from './profile-paths';
+
+export type { ArrayAllocator };
 import { tiledBarPaths } from './profile-tiling';
 import type { EngineWarning, Point, Profile } from './types';
 import { toMm } from './units';
@@ -23,6 +25,12 @@ export interface ProfileOptions {
    * opposite blank of the same cut (above the cutter: the upper envelope, the follower under it).
    */
   companion?: Companion;
+  /**
+   * Where the four output arrays (x, cutter, bar, follower) come from; each must be zero-filled and of
+   * the length asked. By default new arrays. A browser worker that computes edit after edit passes
+   * arrays the page has handed back: there a megabyte of fresh memory costs milliseconds to fault in.
+   */
+  allocate?: ArrayAllocator;
 }
 
 /** The profile as typed arrays over the points x (mm): the nodes on the bar, then its end if off the grid. */
@@ -136,7 +144,7 @@ export function barSamples(design: Design, options: ProfileOptions, tile: boolea
   const { step: h, lastNode } = grid;
   const rc = d.cutter.diameter / 2;
   const rf = d.follower.radius;
-  const paths = (tile && tiledBarPaths(d, grid, options.companion, design.units)) || fullBarPaths(d, grid, options.companion, design.units);
+  const paths = (tile && tiledBarPaths(d, grid, options.companion, design.units, options.allocate)) || fullBarPaths(d, grid, options.companion, design.units, options.allocate);
   const { x, cutter, bar, follower, repeat } = paths;
   const opposite = options.companion === 'opposite';
   // The loss analysis reads the follower up to |rf − rc| to the side: keep it clear of the bar's ends.

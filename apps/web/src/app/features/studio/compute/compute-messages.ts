@@ -11,6 +11,16 @@ export interface ComputeRequest {
 }
 
 /**
+ * Page → worker: the buffers of views the page no longer shows, for the worker to write the next
+ * computation's arrays over (ArrayPool).
+ */
+export interface RecycleMessage {
+  recycle: ArrayBuffer[];
+}
+
+export type ComputeMessage = ComputeRequest | RecycleMessage;
+
+/**
  * Worker → page, for each stage of request `id`: first the line study alone (`lead`), as soon as it is
  * computed, so the plates start on it while the worker finishes the bar's drawings and the plan; then
  * the rest of the views (`views`, without the study the lead carried); or the engine's error.

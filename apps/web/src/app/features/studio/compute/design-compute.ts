@@ -1,8 +1,8 @@
-import { computed, DestroyRef, inject, Injectable, signal } from '@angular/core';
+import { afterNextRender, computed, DestroyRef, inject, Injectable, Injector, signal } from '@angular/core';
 import type { Design } from '@barwright/contracts';
 import type { Companion } from '@barwright/engine';
-import type { ComputeReply, ComputeRequest } from './compute-messages';
-import { computeDesignViews, studyLeadOf, type DesignViews, type StudyLead } from './design-views';
+import type { ComputeReply, ComputeRequest, RecycleMessage } from './compute-messages';
+import { computeDesignViews, studyLeadOf, transferables, type DesignViews, type StudyLead } from './design-views';
 
 /** How long a refinement may run before the views say they are still working (ms). */
 const PROGRESS_AFTER_MS = 150;
@@ -27,6 +27,10 @@ export class DesignCompute {
   private slowTimer: ReturnType<typeof setTimeout> | null = null;
   private readonly companionKind = signal<Companion | null>(null);
   private lastDesign: Design | null = null;
+  private readonly injector = inject(Injector);
+  /** Views replaced or dropped, whose arrays go back to the worker once the page has rendered without them. */
+  private readonly retired: Omit<DesignViews, 'study'>[] = [];
+  private releasing = false;
 
   /** The newest views computed (a preview until the full computation lands). */
   readonly views = computed(() => this.shown()?.views ?? null);
@@ -104,16 +108,44 @@ export class DesignCompute {
     }
     // The worker sends each stage's lead just before the rest: the newest lead is this stage's.
     const lead = this.lead();
-    if (lead?.id !== reply.id || lead.lead.stage !== reply.views.stage) return;
+    if (lead?.id !== reply.id || lead.lead.stage !== reply.views.stage) return this.retire(reply.views);
     const views: DesignViews = { ...reply.views, study: lead.lead.study };
-    if (reply.id >= (this.shown()?.id ?? 0)) this.shown.set({ id: reply.id, views });
+    const before = [this.shown()?.views, this.refined()?.views];
+    let used = false;
+    if (reply.id >= (this.shown()?.id ?? 0)) {
+      this.shown.set({ id: reply.id, views });
+      used = true;
+    }
     if (views.stage === 'full' && reply.id >= (this.refined()?.id ?? 0)) {
       this.refined.set({ id: reply.id, views });
+      used = true;
       if (reply.id === this.requested()) {
         this.slow.set(false);
         this.failure.set(null);
       }
     }
+    this.retire(...before, used ? undefined : views);
+  }
+
+  /**
+   * Hands the arrays of views no longer shown back to the worker, which writes the next computations
+   * over them (fresh memory is slow in its thread). After the next render, so that no view still
+   * reads them (a handed-back array is emptied here); those still shown are kept.
+   */
+  private retire(...views: (Omit<DesignViews, 'study'> | undefined)[]): void {
+    if (!this.worker) return;
+    for (const v of views) if (v) this.retired.push(v);
+    if (this.releasing || !this.retired.length) return;
+    this.releasing = true;
+    afterNextRender(
+      () => {
+        this.releasing = false;
+        const held = new Set([this.shown()?.views, this.refined()?.views].flatMap((v) => (v ? transferables(v) : [])));
+        const free = [...new Set(this.retired.splice(0).flatMap((v) => transferables(v)))].filter((b) => !held.has(b) && b.byteLength > 0);
+        if (free.length) this.worker?.postMessage({ recycle: free } satisfies RecycleMessage, free);
+      },
+      { injector: this.injector },
+    );
   }
 }
 

@@ -1,5 +1,6 @@
 /// <reference lib="webworker" />
-import type { ComputeReply, ComputeRequest } from './compute-messages';
+import { ArrayPool } from './array-pool';
+import type { ComputeMessage, ComputeReply, ComputeRequest } from './compute-messages';
 import { computeDesignViews, studyTransferables, transferables, type ComputeStage, type DrawingContext, type StudyLead } from './design-views';
 
 /*
@@ -31,7 +32,11 @@ function previewWorth(): boolean {
 /** The last full computation's warnings and depth: a preview's bar drawing marks them as the page shows them meanwhile. */
 let lastMarks: DrawingContext | undefined;
 
-addEventListener('message', (event: MessageEvent<ComputeRequest>) => {
+/** The arrays of views the page has let go, written over by the next computations. */
+const pool = new ArrayPool();
+
+addEventListener('message', (event: MessageEvent<ComputeMessage>) => {
+  if ('recycle' in event.data) return pool.give(event.data.recycle);
   latest = event.data;
   if (!running) void work();
 });
@@ -58,7 +63,7 @@ function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
   try {
     // The study goes ahead (its lines handed over, so the rest is sent without it).
     const lead = (lead: StudyLead) => self.postMessage({ id, lead } satisfies ComputeReply, { transfer: studyTransferables(lead.study) });
-    const { study: _sent, ...views } = computeDesignViews(request.design, stage, request.companion, lastMarks, lead);
+    const { study: _sent, ...views } = computeDesignViews(request.design, stage, request.companion, lastMarks, lead, pool.allocate);
     if (views.plan) lastMarks = { warnings: views.profile.warnings, depth: views.plan.depth };
     self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
   } catch (error) {

@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, planCut, profileSamples, toMm, type Companion, type CutPlan, type Profile } from '@barwright/engine';
+import { computeLineStudy, computeProfile, planCut, profileSamples, toMm, type ArrayAllocator, type Companion, type CutPlan, type Profile } from '@barwright/engine';
 import { profileDrawing, type ProfileDrawing, type ProfileMode } from '../../../shared/views/profile-drawing';
 import type { ProfileData, StudyData } from '../../../shared/views/view-data';
 import { placementViews, type PlacementViews } from './placement-views';
@@ -62,6 +62,7 @@ export function studyLeadOf({ stage, study, profile }: Pick<DesignViews, 'stage'
 /**
  * Runs the engine on a valid design. Pure apart from reading the clock and calling `onStudy` with the
  * line study as soon as it is known, before the bar's drawings and the plan (about half the time).
+ * `allocate`: where the profiles' arrays come from (the worker's ArrayPool; new arrays by default).
  */
 export function computeDesignViews(
   design: Design,
@@ -69,16 +70,17 @@ export function computeDesignViews(
   companion?: Companion,
   context?: DrawingContext,
   onStudy?: (lead: StudyLead) => void,
+  allocate?: ArrayAllocator,
 ): DesignViews {
   const started = performance.now();
   const step = stage === 'preview' ? previewStep(design) : undefined;
-  const profile = computeProfile(design, step === undefined ? {} : { step });
+  const profile = computeProfile(design, { ...(step === undefined ? {} : { step }), allocate });
   const mm = toMm(design);
   const study = { ...studyData(computeLineStudy(design, profile)), depth: mm.study.depth, vAngle: mm.study.vAngle };
   onStudy?.(studyLeadOf({ stage, study, profile }));
   const plan = stage === 'full' ? planCut(design, profile) : null;
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
-  const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion })), ...sizes } } : null;
+  const other = companion ? { kind: companion, profile: { ...profileData(computeProfile(design, { ...(step === undefined ? {} : { step }), companion, allocate })), ...sizes } } : null;
   const shown = { ...profileData(profile), ...sizes };
   const placement = placementViews(design, profile);
   const marks: DrawingContext = plan ? { warnings: shown.warnings, depth: plan.depth } : (context ?? { warnings: [], depth: null });

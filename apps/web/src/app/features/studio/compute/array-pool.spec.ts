@@ -1,0 +1,31 @@
+import { describe, expect, it } from 'vitest';
+import { ArrayPool } from './array-pool';
+
+describe('the compute worker’s pool of handed-back arrays', () => {
+  it('writes a new array over a buffer handed back, cleared, and gives new memory when none fits', () => {
+    const pool = new ArrayPool();
+    const first = pool.allocate(1000);
+    expect(first.length).toBe(1000);
+    first.fill(7);
+    pool.give([first.buffer as ArrayBuffer]);
+    const again = pool.allocate(990); // a bar a few samples shorter: the same buffer
+    expect(again.buffer).toBe(first.buffer);
+    expect(again.length).toBe(990);
+    expect(again.every((v) => v === 0)).toBe(true);
+    expect(pool.size).toBe(0);
+    expect(pool.allocate(1000).buffer).not.toBe(first.buffer); // taken: new memory
+  });
+
+  it('leaves a buffer far larger than asked for a later, larger bar, and lets detached and surplus buffers go', () => {
+    const pool = new ArrayPool(2);
+    const large = new ArrayBuffer(8 * 4000);
+    pool.give([large]);
+    expect(pool.allocate(1000).buffer).not.toBe(large);
+    expect(pool.size).toBe(1);
+    const detached = new ArrayBuffer(8000);
+    structuredClone(detached, { transfer: [detached] });
+    pool.give([detached, new ArrayBuffer(8000), new ArrayBuffer(8000)]);
+    expect(pool.size).toBe(2);
+    expect(pool.allocate(3900).buffer).toBe(large);
+  });
+});
