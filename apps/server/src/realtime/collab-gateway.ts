@@ -43,7 +43,16 @@ interface Connection {
   clientIds: Set<number>;
   /** The server has asked this client for the edits an update of its built on (a sync step 1) and awaits its answer. */
   askedForMissing: boolean;
+  /** How often it has asked on this socket (past MAX_ASKS the socket is closed: each ask rebuilt the check's shadow). */
+  asks: number;
 }
+
+/**
+ * Asks for missing edits one socket may need: an honest client needs one a reconnection. Each ask follows
+ * a refused check, which rebuilds the shadow from the whole document (tens of ms on the largest design),
+ * so past this the socket is closed as rate-limited (the client reconnects and syncs afresh).
+ */
+const MAX_ASKS = 4;
 
 export interface CollabGatewayDeps {
   db: Db;
@@ -185,7 +194,7 @@ export class CollabGateway {
     this.wss.handleUpgrade(req, socket, head, (ws) =>
       this.connect(ws, req, {
         ws, userId: user.id, sessionId: session.sessionId, displayName: user.displayName, boardId: design.boardId, designId, role,
-        ...this.buckets.of(user.id), clientIds: new Set(), askedForMissing: false,
+        ...this.buckets.of(user.id), clientIds: new Set(), askedForMissing: false, asks: 0,
       }),
     );
   }
@@ -245,17 +254,26 @@ export class CollabGateway {
       if (conn.role === 'viewer') return; // read-only: never applied, never stored
       await doc.whenInitialized; // the check and the relay see the stored state first
       if (message.answer) conn.askedForMissing = false;
+      // Asked already: this edit comes again in the answer, so it is dropped unchecked.
+      else if (conn.askedForMissing) return;
       if (message.update.length > 2) {
         const check = this.checks.get(doc);
-        const refusal = check ? check.refusal(message.update) : 'the design is not loaded';
+        let refusal = check ? check.refusal(message.update) : 'the design is not loaded';
+        // The refusal rebuilt the shadow from the document: an edit of this client's that was being stored
+        // while another refusal rebuilt it is in the shadow now, so an answer is checked once more.
+        if (refusal === MISSING_EDITS && message.answer) refusal = check!.refusal(message.update);
         // An edit that builds on edits this document lacks, from an honest client: it reconnected and
         // typed before answering the server's step 1 (its answer carries what it made offline), or the
         // instance it was on died holding its last edits. The client is asked once for all this document
         // lacks (a step 1); its answer carries the missing edits and this one, and edits that arrive
         // before it are dropped the same way. An answer that still lacks them is final, as before.
         if (refusal === MISSING_EDITS && !message.answer) {
-          if (!conn.askedForMissing) conn.ws.send(step1Message(doc));
+          if (++conn.asks > MAX_ASKS) {
+            this.log(new Error(`collab: closed a socket of user ${conn.userId} on design ${conn.designId}: edits built on missing edits after ${MAX_ASKS} asks`));
+            return conn.ws.close(CLOSE_CODES.rateLimited, 'too many edits built on edits the server does not have');
+          }
           conn.askedForMissing = true;
+          conn.ws.send(step1Message(doc));
           return;
         }
         if (refusal) {

@@ -214,6 +214,25 @@ describe('hostile collab sockets', () => {
     expect(await server.collab.store.rowCount(designId)).toBe(rows + 1); // send() waited 1.5 s with the socket open
   });
 
+  it('asks a socket for missing edits a few times at most, then closes it as rate-limited (each ask rebuilt the check)', async () => {
+    const lost = new Y.Doc();
+    lost.getText('notes').insert(0, 'never sent');
+    const builtOnIt: Uint8Array[] = [];
+    lost.on('update', (u: Uint8Array) => builtOnIt.push(u));
+    lost.getText('notes').insert(0, 'sent; ');
+    const ws = await open();
+    const closed = closeOf(ws);
+    const empty = answerMessage(Y.encodeStateAsUpdate(new Y.Doc())); // an answer with nothing in it
+    for (let i = 0; i < 4; i++) {
+      ws.send(updateMessage(builtOnIt[0]));
+      ws.send(empty);
+    }
+    await wait(300);
+    expect(ws.readyState).toBe(WebSocket.OPEN); // four asks: what an honest client could need
+    ws.send(updateMessage(builtOnIt[0]));
+    expect(await Promise.race([closed.then((c) => c.code), wait(1500).then(() => 0)])).toBe(CLOSE_CODES.rateLimited);
+  });
+
   it('refuses one socket more than a session may open (4429)', async () => {
     const sockets = [];
     for (let i = 0; i < DEFAULT_REALTIME_LIMITS.socketsPerSession; i++) sockets.push(await open());

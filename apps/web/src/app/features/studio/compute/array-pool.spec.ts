@@ -16,7 +16,7 @@ describe('the compute worker’s pool of handed-back arrays', () => {
     expect(pool.allocate(1000).buffer).not.toBe(first.buffer); // taken: new memory
   });
 
-  it('leaves a buffer far larger than asked for a later, larger bar, and lets detached and surplus buffers go', () => {
+  it('leaves a buffer far larger than asked for a later, larger bar, and lets detached buffers go', () => {
     const pool = new ArrayPool(2);
     const large = new ArrayBuffer(8 * 4000);
     pool.give([large]);
@@ -24,8 +24,18 @@ describe('the compute worker’s pool of handed-back arrays', () => {
     expect(pool.size).toBe(1);
     const detached = new ArrayBuffer(8000);
     structuredClone(detached, { transfer: [detached] });
-    pool.give([detached, new ArrayBuffer(8000), new ArrayBuffer(8000)]);
-    expect(pool.size).toBe(2);
+    pool.give([detached]);
+    expect(pool.size).toBe(1);
     expect(pool.allocate(3900).buffer).toBe(large);
+  });
+
+  it('keeps the newest buffers when full: a bar edited to another size is served again', () => {
+    const pool = new ArrayPool(2);
+    pool.give([new ArrayBuffer(8 * 4000), new ArrayBuffer(8 * 4000)]); // an old size
+    const newer = [new ArrayBuffer(8 * 1000), new ArrayBuffer(8 * 1000)];
+    pool.give(newer);
+    expect(pool.size).toBe(2);
+    expect(newer).toContain(pool.allocate(1000).buffer);
+    expect(newer).toContain(pool.allocate(1000).buffer);
   });
 });

@@ -10,9 +10,13 @@ export class ArrayPool {
   /** `keep`: buffers held at most (an edit with a companion bar uses eight). */
   constructor(private readonly keep = 16) {}
 
-  /** Takes buffers back; detached ones (byteLength 0) and those past `keep` are let go. */
+  /** Takes buffers back (detached ones, byteLength 0, are let go); past `keep`, the oldest go, so sizes of bars edited long ago do not stay. */
   give(buffers: readonly ArrayBuffer[]): void {
-    for (const buffer of buffers) if (buffer.byteLength > 0 && this.free.length < this.keep) this.free.push(buffer);
+    for (const buffer of buffers) {
+      if (buffer.byteLength === 0) continue;
+      this.free.push(buffer);
+      if (this.free.length > this.keep) this.free.shift();
+    }
   }
 
   /**
