@@ -33,9 +33,15 @@ import { PointerArea } from './pointer-area/pointer-area';
       display: grid;
       gap: 1.25rem;
     }
-    /* Each view lays itself out and paints alone: a redrawn profile does not make the browser lay out the study or the plan again. */
+    /*
+     * Each view lays itself out and paints alone: a redrawn profile does not make the browser lay out the
+     * study or the plan again. A view off the screen is not laid out or painted at all until it nears it
+     * (its last size is kept for the scroll bar): at 1280 × 900 only the bar view is on screen, and every
+     * frame of an edit painted and handed the compositor the whole page's drawing, plates and plan too.
+     */
     :host > * {
-      contain: layout style;
+      content-visibility: auto;
+      contain-intrinsic-size: auto 480px;
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

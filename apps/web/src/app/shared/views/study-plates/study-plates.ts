@@ -6,16 +6,20 @@ import type { StudyWindow } from '../study-drawing';
 import type { StudyData } from '../view-data';
 import { linesInWindow, plateFrame } from './plate-frame';
 import type { PlateReply, PlateRequest } from './plate-messages';
+import { platesDue, type PlateInputs } from './plates-due';
 
 const TINT_LABELS: Readonly<Record<MetalTint, string>> = { silver: 'Silver', gold: 'Gold', brass: 'Brass' };
 /** Thinnest line drawn on the flat plate, CSS px. */
 const HAIRLINE_PX = 1;
+/** A plate this near the screen counts as on it (CSS px): drawn just before it is scrolled to. */
+const NEAR_SCREEN_PX = 0;
 
 /**
  * The line study's two plates over one window at true scale: flat (ink lines as wide as the grooves)
  * and lit (the engine's height field of the grooves, shaded as polished metal under a light you move,
  * in the metal you choose). Each is drawn in a worker of its own on an OffscreenCanvas, so the page's thread
- * only hands over the lines; moving the light reshades without computing the surface again.
+ * only hands over the lines; moving the light reshades without computing the surface again. A plate
+ * off the screen is drawn when it comes into view (plates-due.ts says why).
  */
 @Component({
   selector: 'bw-study-plates',
@@ -66,6 +70,16 @@ export class StudyPlates {
   private colours: { ink: string; ground: string } | null = null;
   /** The light and metal last handed to the worker. */
   private lightSent = '';
+  /** Which plates are on the screen (until the first observation: both, so a page's first picture is not held back). */
+  private readonly onScreen = signal({ flat: true, lit: true });
+  /**
+   * Each plate's height on the page (CSS px): that of the picture it was last sent, so a plate off the
+   * screen keeps its place (changing it moved and repainted what lies below on every edit) and one on
+   * it changes size with its new picture, not before.
+   */
+  protected readonly heights = signal({ flat: 0, lit: 0 });
+  /** What each plate was last sent. */
+  private readonly sent: { flat: PlateInputs | null; lit: PlateInputs | null } = { flat: null, lit: null };
 
   constructor() {
     const destroyRef = inject(DestroyRef);
@@ -87,6 +101,17 @@ export class StudyPlates {
       }
       const observer = new ResizeObserver(([entry]) => this.cssWidth.set(Math.floor(entry.contentRect.width)));
       observer.observe(this.flatCanvas().nativeElement.parentElement!);
+      const flatCanvas = this.flatCanvas().nativeElement;
+      const seen = new IntersectionObserver(
+        (entries) => {
+          const next = { ...this.onScreen() };
+          for (const entry of entries) next[entry.target === flatCanvas ? 'flat' : 'lit'] = entry.isIntersecting;
+          this.onScreen.set(next);
+        },
+        { rootMargin: `${NEAR_SCREEN_PX}px 0px` },
+      );
+      seen.observe(flatCanvas);
+      seen.observe(this.litCanvas().nativeElement);
       // The ground toggle (light or dark) changes a class or attribute high up: read the colours again, redraw.
       const theme = new MutationObserver(() => {
         this.colours = null;
@@ -95,6 +120,7 @@ export class StudyPlates {
       for (const el of [document.documentElement, document.body]) theme.observe(el, { attributes: true, attributeFilter: ['class', 'data-theme', 'style'] });
       destroyRef.onDestroy(() => {
         observer.disconnect();
+        seen.disconnect();
         theme.disconnect();
       });
     });
@@ -102,33 +128,47 @@ export class StudyPlates {
       this.workers?.flat.terminate();
       this.workers?.lit.terminate();
     });
-    // A new study or window: new plates (the light goes first, so the first lit paint is right). A draft
-    // made final (its full computation failed, so it stays) is drawn again, the lit plate this time.
+    // A new study or window: new pictures for the plates on the screen (the light goes first, so the
+    // first lit paint is right); a plate coming into view gets the newest. A draft made final (its full
+    // computation failed, so it stays) is drawn again, the lit plate this time.
     effect(() => {
       const frame = this.frame();
       const study = this.study();
-      const flatOnly = this.draft();
-      this.themeChanges();
+      const draft = this.draft();
+      const theme = this.themeChanges();
+      const visible = this.onScreen();
       if (!frame) return;
       untracked(() => {
-        this.sendLight();
+        const now: PlateInputs = { study, frame, theme };
+        const due = platesDue(now, draft, { visible: visible.flat, sent: this.sent.flat }, { visible: visible.lit, sent: this.sent.lit });
+        if (!this.workers || (!due.flat && !due.lit)) return;
+        if (due.lit) this.sendLight();
         const ratio = Math.min(2, globalThis.devicePixelRatio || 1);
         const reach = study.depth / Math.tan((study.vAngle * Math.PI) / 360) + study.spacing;
         const lines = linesInWindow(study.lines, frame.x0, frame.x1, reach);
         const colours = this.colours ?? this.readColours();
         const id = ++this.nextId;
-        this.requested.set(id);
-        if (!flatOnly) this.litRequested.set(id);
         const request: PlateRequest = {
           kind: 'surface', id, lines, width: study.width, depth: study.depth, vAngle: study.vAngle,
           window: { x0: frame.x0, x1: frame.x1, y0: frame.y0, y1: frame.y1 },
           widthPx: Math.round(frame.widthCss * ratio), heightPx: Math.round(frame.heightCss * ratio),
           ...colours,
-          hairlinePx: HAIRLINE_PX * ratio, flatOnly,
+          hairlinePx: HAIRLINE_PX * ratio, flatOnly: draft,
         };
-        // The flat worker gets a copy of the lines (tens of kB); the lit one takes them over.
-        this.workers?.flat.postMessage(request);
-        this.workers?.lit.postMessage(request, lines.map((l) => l.buffer as ArrayBuffer));
+        const transfer = lines.map((l) => l.buffer as ArrayBuffer);
+        const heights = this.heights();
+        this.heights.set({ flat: due.flat ? frame.heightCss : heights.flat, lit: due.lit ? frame.heightCss : heights.lit });
+        // When both draw, the flat worker gets a copy of the lines (tens of kB) and the lit one takes them over.
+        if (due.flat) {
+          this.sent.flat = now;
+          this.requested.set(id);
+          this.workers.flat.postMessage(request, due.lit ? [] : transfer);
+        }
+        if (due.lit) {
+          this.sent.lit = now;
+          this.litRequested.set(id);
+          this.workers.lit.postMessage(request, transfer);
+        }
       });
     });
     effect(() => {
