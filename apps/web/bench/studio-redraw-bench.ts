@@ -1,9 +1,12 @@
 /*
  * Studio redraw benchmark, measured from outside in Debian's Chromium:
  *  - edit to redraw, one maker: 30 edits typed into the studio with no other page on the design, from
- *    the input event to the frame after the last view (bar profile, flat and lit study, cut plan)
- *    changed, with the main-thread long tasks meanwhile; and to the frame after every view first showed
- *    the edit (the lit plate's quick surface counts: its anti-aliased one may follow);
+ *    the input event to the frame after the last view on the screen changed, with the main-thread long
+ *    tasks meanwhile; and to the frame after every view first showed the edit (the lit plate's quick
+ *    surface counts: its anti-aliased one may follow). At 1280 × 900 the bar profile is the view on the
+ *    screen (the study's plates, drawn only when in view, and the cut plan lie below it);
+ *  - the same with every view on the screen (a 1280 × 2400 window: bar profile, flat and lit plates,
+ *    cut plan), as on a tall screen or with the page scrolled;
  *  - two makers: 30 more edits with a second browser context on the same design (its redrawing shares
  *    the machine's two cores): the typing page's edit to redraw, and the other page's field holding
  *    the value and its views redrawn, from the typing page's input event and from the update's arrival.
@@ -27,6 +30,8 @@ const DEMO_PASSWORD = 'marsh-lathe-demo-2026';
 const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 const LOBES = 'field-rosette.layers[0].lobes';
 const AMPLITUDE = 'field-rosette.layers[0].amplitude';
+/** A window this tall shows every view of the studio at once (the cut plan ends near 2 100 px). */
+const TALL_PX = 2400;
 /** A view is taken as drawn once nothing in the drawings changed for this long (ms). */
 const QUIET_MS = 700;
 
@@ -151,6 +156,20 @@ async function main(): Promise<void> {
       printTrace(trace);
     }
 
+    // One maker with every view on the screen: the plates are drawn on every edit too.
+    await editor.setViewportSize({ width: 1280, height: TALL_PX });
+    await settle(editor);
+    await editor.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
+    const tall: number[] = [];
+    const tallShown: number[] = [];
+    for (let i = 0; i < EDITS; i++) {
+      const t = await timeLocalEdit(editor, ...edit(EDITS + i)); // on from phase one's edits: repeating its last value would change nothing
+      tall.push(t.drawn);
+      tallShown.push(t.shown);
+    }
+    const tallLongTasks = await editor.evaluate(() => (window as unknown as BenchWindow).bench.longTasks);
+    await editor.setViewportSize({ width: 1280, height: 900 });
+
     // Two makers: the same edits followed on a second page, which redraws too.
     await openStudio(watcher, url);
     const local: number[] = [];
@@ -163,7 +182,7 @@ async function main(): Promise<void> {
     await settle(editor, watcher);
     for (const page of [editor, watcher]) await page.evaluate(() => ((window as unknown as BenchWindow).bench.longTasks = []));
     for (let i = 0; i < EDITS; i++) {
-      const t = await timeEdit(editor, watcher, ...edit(EDITS + i)); // on from phase one's edits: repeating its last value would change nothing
+      const t = await timeEdit(editor, watcher, ...edit(2 * EDITS + i)); // on from the earlier phases' edits
       local.push(t.local);
       localShown.push(t.localShown);
       remoteShown.push(t.arrivedShown);
@@ -181,6 +200,10 @@ async function main(): Promise<void> {
     console.log(row('  edit to every view showing it', soloShown));
     console.log(row('  edit to redraw (the last view settled)', solo));
     console.log(tasks('  long tasks', soloLongTasks));
+    console.log(`One maker, every view on the screen (1280 × ${TALL_PX}):`);
+    console.log(row('  edit to every view showing it', tallShown));
+    console.log(row('  edit to redraw (the last view settled)', tall));
+    console.log(tasks('  long tasks', tallLongTasks));
     console.log('Two makers (a second page on the design, redrawing too):');
     console.log(row('  edit to every view showing it (this page)', localShown));
     console.log(row('  edit to redraw (this page)', local));

@@ -1,5 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { ChangeDetectionStrategy, Component, computed, effect, ElementRef, inject, input, OnInit, signal, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, OnInit, signal, untracked } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -102,10 +102,7 @@ export class DesignStudio implements OnInit {
     effect(() => {
       if (this.session.roleChanges() > 0) untracked(() => void this.loadMeta());
     });
-    effect(() => {
-      const design = this.session.lastValid();
-      if (design) untracked(() => this.compute.request(design));
-    });
+    inject(DestroyRef).onDestroy(this.session.onValidDesign((design) => this.compute.request(design)));
   }
 
   ngOnInit(): void {
