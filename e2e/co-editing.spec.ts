@@ -1,7 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers/accounts';
 import { acceptInvitationByMail, createBoard, createDesign, invite } from './helpers/boards';
-import { shoot } from './helpers/screens';
+import { shoot, wholePage } from './helpers/screens';
 
 /** Full-page shots start from the top, so the sticky headers sit where a reader sees them. */
 async function shootFromTop(page: Page, name: string): Promise<void> {
@@ -134,7 +134,7 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
   await maren.setViewportSize({ width: 360, height: 740 });
   await maren.getByTestId('pane-parameters').click();
   await maren.evaluate(() => window.scrollTo(0, 0));
-  await maren.screenshot({ path: '.tmp/screens/studio-parameters-360.png', fullPage: true });
+  await wholePage(maren, '.tmp/screens/studio-parameters-360.png');
   await maren.getByTestId('pane-views').click();
   await maren.setViewportSize({ width: 1280, height: 900 });
   await shootFromTop(saskia, 'studio-viewer');

@@ -3,7 +3,7 @@ import { PDFParse } from 'pdf-parse';
 import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers/accounts';
 import { createBoard, createDesign } from './helpers/boards';
-import { SCREEN_DIR, shoot } from './helpers/screens';
+import { SCREEN_DIR, shoot, wholePage } from './helpers/screens';
 
 const LOBES = 'field-rosette.layers[0].lobes';
 const REMIX_TITLE = 'Twenty-four sine, acrylic trial with a 4 mm cutter';
@@ -181,7 +181,7 @@ test('studio: a saved version beside now; the title, the cut plan in a line and,
   await expect(page.getByTestId('live-study')).toBeInViewport();
   await page.screenshot({ path: `${SCREEN_DIR}/studio-phone-parameters-360.png` });
   await page.evaluate(() => window.scrollTo(0, 0));
-  await page.screenshot({ path: `${SCREEN_DIR}/studio-phone-parameters-top-360.png`, fullPage: true });
+  await wholePage(page, `${SCREEN_DIR}/studio-phone-parameters-top-360.png`);
   await page.getByTestId('pane-views').click();
   await page.setViewportSize({ width: 1280, height: 900 });
 });

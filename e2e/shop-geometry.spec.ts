@@ -1,7 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers/accounts';
 import { createBoard, createDesign } from './helpers/boards';
-import { shoot } from './helpers/screens';
+import { shoot, wholePage } from './helpers/screens';
 
 /** Opens one parameter panel of the studio by its id (rosette, rubber, cutter, study, plan). */
 async function openPanel(page: Page, id: string): Promise<void> {
@@ -62,5 +62,5 @@ test('a maker sets the cutter off the centre line on a rocking headstock, sees t
   await page.setViewportSize({ width: 360, height: 740 });
   await page.getByTestId('pane-parameters').click();
   await page.evaluate(() => window.scrollTo(0, 0));
-  await page.screenshot({ path: '.tmp/screens/studio-shop-geometry-parameters-360.png', fullPage: true });
+  await wholePage(page, '.tmp/screens/studio-shop-geometry-parameters-360.png');
 });

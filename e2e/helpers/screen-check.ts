@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import AxeBuilder from '@axe-core/playwright';
 import { expect, type Page } from '@playwright/test';
-import { SCREEN_DIR } from './screens';
+import { SCREEN_DIR, wholePage } from './screens';
 
 /** The two widths every screen is looked at: a desktop and a small phone. */
 export const WIDTHS = [1280, 360] as const;
@@ -27,7 +27,7 @@ export async function checkScreen(page: Page, name: string): Promise<ScreenProbl
   for (const width of WIDTHS) {
     await page.setViewportSize({ width, height: HEIGHT[width] });
     await page.waitForTimeout(200);
-    await page.screenshot({ path: `${SCREEN_DIR}/${name}-${width}.png`, fullPage: true });
+    await wholePage(page, `${SCREEN_DIR}/${name}-${width}.png`);
     if (width === 360) problems.overflow = await sidewaysOverflow(page);
   }
   for (const ground of ['paper', 'dark'] as const) {
