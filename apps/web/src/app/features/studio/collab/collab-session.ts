@@ -128,7 +128,15 @@ export class CollabSession {
     const design = this.lastValid();
     if (!design || design === this.lastHeard) return;
     this.lastHeard = design;
-    for (const listener of this.validListeners) listener(design);
+    // In Yjs's observer (for a remote update, inside the socket's message handler): one listener's
+    // failure must not stop the document or the other listeners.
+    for (const listener of this.validListeners) {
+      try {
+        listener(design);
+      } catch (error) {
+        console.error(error);
+      }
+    }
   }
 
   /** Editors write; viewers only follow (the server drops their writes anyway). */

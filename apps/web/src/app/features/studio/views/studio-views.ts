@@ -38,8 +38,13 @@ import { PointerArea } from './pointer-area/pointer-area';
      * study or the plan again. A view off the screen is not laid out or painted at all until it nears it
      * (its last size is kept for the scroll bar): at 1280 × 900 only the bar view is on screen, and every
      * frame of an edit painted and handed the compositor the whole page's drawing, plates and plan too.
+     * On the views themselves, not their pointer areas: content-visibility clips to the box, and a
+     * co-editor's pointer and name may stand past a view's edge.
      */
     :host > * {
+      contain: layout style;
+    }
+    bw-bar-profile, bw-line-study, bw-cut-plan {
       content-visibility: auto;
       contain-intrinsic-size: auto 480px;
     }

@@ -11,7 +11,7 @@ import { platesDue, type PlateInputs } from './plates-due';
 const TINT_LABELS: Readonly<Record<MetalTint, string>> = { silver: 'Silver', gold: 'Gold', brass: 'Brass' };
 /** Thinnest line drawn on the flat plate, CSS px. */
 const HAIRLINE_PX = 1;
-/** A plate this near the screen counts as on it (CSS px): drawn just before it is scrolled to. */
+/** A plate this near the screen counts as on it (CSS px). None: a larger margin drew the flat plate, 63 px below the studio's fold at 1280 × 900, on every edit; a plate scrolled to shows its last picture for one redraw. */
 const NEAR_SCREEN_PX = 0;
 
 /**
