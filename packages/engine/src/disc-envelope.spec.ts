@@ -39,6 +39,22 @@ describe('disc envelopes', () => {
     );
   });
 
+  it('gives a node no cup that ends short of it, far along a long curve (a radius a hair under one step)', () => {
+    // From a property run of the tiled bar: step 0.10000000000000014 mm, cutter radius 0.10000000000000013
+    // mm. Past a few hundred samples the switch point a + r/step rounded up onto the next node, which
+    // then took its neighbour's cup, 0.1 mm too deep, though that cup ends 1e-16 of a step before it.
+    const step = 0.10000000000000014;
+    const r = 0.10000000000000013;
+    for (const at of [3, 532, 5000]) {
+      const y = new Float64Array(at + 4);
+      y.set([0.09999996629016891, 0.10431517061809896, 0.09421249580766299, 0], at);
+      const fast = lowerDiscEnvelope(y, step, r);
+      bruteErosion(y, step, r).forEach((v, i) => expect(Math.abs(fast[i] - v), `node ${i} of ${at + 4}`).toBeLessThan(1e-12));
+      const mirrored = upperDiscEnvelope(y.map((v) => -v), step, r);
+      fast.forEach((v, i) => expect(mirrored[i]).toBe(-v));
+    }
+  });
+
   it('is the identity for radius 0, and a flat line drops by the radius', () => {
     const y = Float64Array.from([1, 2, 3]);
     expect(Array.from(lowerDiscEnvelope(y, 0.1, 0))).toEqual([1, 2, 3]);

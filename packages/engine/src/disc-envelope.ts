@@ -51,9 +51,21 @@ function discEnvelope(y: Float64Array, step: number, radius: number, sign: 1 | -
   let k = 0;
   for (let i = 0; i < n; i++) {
     while (from[k + 1] < i) k++;
-    const j = stack[k];
-    const d = i > j ? i - j : j - i;
-    out[i] = y[j] - sign * kernel[d < last ? d : last];
+    // The switch points are absolute sample positions, so their rounding grows with the index: one
+    // within an ulp of a node can give the node a cup that ends a hair short of it (a radius a hair
+    // under a whole number of steps: at node 532, a + rr rounds up to a + 1). So the node takes the
+    // lowest of the cups that reach it among the stack's pick, the next cup, and its own cup, which
+    // always reaches it; each is a cup of the definition, so the minimum is the envelope.
+    let low = sign * y[i] - kernel[0];
+    for (let c = k; c <= k + 1 && c <= top; c++) {
+      const j = stack[c];
+      const d = i > j ? i - j : j - i;
+      if (d <= last) {
+        const v = sign * y[j] - kernel[d];
+        if (v < low) low = v;
+      }
+    }
+    out[i] = sign * low;
   }
   return out;
 }

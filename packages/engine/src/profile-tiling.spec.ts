@@ -97,6 +97,27 @@ describe('tiled bar profile', () => {
     for (const companion of [undefined, ...COMPANIONS]) expectSameBar(design, companion, coarseStep(design));
   });
 
+  it('is the whole computation where the cutter radius is a hair under one step (a property run found the whole bar 0.1 mm off)', () => {
+    // The whole bar was wrong, not the tiling: far along the bar the disc envelope gave a node its
+    // neighbour's cup (disc-envelope.spec.ts); one period, tiled, kept the right edge.
+    const design: Design = {
+      ...EXAMPLE_DESIGN,
+      rosette: {
+        baseRadius: 10.000000000000009,
+        layers: [
+          { lobes: 16, amplitude: 0.17431154917253783, phase: 0, wave: { shape: 'measured', points: [[0, 40], [32.72727272727273, 40], [65.45454545454545, 40], [98.18181818181819, 40], [130.9090909090909, 40], [163.63636363636363, 40], [196.36363636363637, 40], [229.0909090909091, 40.898227424716254], [261.8181818181818, 40], [294.54545454545456, 40], [327.27272727272725, 40]] } },
+          { lobes: 1, amplitude: 5e-324, phase: 0, wave: { shape: 'scallop' } },
+        ],
+      },
+      rubber: { shape: 'flat', width: 0.536221819903228 },
+      motion: { travelPerRev: 20.00000000000003, leverRatio: 0.6012499988022781 },
+      cutter: { diameter: 0.20000000000000026, flutes: 2 },
+      bar: { ...EXAMPLE_DESIGN.bar, length: 60.000000000000085 },
+      follower: { radius: 0 },
+    };
+    expectSameBar(design, undefined, coarseStep(design));
+  });
+
   it('falls back to the whole bar when the cutter is off the centre line (no tiling there)', () => {
     const design: Design = { ...EXAMPLE_DESIGN, cutter: { ...EXAMPLE_DESIGN.cutter, offset: 0.5 } };
     expectSameBar(design, undefined, 0.01);
