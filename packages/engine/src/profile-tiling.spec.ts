@@ -9,13 +9,13 @@ import { toMm } from './units';
 
 /**
  * Tiling one period along the bar (profile-tiling.ts) must give the bar the whole computation
- * gives: the same points, the paths within floating-point noise (1e-7 of the path's scale: the
- * envelopes' crossing points are computed from node indices a whole number of periods apart, so
- * their last bits may differ, and sharp corners at the property runs' coarse step magnify that: 1.0e-8
- * was met on a clipped wave, 1.00000001e-7 on the companions of a pointed wave, both below; the same
- * bars at a finer step differ by 1e-15), and the same warnings, crest, lead-in and lead-out. 1e-6 of the
- * scale is a nanometre on a 1 mm path, far under anything the bar or its views show, while a tiling
- * error (a period out of place) is of the order of the amplitude.
+ * gives: the same points, the paths within floating-point noise, and the same warnings (their
+ * places' ends within two nodes), crest, lead-in and lead-out. The noise: the envelopes' crossing
+ * points are absolute sample positions, so their last bits differ a whole number of periods along,
+ * and sharp corners at the property runs' coarse step magnify that (1.0e-8 of the path's scale on a
+ * clipped wave, 1.00000001e-7 on the companions of a pointed wave, both below; the same bars at a
+ * finer step differ by 1e-15). 1e-6 of the scale is a nanometre on a 1 mm path, far under anything
+ * the bar or its views show, while a tiling error (a period out of place) is of the order of the amplitude.
  */
 const TOLERANCE = 1e-6;
 
@@ -31,8 +31,19 @@ function expectSameBar(design: Design, companion: Companion | undefined, step: n
     for (let i = 0; i < full[key].length; i++) worst = Math.max(worst, Math.abs(tiled[key][i] - full[key][i]));
     expect(worst, `${key} of ${JSON.stringify(design)} (${companion ?? 'bar'})`).toBeLessThanOrEqual(TOLERANCE * scale);
   }
-  expect(tiled.warnings.map((w) => [w.code, w.count, w.at])).toEqual(full.warnings.map((w) => [w.code, w.count, w.at]));
-  tiled.warnings.forEach((w, i) => expect(Math.abs((w.amount ?? 0) - (full.warnings[i].amount ?? 0))).toBeLessThanOrEqual(TOLERANCE * scale));
+  expect(tiled.warnings.map((w) => [w.code, w.count])).toEqual(full.warnings.map((w) => [w.code, w.count]));
+  // A loss zone ends where the loss crosses its threshold, so noise in the last bits can move an end by
+  // a node (a CI run found an end 0.1 mm apart at the runs' coarse step); a tiling error moves it by periods.
+  const nodes = 2 * tiled.grid.step + 1e-9;
+  tiled.warnings.forEach((w, i) => {
+    const whole = full.warnings[i];
+    expect(Math.abs((w.amount ?? 0) - (whole.amount ?? 0))).toBeLessThanOrEqual(TOLERANCE * scale);
+    expect(!!w.at).toBe(!!whole.at);
+    if (w.at && whole.at) {
+      expect(Math.abs(w.at.xFrom - whole.at.xFrom), `${w.code} from`).toBeLessThanOrEqual(nodes);
+      expect(Math.abs(w.at.xTo - whole.at.xTo), `${w.code} to`).toBeLessThanOrEqual(nodes);
+    }
+  });
   expect(tiled.crest).toEqual(full.crest);
   expect(tiled.leadIn).toEqual(full.leadIn);
   expect(tiled.leadOut).toEqual(full.leadOut);
