@@ -8,12 +8,13 @@ import { SCREEN_DIR, shoot, wholePage } from './helpers/screens';
 const LOBES = 'field-rosette.layers[0].lobes';
 const REMIX_TITLE = 'Twenty-four sine, acrylic trial with a 4 mm cutter';
 
-/** Waits until every plate of the comparison, flat and lit, shows the newest study it was given. */
+/** Scrolls to each plate of the comparison, flat and lit, and waits until it shows the newest study it was given. */
 async function platesPainted(page: Page, count: number): Promise<void> {
   for (const id of ['compare-study-flat', 'compare-study-lit']) {
     const plates = page.getByTestId(id);
     await expect(plates).toHaveCount(count);
     for (let i = 0; i < count; i++) {
+      await plates.nth(i).scrollIntoViewIfNeeded(); // a plate is drawn once it is on the screen
       await expect(plates.nth(i)).not.toHaveAttribute('data-drawn', '0', { timeout: 20_000 });
       await expect(async () => expect(await plates.nth(i).getAttribute('data-drawn')).toBe(await plates.nth(i).getAttribute('data-requested'))).toPass();
     }

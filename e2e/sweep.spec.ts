@@ -68,8 +68,11 @@ test('a member sweeps 3 rosettes × 2 rubbers × 2 travels, filters out detail l
   await odile.page.getByTestId('sweep-compare').click();
   await expect(odile.page.getByTestId('compare-dialog')).toBeVisible();
   await expect(odile.page.getByTestId('compare-column')).toHaveCount(2);
-  // Each plate drawn before the picture (as the compare journey waits for them).
-  for (const plate of await odile.page.getByTestId('compare-study-lit').all()) await expect(plate).not.toHaveAttribute('data-drawn', '0', { timeout: 60_000 });
+  // Each plate drawn before the picture (as the compare journey waits for them); a plate is drawn once on the screen.
+  for (const plate of await odile.page.getByTestId('compare-study-lit').all()) {
+    await plate.scrollIntoViewIfNeeded();
+    await expect(plate).not.toHaveAttribute('data-drawn', '0', { timeout: 60_000 });
+  }
   await shoot(odile.page, 'sweep-compare');
   await odile.page.getByTestId('compare-close').click();
 

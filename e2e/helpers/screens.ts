@@ -22,18 +22,41 @@ export async function shoot(page: Page, name: string): Promise<void> {
 export async function wholePage(page: Page, path: string): Promise<void> {
   const size = page.viewportSize() ?? { width: 1280, height: 800 };
   const scrollY = await page.evaluate(() => window.scrollY);
-  const tall = await page.evaluate(() => document.documentElement.scrollHeight);
-  if (tall > size.height) {
-    await page.setViewportSize({ width: size.width, height: Math.min(tall, 16_000) });
+  // What comes on the screen is laid out at its true size (an unseen view keeps a guessed one), so the
+  // page may grow: the window follows until two frames leave the page's height as it was. A page that
+  // grows with the window itself (a part as tall as the window, then the footer) overhangs it by the
+  // same amount each time: that is its whole height.
+  let height = size.height;
+  let overhang = -1;
+  for (let round = 0; round < 6; round++) {
+    const tall = Math.min(16_000, await settledHeight(page));
+    if (tall <= height || tall - height === overhang) break;
+    overhang = tall - height;
+    height = tall;
+    await page.setViewportSize({ width: size.width, height });
+  }
+  if (height > size.height) {
     // The plates now on the screen draw their pictures (each says which request it shows).
-    await page
-      .waitForFunction(() => [...document.querySelectorAll('canvas[data-requested]')].every((c) => c.getAttribute('data-drawn') === c.getAttribute('data-requested')), undefined, { timeout: 10_000 })
-      .catch(() => undefined);
-    await page.waitForTimeout(200);
+    await page.waitForFunction(
+      () => [...document.querySelectorAll('canvas[data-requested]')].every((c) => c.getAttribute('data-drawn') === c.getAttribute('data-requested')),
+      undefined,
+      { timeout: 20_000 },
+    );
+    await page.waitForTimeout(100);
   }
   await page.screenshot({ path, fullPage: true });
-  if (tall > size.height) {
+  if (height > size.height) {
     await page.setViewportSize(size);
     await page.evaluate((y) => window.scrollTo(0, y), scrollY);
   }
+}
+
+/** The page's height once two frames have passed (layout and the observers' callbacks have run). */
+function settledHeight(page: Page): Promise<number> {
+  return page.evaluate(
+    () =>
+      new Promise<number>((done) =>
+        requestAnimationFrame(() => requestAnimationFrame(() => done(document.documentElement.scrollHeight))),
+      ),
+  );
 }

@@ -40,8 +40,8 @@ export class CollabSession {
   readonly roleChanges = this.roleChangeCount.asReadonly();
   private pointerTimer: ReturnType<typeof setTimeout> | null = null;
   private pendingPointer: PresenceState['pointer'] | undefined;
-  private readonly validListeners = new Set<(design: Design) => void>();
-  private lastHeard: Design | null = null;
+  /** Each listener with the design it was last told, so it hears each design once. */
+  private readonly validListeners = new Set<{ listener: (design: Design) => void; heard: Design | null }>();
 
   /** The design as the document holds it now (not validated). */
   readonly design = this.raw.asReadonly();
@@ -118,21 +118,22 @@ export class CollabSession {
    * bench). Returns the way to stop.
    */
   onValidDesign(listener: (design: Design) => void): () => void {
-    this.validListeners.add(listener);
-    const design = this.lastValid();
-    if (design) listener(design);
-    return () => this.validListeners.delete(listener);
+    const entry = { listener, heard: null as Design | null };
+    this.validListeners.add(entry);
+    this.tellValid();
+    return () => this.validListeners.delete(entry);
   }
 
   private tellValid(): void {
     const design = this.lastValid();
-    if (!design || design === this.lastHeard) return;
-    this.lastHeard = design;
-    // In Yjs's observer (for a remote update, inside the socket's message handler): one listener's
-    // failure must not stop the document or the other listeners.
-    for (const listener of this.validListeners) {
+    if (!design) return;
+    for (const entry of this.validListeners) {
+      if (entry.heard === design) continue;
+      entry.heard = design;
+      // In Yjs's observer (for a remote update, inside the socket's message handler): one listener's
+      // failure must not stop the document or the other listeners.
       try {
-        listener(design);
+        entry.listener(design);
       } catch (error) {
         console.error(error);
       }

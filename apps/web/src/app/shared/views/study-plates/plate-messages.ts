@@ -21,8 +21,6 @@ export type PlateRequest =
       ink: string;
       ground: string;
       hairlinePx: number;
-      /** A draft (the studio's quick preview): the flat plate only; the lit one keeps its surface until the study it was asked for comes. */
-      flatOnly?: boolean;
     }
   /** A new light or metal (to the lit worker): reshades the surface held, without computing it again. */
   | { kind: 'light'; light: SurfaceLight; tint: MetalTint };

@@ -153,7 +153,7 @@ export class StudyPlates {
           window: { x0: frame.x0, x1: frame.x1, y0: frame.y0, y1: frame.y1 },
           widthPx: Math.round(frame.widthCss * ratio), heightPx: Math.round(frame.heightCss * ratio),
           ...colours,
-          hairlinePx: HAIRLINE_PX * ratio, flatOnly: draft,
+          hairlinePx: HAIRLINE_PX * ratio,
         };
         const transfer = lines.map((l) => l.buffer as ArrayBuffer);
         const heights = this.heights();

@@ -72,8 +72,8 @@ function work(): void {
     ({ light, tint } = pendingLight);
     pendingLight = null;
   }
-  // A draft leaves the lit plate alone: its surface would be computed only to be replaced by the final one.
-  const next = surface && !surface.flatOnly ? surface : null;
+  // The page sends this plate no draft (platesDue): its surface would be replaced by the final one at once.
+  const next = surface;
   if (next) {
     refine = null;
     if (lastFineMs > COARSE_WORTH_MS) {
