@@ -14,6 +14,17 @@ function bruteErosion(y: ArrayLike<number>, step: number, r: number): number[] {
   });
 }
 
+/** The definition with the reach in whole samples, ⌊r/step⌋, and the depth √((r/step)² − d²)·step, as the engine takes them. */
+function bruteErosionInSamples(y: ArrayLike<number>, step: number, r: number): number[] {
+  const rr = r / step;
+  const reach = Math.floor(rr);
+  return Array.from(y, (_, i) => {
+    let m = Infinity;
+    for (let j = Math.max(0, i - reach); j <= Math.min(y.length - 1, i + reach); j++) m = Math.min(m, y[j] - Math.sqrt(Math.max(0, rr * rr - (i - j) ** 2)) * step);
+    return m;
+  });
+}
+
 const curve = fc.array(fc.double({ min: -3, max: 3, noNaN: true }), { minLength: 1, maxLength: 300 });
 
 describe('disc envelopes', () => {
@@ -39,19 +50,33 @@ describe('disc envelopes', () => {
     );
   });
 
-  it('gives a node no cup that ends short of it, far along a long curve (a radius a hair under one step)', () => {
-    // From a property run of the tiled bar: step 0.10000000000000014 mm, cutter radius 0.10000000000000013
-    // mm. Past a few hundred samples the switch point a + r/step rounded up onto the next node, which
-    // then took its neighbour's cup, 0.1 mm too deep, though that cup ends 1e-16 of a step before it.
-    const step = 0.10000000000000014;
-    const r = 0.10000000000000013;
+  it('gives no node a cup that does not reach it, however far along the curve (radii a hair under whole steps)', () => {
+    // Here the cups' reach is decided as the engine decides it, in whole samples (bruteErosionInSamples):
+    // in length units a cup's rim may fall either side of a node by rounding, where its depth is 0.
+    const cases: [number[] | Float64Array, number, number][] = [
+      // Found by a second reader: a cup popped by rounded switch points (4.7 and -0.224 against 0.776),
+      // and a crossing rounded below the node where the later cup starts.
+      [[5, 5, 5, 5, 0, 1, 5, 5, 5, 5, 0, 5, 5, 5], 0.1, 0.3],
+      [[5, 5, 5, 5, 5, 5, 5, 0.3473580809295971, 0.18152684146569897, 5, 5, 5, 5, 5], 0.05, 0.3],
+    ];
+    // From a property run of the tiled bar (step 0.10000000000000014 mm, radius 0.10000000000000013 mm):
+    // past a few hundred samples a node took its neighbour's cup, 0.1 mm too deep.
     for (const at of [3, 532, 5000]) {
       const y = new Float64Array(at + 4);
       y.set([0.09999996629016891, 0.10431517061809896, 0.09421249580766299, 0], at);
+      cases.push([y, 0.10000000000000014, 0.10000000000000013]);
+    }
+    // Smooth curves of 3000 samples with radii at, or a hair under, whole numbers of steps.
+    const wave = (step: number, phase: number) => Float64Array.from({ length: 3000 }, (_, i) => 0.2 * Math.sin(i * step * 2.1 + phase) + 0.05 * Math.sin(i * step * 7.3));
+    for (const [step, r] of [[0.1, 0.3], [0.05, 0.15], [0.05, 0.3], [0.01, 0.03]]) for (const phase of [0, 0.7, 2.9]) cases.push([wave(step, phase), step, r]);
+    for (const m of [1, 2, 3, 4, 5]) for (const step of [0.1, 0.0125, 0.00208]) cases.push([wave(step, m), step, m * step * (1 - 2 ** -52)]);
+    for (const [values, step, r] of cases) {
+      const y = Float64Array.from(values);
       const fast = lowerDiscEnvelope(y, step, r);
-      bruteErosion(y, step, r).forEach((v, i) => expect(Math.abs(fast[i] - v), `node ${i} of ${at + 4}`).toBeLessThan(1e-12));
+      const slow = bruteErosionInSamples(y, step, r);
+      slow.forEach((v, i) => expect(Math.abs(fast[i] - v), `node ${i} of ${y.length}, step ${step}, radius ${r}`).toBeLessThan(1e-12));
       const mirrored = upperDiscEnvelope(y.map((v) => -v), step, r);
-      fast.forEach((v, i) => expect(mirrored[i]).toBe(-v));
+      fast.forEach((v, i) => expect(mirrored[i] + v).toBe(0));
     }
   });
 
