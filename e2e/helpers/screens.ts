@@ -35,19 +35,31 @@ export async function wholePage(page: Page, path: string): Promise<void> {
     height = tall;
     await page.setViewportSize({ width: size.width, height });
   }
-  if (height > size.height) {
-    // The plates now on the screen draw their pictures (each says which request it shows).
-    await page.waitForFunction(
-      () => [...document.querySelectorAll('canvas[data-requested]')].every((c) => c.getAttribute('data-drawn') === c.getAttribute('data-requested')),
-      undefined,
-      { timeout: 20_000 },
-    );
-    await page.waitForTimeout(100);
-  }
-  await page.screenshot({ path, fullPage: true });
-  if (height > size.height) {
-    await page.setViewportSize(size);
-    await page.evaluate((y) => window.scrollTo(0, y), scrollY);
+  try {
+    if (height > size.height) {
+      // The plates now on the screen draw their pictures (each says which request it shows); as long as the sweep's plates are given.
+      await page
+        .waitForFunction(
+          () => [...document.querySelectorAll('canvas[data-requested]')].every((c) => c.getAttribute('data-drawn') === c.getAttribute('data-requested')),
+          undefined,
+          { timeout: 60_000 },
+        )
+        .catch(async (error: unknown) => {
+          const undrawn = await page.evaluate(() =>
+            [...document.querySelectorAll('canvas[data-requested]')]
+              .filter((c) => c.getAttribute('data-drawn') !== c.getAttribute('data-requested'))
+              .map((c) => c.getAttribute('data-testid') ?? c.className),
+          );
+          throw new Error(`${path}: plates not drawn in 60 s: ${undrawn.join(', ')}`, { cause: error });
+        });
+      await page.waitForTimeout(100);
+    }
+    await page.screenshot({ path, fullPage: true });
+  } finally {
+    if (height > size.height) {
+      await page.setViewportSize(size);
+      await page.evaluate((y) => window.scrollTo(0, y), scrollY);
+    }
   }
 }
 

@@ -64,6 +64,21 @@ describe('the collab session telling listeners of each valid design', () => {
     expect(dropped).toHaveBeenCalledTimes(1); // only the design it was told when it joined
   });
 
+  it('leaves every listener on the newest design when one writes to the document while it is told', () => {
+    const s = session();
+    writeDesign(s.doc, EXAMPLE_DESIGN);
+    const first: number[] = [];
+    const second: number[] = [];
+    s.onValidDesign((d) => {
+      first.push(lobesOf(d));
+      if (lobesOf(d) === 9) s.setField(['rosette', 'layers', 0, 'lobes'], 10);
+    });
+    s.onValidDesign((d) => second.push(lobesOf(d)));
+    s.setField(['rosette', 'layers', 0, 'lobes'], 9);
+    expect(first.at(-1)).toBe(10);
+    expect(second.at(-1)).toBe(10);
+  });
+
   it('keeps the document and the other listeners going when one listener throws', () => {
     const s = session();
     writeDesign(s.doc, EXAMPLE_DESIGN);

@@ -137,6 +137,8 @@ export class CollabSession {
       } catch (error) {
         console.error(error);
       }
+      // A listener that wrote to the document has had the newer design told to everyone: stop here.
+      if (this.lastValid() !== design) return;
     }
   }
 

@@ -73,27 +73,26 @@ function work(): void {
     pendingLight = null;
   }
   // The page sends this plate no draft (platesDue): its surface would be replaced by the final one at once.
-  const next = surface;
-  if (next) {
+  if (surface) {
     refine = null;
     if (lastFineMs > COARSE_WORTH_MS) {
       const started = performance.now();
       shown = null; // its memory may be written over below
-      coarse = surfaceOf(next, 1, coarse);
-      shown = { field: coarse, id: next.id, fine: false };
+      coarse = surfaceOf(surface, 1, coarse);
+      shown = { field: coarse, id: surface.id, fine: false };
       paint(canvas, performance.now() - started);
-      refine = next;
+      refine = surface;
       refineDue = false;
       // The anti-aliased surface once this frame is out (a task started at once would hold the quick
       // picture back until it ends), unless a newer study comes first.
       afterFrame(() => {
-        if (refine !== next) return;
+        if (refine !== surface) return;
         refineDue = true;
         schedule();
       });
       return;
     }
-    drawFine(next, canvas);
+    drawFine(surface, canvas);
   } else if (refine && refineDue && !relit) {
     const study = refine;
     refine = null;
