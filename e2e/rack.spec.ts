@@ -41,6 +41,9 @@ test('a member edits a rosette, adds a rubber, exports and re-imports the rack, 
   await sine.getByTestId('rack-rosette-more').click();
   await page.getByTestId('rack-rosette-edit').click();
   const edge = page.getByTestId('rosette-live-drawing').locator('path.edge');
+  // The editor filled and drawn before the edit (a value typed before the rosette arrives is written over).
+  await expect(page.getByTestId('rosette-lobes-0')).toHaveValue('24');
+  await expect(edge).toHaveAttribute('d', /\d/);
   const drawnBefore = await edge.getAttribute('d');
   await page.getByTestId('rosette-lobes-0').fill('9');
   await expect(edge).not.toHaveAttribute('d', drawnBefore!);
