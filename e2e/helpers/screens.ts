@@ -37,7 +37,7 @@ export async function wholePage(page: Page, path: string): Promise<void> {
   }
   try {
     if (height > size.height) {
-      // The plates now on the screen draw their pictures (each says which request it shows); as long as the sweep's plates are given.
+      // The plates now on the screen draw their pictures (each says which request it shows); 60 s, as the sweep allows its plates.
       await page
         .waitForFunction(
           () => [...document.querySelectorAll('canvas[data-requested]')].every((c) => c.getAttribute('data-drawn') === c.getAttribute('data-requested')),

@@ -50,7 +50,7 @@ describe('disc envelopes', () => {
     );
   });
 
-  it('gives no node a cup that does not reach it, however far along the curve (radii a hair under whole steps)', () => {
+  it('gives no node a cup that does not reach it, however far along the curve (radii a hair under or over whole steps)', () => {
     // Here the cups' reach is decided as the engine decides it, in whole samples (bruteErosionInSamples):
     // in length units a cup's rim may fall either side of a node by rounding, where its depth is 0.
     const cases: [number[] | Float64Array, number, number][] = [
@@ -59,6 +59,13 @@ describe('disc envelopes', () => {
       [[5, 5, 5, 5, 0, 1, 5, 5, 5, 5, 0, 5, 5, 5], 0.1, 0.3],
       [[5, 5, 5, 5, 5, 5, 5, 0.3473580809295971, 0.18152684146569897, 5, 5, 5, 5, 5], 0.05, 0.3],
     ];
+    // Found by a third reader: a radius a few ulps over whole steps, where a cup stands nearly upright at
+    // its edge, so the crossing's rounding gave the edge node the higher cup (1e-8 of the radius off).
+    cases.push([[0, 1], 1, 1.0000000000000002], [[0, 0.1], 0.1, 0.10000000000000003], [[0, 10, 1e-8], 1, 1.0000000000000002]);
+    const upright = new Float64Array(12_001).fill(1e9);
+    upright[10_000] = 0;
+    upright[10_002] = 89.42033539395024;
+    cases.push([upright, 1, 2000 * (1 + 2 ** -52)]);
     // From a property run of the tiled bar (step 0.10000000000000014 mm, radius 0.10000000000000013 mm):
     // past a few hundred samples a node took its neighbour's cup, 0.1 mm too deep.
     for (const at of [3, 532, 5000]) {
@@ -69,7 +76,7 @@ describe('disc envelopes', () => {
     // Smooth curves of 3000 samples with radii at, or a hair under, whole numbers of steps.
     const wave = (step: number, phase: number) => Float64Array.from({ length: 3000 }, (_, i) => 0.2 * Math.sin(i * step * 2.1 + phase) + 0.05 * Math.sin(i * step * 7.3));
     for (const [step, r] of [[0.1, 0.3], [0.05, 0.15], [0.05, 0.3], [0.01, 0.03]]) for (const phase of [0, 0.7, 2.9]) cases.push([wave(step, phase), step, r]);
-    for (const m of [1, 2, 3, 4, 5]) for (const step of [0.1, 0.0125, 0.00208]) cases.push([wave(step, m), step, m * step * (1 - 2 ** -52)]);
+    for (const m of [1, 2, 3, 4, 5]) for (const step of [0.1, 0.0125, 0.00208]) for (const hair of [-1, 1, 3]) cases.push([wave(step, m), step, m * step * (1 + hair * 2 ** -52)]);
     for (const [values, step, r] of cases) {
       const y = Float64Array.from(values);
       const fast = lowerDiscEnvelope(y, step, r);

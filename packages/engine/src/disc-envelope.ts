@@ -31,6 +31,8 @@ function discEnvelope(y: Float64Array, step: number, radius: number, sign: 1 | -
   const rr = radius / step; // radius in samples
   const reach = Math.floor(rr); // a cup reaches the nodes within this many samples of its centre
   const scale = sign / step; // heights in samples, flipped for the upper envelope
+  const kernel = depthTable(rr, step);
+  const cups: Cups = { y, sign, kernel, reach, rr, scale };
   const stack = new Int32Array(n);
   // The first node at which each cup on the stack is the lowest; whole nodes, so no rounding of a
   // position far along the curve can hand a node to a cup that does not reach it.
@@ -39,50 +41,74 @@ function discEnvelope(y: Float64Array, step: number, radius: number, sign: 1 | -
   from[0] = -Infinity;
   from[1] = Infinity;
   for (let q = 1; q < n; q++) {
-    const yq = y[q] * scale;
     let a = stack[top];
-    let s = switchNode(a, y[a] * scale, q, yq, rr, reach);
+    let s = switchNode(cups, a, q);
     while (s <= from[top]) {
       a = stack[--top];
-      s = switchNode(a, y[a] * scale, q, yq, rr, reach);
+      s = switchNode(cups, a, q);
     }
     stack[++top] = q;
     from[top] = s;
     from[top + 1] = Infinity;
   }
-  const kernel = depthTable(rr, step);
   const out = new Float64Array(n);
   let k = 0;
   for (let i = 0; i < n; i++) {
     while (from[k + 1] <= i) k++;
     const j = stack[k];
-    const d = i > j ? i - j : j - i;
-    // The node's own cup always reaches it: a guard, should a near-tie ever leave the node a cup that does not.
-    out[i] = d <= reach ? y[j] - sign * kernel[d] : y[i] - sign * kernel[0];
+    // Every switch node lies where both cups reach (switchNode), so the cup owning a node reaches it.
+    out[i] = y[j] - sign * kernel[i > j ? i - j : j - i];
   }
   return out;
 }
 
+/** The samples and the cup's depths, as the switch between two cups reads them. */
+interface Cups {
+  y: Float64Array;
+  sign: 1 | -1;
+  /** √(r² − d²) for d = 0 … reach, in length units: the values the envelope is made of. */
+  kernel: Float64Array;
+  reach: number;
+  rr: number;
+  scale: number;
+}
+
 /**
- * The first node from which the cup centred at q (height yq) is at or below the cup at a < q, in
- * sample units (dx = q − a, radius rr). Worked on whole nodes: a reaches the nodes up to a + reach,
- * q those from q − reach (reach = ⌊rr⌋), and where only one of them reaches, that one is lower.
+ * The first node from which the cup centred at q is at or below the cup at a < q. Worked on whole
+ * nodes: a reaches the nodes up to a + reach, q those from q − reach (reach = ⌊rr⌋), and where only
+ * one of them reaches, that one is lower. Where both reach, the circles' lower crossing gives the
+ * node; next to either end of the common run it is checked on the depth table itself: the crossing's
+ * rounding, where a cup stands nearly upright at its edge (rr a few ulps over a whole number), once
+ * gave a node the higher cup.
  */
-function switchNode(a: number, ya: number, q: number, yq: number, rr: number, reach: number): number {
+function switchNode(cups: Cups, a: number, q: number): number {
+  const { y, scale, rr, reach } = cups;
   const dx = q - a;
-  const first = dx - reach; // relative to a: the first node q reaches
-  const afterA = reach + 1; // relative to a: the first node a does not reach
-  if (first >= afterA) return a + afterA; // no node both reach: a's run ends, then q's (or a lower cup's)
-  const dy = yq - ya;
+  const first = a + dx - reach; // the first node q reaches
+  const afterA = a + reach + 1; // the first node a does not reach
+  if (first >= afterA) return afterA; // no node both reach: a's run ends, then q's (or a lower cup's)
+  const dy = (y[q] - y[a]) * scale; // in samples, flipped for the upper envelope
   const c = Math.sqrt(dx * (2 * rr - dx)); // depth of either cup at the other's near end
-  if (dy <= -c) return a + first; // q is already lower where it starts
-  if (dy >= c) return a + afterA; // q stays higher until a ends
-  const d = Math.sqrt(dx * dx + dy * dy);
-  const t = Math.sqrt(Math.max(0, rr * rr - (d * d) / 4));
-  // The lower crossing of the two circles, measured from a (small numbers, so its rounding is an ulp
-  // of a few samples), rounded up to a node and kept where both cups reach.
-  const cross = Math.ceil(dx / 2 + (t * dy) / d);
-  return a + Math.min(afterA, Math.max(first, cross));
+  let s: number;
+  if (dy <= -c) s = first; // q is already lower where it starts
+  else if (dy >= c) s = afterA; // q stays higher until a ends
+  else {
+    const d2 = dx * dx + dy * dy;
+    const t = Math.sqrt(Math.max(0, rr * rr - d2 / 4));
+    // Measured from a (small numbers, so its rounding is an ulp of a few samples), rounded up to a node.
+    s = a + Math.min(reach + 1, Math.max(dx - reach, Math.ceil(dx / 2 + (t * dy) / Math.sqrt(d2))));
+  }
+  // Rounding can put the node off by one only next to an end of the common run, where a cup stands
+  // nearly upright and a ulp of position is a visible height; inside it the cups cross at a slant.
+  if (s > first + 1 && s < afterA - 1) return s;
+  while (s > first && qLower(cups, a, q, s - 1)) s--;
+  while (s < afterA && !qLower(cups, a, q, s)) s++;
+  return s;
+}
+
+/** Whether cup q is at or below cup a at node x, both reaching it, by the values the envelope takes. */
+function qLower({ y, sign, kernel }: Cups, a: number, q: number, x: number): boolean {
+  return sign * y[q] - kernel[q > x ? q - x : x - q] <= sign * y[a] - kernel[x > a ? x - a : a - x];
 }
 
 /** √(r² − d²) for d = 0 … ⌊r⌋ samples, in length units. */
