@@ -1,6 +1,6 @@
 import { EXAMPLE_DESIGN, type Design, type PhaseSchedule } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
-import { computeLineStudy, vGrooveWidth } from './line-study';
+import { computeLineStudy, computeLineStudyXY, vGrooveWidth } from './line-study';
 import { periodProfile } from './period-profile';
 import { linePhase } from './phase-schedule';
 import { computeProfile, invertedProfile } from './profile';
@@ -116,6 +116,21 @@ describe('computeLineStudy', () => {
     const profile = computeProfile(design, { step: 0.01 });
     const study = computeLineStudy(design, profile);
     expect(study.lines).toHaveLength(200);
+  });
+
+  it('gives the same lines as interleaved x, y pairs (the typed form the views draw)', () => {
+    const design = withSchedule({ kind: 'alternate' }, LOPSIDED);
+    const profile = computeProfile(design, { step: 0.01 });
+    const points = computeLineStudy(design, profile);
+    const typed = computeLineStudyXY(design, profile);
+    expect(typed.spacing).toBe(points.spacing);
+    expect(typed.width).toBe(points.width);
+    expect(typed.lines).toHaveLength(points.lines.length);
+    typed.lines.forEach((line, j) => {
+      expect(line.index).toBe(points.lines[j].index);
+      expect(line.phase).toBe(points.lines[j].phase);
+      expect(Array.from(line.xy)).toEqual(points.lines[j].points.flat());
+    });
   });
 });
 

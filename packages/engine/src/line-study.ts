@@ -24,6 +24,11 @@ interface Template {
   v: Float64Array;
 }
 
+/** The line study with each line as interleaved x, y pairs (mm): the form the views and workers draw and hand over. */
+export interface LineStudyXY extends Omit<LineStudy, 'lines'> {
+  lines: { index: number; phase: number; xy: Float64Array }[];
+}
+
 /**
  * Line j is Y_j(x) = j·p + F(Δ_j − x): the follower path F (relative to its lowest point) mirrored,
  * as the work moves against the bar, and shifted by the schedule's phase Δ_j. With
@@ -34,9 +39,14 @@ interface Template {
  * it; a companion's too) supplies that period when the bar holds one clear of its ends.
  */
 export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
+  return withPoints(computeLineStudyXY(design, profile));
+}
+
+/** computeLineStudy with each line as one typed array of x, y pairs: no point objects (a study holds tens of thousands). */
+export function computeLineStudyXY(design: Design, profile?: Profile): LineStudyXY {
   const mm = design.units === 'mm' ? design : toMm(design);
   const period = (profile && periodFromProfile(mm, profile)) ?? periodFromDesign(mm, profile?.step);
-  return periodLineStudy(mm.study, period, mm.bar.length);
+  return periodLineStudyXY(mm.study, period, mm.bar.length);
 }
 
 /**
@@ -45,6 +55,11 @@ export function computeLineStudy(design: Design, profile?: Profile): LineStudy {
  * caller that keeps the period (the sweep's thumbnails). `study` and `length` in mm.
  */
 export function periodLineStudy(study: Design['study'], period: { line: ArrayLike<number>; step: number }, length: number): LineStudy {
+  return withPoints(periodLineStudyXY(study, period, length));
+}
+
+/** periodLineStudy with each line as interleaved x, y pairs. */
+export function periodLineStudyXY(study: Design['study'], period: { line: ArrayLike<number>; step: number }, length: number): LineStudyXY {
   const mirrored = lineTemplate(period);
   // F(x + Δ) = G(−Δ − x) with G(u) = F(−u): the same walk over the template read backwards.
   const asBar = study.direction === 'as-bar';
@@ -54,9 +69,18 @@ export function periodLineStudy(study: Design['study'], period: { line: ArrayLik
     // Reduced before use: a phase of 1e20 periods would leave the walk below without a step to take.
     const phase = reducedPhase(linePhase(schedule, index));
     const shift = (asBar ? 1 - phase : phase) * template.period; // −Δ taken as 1 − Δ, so the walk starts from a non-negative shift
-    return { index, phase, points: layLine(template, shift, index * spacing, length) };
+    return { index, phase, xy: layLine(template, shift, index * spacing, length) };
   });
   return { spacing, width: vGrooveWidth(depth, vAngle), length, lines };
+}
+
+function withPoints(s: LineStudyXY): LineStudy {
+  const lines = s.lines.map(({ index, phase, xy }) => {
+    const points: Point[] = new Array(xy.length / 2);
+    for (let i = 0; i < points.length; i++) points[i] = [xy[2 * i], xy[2 * i + 1]];
+    return { index, phase, points };
+  });
+  return { spacing: s.spacing, width: s.width, length: s.length, lines };
 }
 
 /** Width of the groove a V-cutter of included angle `vAngle` (degrees) cuts at `depth`: 2·d·tan(α/2). */
@@ -129,10 +153,25 @@ function heightAt(t: Template, u: number): number {
   return t.v[k - 1] + w * (t.v[k] - t.v[k - 1]);
 }
 
-/** Points of Y(x) = base + F(shift − x) for x from 0 to length: walk the template backwards in u. */
-function layLine(t: Template, shift: number, base: number, length: number): Point[] {
-  const xs: number[] = [0];
-  const ys: number[] = [heightAt(t, shift)];
+/**
+ * Y(x) = base + F(shift − x) for x from 0 to length as interleaved x, y pairs: walk the template
+ * backwards in u, once to count the vertices and once to write them (no growing arrays).
+ */
+function layLine(t: Template, shift: number, base: number, length: number): Float64Array {
+  const count = walkLine(t, shift, base, length, null);
+  const xy = new Float64Array(2 * count);
+  walkLine(t, shift, base, length, xy);
+  return xy;
+}
+
+/** The walk of layLine: writes its points into `out` when given; returns how many there are. */
+function walkLine(t: Template, shift: number, base: number, length: number, out: Float64Array | null): number {
+  let n = 0;
+  if (out) {
+    out[0] = 0;
+    out[1] = base + heightAt(t, shift);
+  }
+  n++;
   const last = t.u.length - 1; // u[last] = period repeats u[0]
   let origin = Math.floor(shift / t.period) * t.period;
   let k = last;
@@ -141,18 +180,20 @@ function layLine(t: Template, shift: number, base: number, length: number): Poin
     const x = shift - (origin + t.u[k]);
     if (x >= length) break;
     if (x > 0) {
-      xs.push(x);
-      ys.push(t.v[k]);
+      if (out) {
+        out[2 * n] = x;
+        out[2 * n + 1] = base + t.v[k];
+      }
+      n++;
     }
     if (--k < 0) {
       k = last - 1;
       origin -= t.period;
     }
   }
-  xs.push(length);
-  ys.push(heightAt(t, shift - length));
-  // Filled in place: fewer reallocations of the many small tuples a study holds.
-  const points: Point[] = new Array(xs.length);
-  for (let i = 0; i < xs.length; i++) points[i] = [xs[i], base + ys[i]];
-  return points;
+  if (out) {
+    out[2 * n] = length;
+    out[2 * n + 1] = base + heightAt(t, shift - length);
+  }
+  return n + 1;
 }
