@@ -38,4 +38,29 @@ describe('the compute worker’s pool of handed-back arrays', () => {
     expect(newer).toContain(pool.allocate(1000).buffer);
     expect(newer).toContain(pool.allocate(1000).buffer);
   });
+
+  it('serves a lobe count typed up from 20 to 29 and back on the first edit’s memory', () => {
+    // Four arrays an edit; the bar's samples follow the period (3 000 a lobe here, as the example bar's).
+    const pool = new ArrayPool();
+    const fresh = new Set<ArrayBuffer>();
+    const seen = new Set<ArrayBuffer>();
+    const lobes = [20, 21, 22, 23, 24, 25, 26, 27, 28, 29, 20, 21, 29, 20];
+    for (const l of lobes) {
+      const arrays = [0, 1, 2, 3].map(() => pool.allocate(3000 * l + 1));
+      for (const a of arrays) {
+        if (!seen.has(a.buffer as ArrayBuffer)) fresh.add(a.buffer as ArrayBuffer);
+        seen.add(a.buffer as ArrayBuffer);
+      }
+      pool.give(arrays.map((a) => a.buffer as ArrayBuffer));
+    }
+    expect(fresh.size).toBe(4);
+  });
+
+  it('takes the smallest buffer that fits, leaving the larger for a larger bar', () => {
+    const pool = new ArrayPool();
+    const [small, large] = [new ArrayBuffer(8 * 1100), new ArrayBuffer(8 * 1900)];
+    pool.give([large, small]);
+    expect(pool.allocate(1000).buffer).toBe(small);
+    expect(pool.allocate(1500).buffer).toBe(large);
+  });
 });
