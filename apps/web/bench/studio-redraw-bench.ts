@@ -13,7 +13,8 @@
  * It starts a real server on a fresh data directory with the demo data (WEB_DIST: the web build to
  * serve, default dist/web/browser). Run: node --import tsx apps/web/bench/studio-redraw-bench.ts
  * BENCH_CPU=1 adds the CPU of the bench's processes over the one-maker edits (the server, Chromium's
- * processes, the bench itself); BENCH_PROFILE_FILE=path keeps BENCH_PROFILE's raw CPU profile.
+ * processes, the bench itself); BENCH_PROFILE_FILE=path keeps BENCH_PROFILE's raw CPU profile;
+ * BENCH_SERVER_PROFILE_DIR=dir has the server write Node's own CPU profile there when it stops.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
@@ -410,7 +411,7 @@ async function startServer(): Promise<ChildProcess> {
   if (await fetch(`${BASE}/api/health`).then(() => true, () => false)) throw new Error(`Port ${PORT} already answers: stop that server or set BENCH_PORT`);
   fs.rmSync(DATA_DIR, { recursive: true, force: true });
   fs.mkdirSync(path.dirname(DATA_DIR), { recursive: true });
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/server/src/main.ts'], {
+  const child = spawn(process.execPath, [...(process.env.BENCH_SERVER_PROFILE_DIR ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_SERVER_PROFILE_DIR}`] : []), '--import', 'tsx', 'apps/server/src/main.ts'], {
     cwd: ROOT,
     stdio: ['ignore', 'ignore', 'inherit'],
     env: { ...process.env, PORT: String(PORT), DATA_DIR, DEMO_DATA: 'true', NODE_ENV: 'test', WEB_DIST },

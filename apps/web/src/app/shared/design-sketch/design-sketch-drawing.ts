@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile } from '@barwright/engine';
+import { computeLineStudyXY, computeProfile } from '@barwright/engine';
 import { studyDrawing, type StudyDrawing } from '../views/study-drawing';
 import type { StudyData } from '../views/view-data';
 
@@ -25,14 +25,14 @@ export function designSketchDrawing(design: Design): StudyDrawing | null {
     const lines = Math.min(design.study.lines, LINES_SHOWN);
     const small: Design = { ...design, study: { ...design.study, lines } };
     const profile = computeProfile(small, { step: periodMm / SAMPLES_PER_PERIOD });
-    const study = computeLineStudy(small, profile);
+    const study = computeLineStudyXY(small, profile);
     const data: StudyData = {
       spacing: study.spacing,
       width: study.width,
       length: study.length,
       depth: design.study.depth * perMm,
       vAngle: design.study.vAngle,
-      lines: study.lines.map((line) => Float64Array.from(line.points.flat())),
+      lines: study.lines.map((line) => line.xy),
     };
     const drawing = studyDrawing(data, PERIODS_SHOWN * profile.period);
     // At a few centimetres across, true-width grooves run together: a fine ink line shows the pattern.

@@ -1,5 +1,6 @@
 import type { Design } from '@barwright/contracts';
 import type { Companion } from '@barwright/engine';
+import type { ProfileMode } from '../../../shared/views/profile-drawing';
 import type { DesignViews, StudyLead } from './design-views';
 
 /** Page → worker: compute the views of this design (the newest request replaces any waiting one). */
@@ -8,6 +9,8 @@ export interface ComputeRequest {
   design: Design;
   /** A companion bar to compute beside the shown one, for the bar view. */
   companion?: Companion;
+  /** The bar view's mode, the one its drawing is made in (detail when not said). */
+  mode?: ProfileMode;
 }
 
 /**

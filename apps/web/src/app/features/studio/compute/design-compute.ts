@@ -1,6 +1,7 @@
 import { afterNextRender, computed, DestroyRef, inject, Injectable, Injector, signal } from '@angular/core';
 import type { Design } from '@barwright/contracts';
 import type { Companion } from '@barwright/engine';
+import type { ProfileMode } from '../../../shared/views/profile-drawing';
 import type { ComputeReply, ComputeRequest, RecycleMessage } from './compute-messages';
 import { computeDesignViews, studyLeadOf, transferables, type DesignViews, type StudyLead } from './design-views';
 
@@ -26,6 +27,8 @@ export class DesignCompute {
   private readonly latency = signal<number | null>(null);
   private slowTimer: ReturnType<typeof setTimeout> | null = null;
   private readonly companionKind = signal<Companion | null>(null);
+  /** The bar view's mode: the worker draws the bar in it alone. */
+  private profileMode: ProfileMode = 'detail';
   private lastDesign: Design | null = null;
   private readonly injector = inject(Injector);
   /** Views replaced or dropped, whose arrays go back to the worker once the page has rendered without them. */
@@ -69,16 +72,17 @@ export class DesignCompute {
   request(design: Design): void {
     this.lastDesign = design;
     const companion = this.companionKind() ?? undefined;
+    const mode = this.profileMode;
     const id = ++this.nextId;
     this.requested.set(id);
     this.sentAt.set(id, performance.now());
     if (this.slowTimer) clearTimeout(this.slowTimer);
     this.slowTimer = setTimeout(() => this.slow.set((this.refined()?.id ?? 0) < this.requested()), PROGRESS_AFTER_MS);
     if (this.worker) {
-      this.worker.postMessage({ id, design, companion } satisfies ComputeRequest);
+      this.worker.postMessage({ id, design, companion, mode } satisfies ComputeRequest);
     } else {
       // No worker (an old browser): compute here, after this frame, full stage only.
-      setTimeout(() => computeHere(id, design, companion).forEach((reply) => this.receive(reply)), 0);
+      setTimeout(() => computeHere(id, design, companion, mode).forEach((reply) => this.receive(reply)), 0);
     }
   }
 
@@ -86,6 +90,14 @@ export class DesignCompute {
   setCompanion(kind: Companion | null): void {
     this.companionKind.set(kind);
     if (this.lastDesign) this.request(this.lastDesign);
+  }
+
+  /**
+   * The bar view's mode from now on. Nothing is computed again: the view draws the mode it was just
+   * switched to itself, once, and the next edit's drawing comes in that mode.
+   */
+  setProfileMode(mode: ProfileMode): void {
+    this.profileMode = mode;
   }
 
   private receive(reply: ComputeReply): void {
@@ -164,10 +176,10 @@ function createWorker(): Worker | null {
 }
 
 /** The worker's replies, computed on the page: the lead, then the rest. */
-function computeHere(id: number, design: Design, companion?: Companion): ComputeReply[] {
+function computeHere(id: number, design: Design, companion?: Companion, mode?: ProfileMode): ComputeReply[] {
   try {
     const replies: ComputeReply[] = [];
-    const { study: _sent, ...views } = computeDesignViews(design, 'full', companion, undefined, (lead) => replies.push({ id, lead }));
+    const { study: _sent, ...views } = computeDesignViews(design, 'full', companion, undefined, (lead) => replies.push({ id, lead }), undefined, mode);
     return [...replies, { id, views }];
   } catch (error) {
     return [{ id, error: error instanceof Error ? error.message : String(error) }];

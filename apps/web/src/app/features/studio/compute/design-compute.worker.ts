@@ -63,7 +63,7 @@ function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
   try {
     // The study goes ahead (its lines handed over, so the rest is sent without it).
     const lead = (lead: StudyLead) => self.postMessage({ id, lead } satisfies ComputeReply, { transfer: studyTransferables(lead.study) });
-    const { study: _sent, ...views } = computeDesignViews(request.design, stage, request.companion, lastMarks, lead, pool.allocate);
+    const { study: _sent, ...views } = computeDesignViews(request.design, stage, request.companion, lastMarks, lead, pool.allocate, request.mode);
     if (views.plan) lastMarks = { warnings: views.profile.warnings, depth: views.plan.depth };
     self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
   } catch (error) {

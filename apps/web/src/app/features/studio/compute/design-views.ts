@@ -1,5 +1,5 @@
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, computeProfile, planCut, profileSamples, toMm, type ArrayAllocator, type Companion, type CutPlan, type Profile } from '@barwright/engine';
+import { computeLineStudyXY, computeProfile, planCut, profileSamples, toMm, type ArrayAllocator, type Companion, type CutPlan, type LineStudyXY, type Profile } from '@barwright/engine';
 import { profileDrawing, type ProfileDrawing, type ProfileMode } from '../../../shared/views/profile-drawing';
 import type { ProfileData, StudyData } from '../../../shared/views/view-data';
 import { placementViews, type PlacementViews } from './placement-views';
@@ -24,20 +24,23 @@ export interface DesignViews {
   /** The cutter off the centre line or on a rocking arc: the nominal path (before) and the figures, or null. */
   placement: PlacementViews | null;
   /**
-   * The bar view's drawings in both modes, made where the views are computed (the worker) so the page
-   * only binds their strings: thinning 72 000 samples and writing thousands of SVG points is tens of
-   * milliseconds a redraw. Drawn as the bar view would draw this profile with its companion.
+   * The bar view's drawing in the mode it shows, made where the views are computed (the worker) so the
+   * page only binds its strings: thinning 72 000 samples and writing thousands of SVG points is tens of
+   * milliseconds a redraw. Drawn as the bar view would draw this profile with its companion. One mode
+   * only: the whole bar's thinning reads every sample of four paths, the costliest part of the drawing
+   * (~4 ms an edit in Chromium's worker here), for a mode the page does not show; the bar view draws a
+   * mode it was not sent itself, once, when it is switched to.
    */
   drawings: ProfileDrawings;
   /** Time the engine took, ms. */
   ms: number;
 }
 
-/** The bar view's drawing in each mode, and the companion they show (null: the bar alone). */
+/** The bar view's drawing in one mode, and the companion it shows (null: the bar alone). */
 export interface ProfileDrawings {
   companion: Companion | null;
-  detail: ProfileDrawing;
-  whole: ProfileDrawing;
+  mode: ProfileMode;
+  drawing: ProfileDrawing;
 }
 
 /** What the bar view marks that only a full computation gives: its warnings and the plan's depth (a preview borrows the last full one's). */
@@ -71,12 +74,13 @@ export function computeDesignViews(
   context?: DrawingContext,
   onStudy?: (lead: StudyLead) => void,
   allocate?: ArrayAllocator,
+  mode: ProfileMode = 'detail',
 ): DesignViews {
   const started = performance.now();
   const step = stage === 'preview' ? previewStep(design) : undefined;
   const profile = computeProfile(design, { ...(step === undefined ? {} : { step }), allocate });
   const mm = toMm(design);
-  const study = { ...studyData(computeLineStudy(design, profile)), depth: mm.study.depth, vAngle: mm.study.vAngle };
+  const study = { ...studyData(computeLineStudyXY(design, profile)), depth: mm.study.depth, vAngle: mm.study.vAngle };
   onStudy?.(studyLeadOf({ stage, study, profile }));
   const plan = stage === 'full' ? planCut(design, profile) : null;
   const sizes = { cutterRadius: mm.cutter.diameter / 2, followerRadius: mm.follower.radius, barLength: mm.bar.length };
@@ -84,21 +88,21 @@ export function computeDesignViews(
   const shown = { ...profileData(profile), ...sizes };
   const placement = placementViews(design, profile);
   const marks: DrawingContext = plan ? { warnings: shown.warnings, depth: plan.depth } : (context ?? { warnings: [], depth: null });
-  const drawings = profileDrawings(shown, other, placement, marks);
+  const drawings = profileDrawings(shown, other, placement, marks, mode);
   return {
     ...{ stage, profile: shown, study, plan },
     ...{ companion: other, placement, drawings, ms: performance.now() - started },
   };
 }
 
-/** Both modes of the bar view, drawn as BarProfile would (its `drawing`): the opposite blank above, a companion alone, or the bar with its before and depth. */
-function profileDrawings(p: ProfileData, other: DesignViews['companion'], placement: PlacementViews | null, marks: DrawingContext): ProfileDrawings {
-  const draw = (mode: ProfileMode): ProfileDrawing => {
+/** The bar view in `mode`, drawn as BarProfile would (its `drawing`): the opposite blank above, a companion alone, or the bar with its before and depth. */
+function profileDrawings(p: ProfileData, other: DesignViews['companion'], placement: PlacementViews | null, marks: DrawingContext, mode: ProfileMode): ProfileDrawings {
+  const draw = (): ProfileDrawing => {
     if (other?.kind === 'opposite') return profileDrawing(p, mode, marks.warnings, { upper: other.profile.bar });
     if (other) return profileDrawing(other.profile, mode, other.profile.warnings);
     return profileDrawing(p, mode, marks.warnings, { nominal: placement?.nominal ?? null, depth: marks.depth });
   };
-  return { companion: other?.kind ?? null, detail: draw('detail'), whole: draw('whole') };
+  return { companion: other?.kind ?? null, mode, drawing: draw() };
 }
 
 /** The preview's step (mm): the period on the bar over PREVIEW_SAMPLES_PER_PERIOD, in the file's units converted to mm. */
@@ -132,16 +136,9 @@ function profileData(p: Profile): Omit<ProfileData, 'cutterRadius' | 'followerRa
   return { ...rest, x, cutter, bar, follower };
 }
 
-export function studyData(s: ReturnType<typeof computeLineStudy>): Omit<StudyData, 'depth' | 'vAngle'> {
-  const lines = s.lines.map(({ points }) => {
-    const xy = new Float64Array(points.length * 2);
-    for (let i = 0; i < points.length; i++) {
-      xy[2 * i] = points[i][0];
-      xy[2 * i + 1] = points[i][1];
-    }
-    return xy;
-  });
-  return { spacing: s.spacing, width: s.width, length: s.length, lines };
+/** The study's lines as the views take them: the engine's typed x, y pairs as they are. */
+export function studyData(s: LineStudyXY): Omit<StudyData, 'depth' | 'vAngle'> {
+  return { spacing: s.spacing, width: s.width, length: s.length, lines: s.lines.map((l) => l.xy) };
 }
 
 /** The buffers of a result but its study, handed over to the page without copying (each once: arrays may share one). */

@@ -19,7 +19,8 @@ import { PointerArea } from './pointer-area/pointer-area';
       <bw-bar-profile [profile]="views()?.profile ?? null" [units]="units()" [warnings]="full()?.profile?.warnings ?? []"
                       [crest]="full()?.profile?.crest" [depth]="full()?.plan?.depth ?? null" [other]="views()?.companion ?? null"
                       [nominal]="views()?.placement?.nominal ?? null" [placement]="views()?.placement?.text ?? ''"
-                      [companion]="companion()" [drawn]="views()?.drawings ?? null" (companionChange)="chooseCompanion($event)" />
+                      [companion]="companion()" [drawn]="views()?.drawings ?? null" (companionChange)="chooseCompanion($event)"
+                      (modeChange)="compute.setProfileMode($event)" />
     </bw-pointer-area>
     <bw-pointer-area view="study">
       <bw-line-study [study]="study()?.study ?? null" [units]="units()" [direction]="session.lastValid()?.study?.direction"

@@ -1,6 +1,6 @@
 /// <reference lib="webworker" />
 import type { Design } from '@barwright/contracts';
-import { computeLineStudy, invertedProfile, toMm } from '@barwright/engine';
+import { computeLineStudyXY, invertedProfile, toMm } from '@barwright/engine';
 import { studyData } from '../../studio/compute/design-views';
 import type { StudyData } from '../../../shared/views/view-data';
 
@@ -12,7 +12,7 @@ addEventListener('message', (event: MessageEvent<Design>) => {
   try {
     const design = event.data;
     const mm = toMm(design);
-    const study: StudyData = { ...studyData(computeLineStudy(design, invertedProfile(design))), depth: mm.study.depth, vAngle: mm.study.vAngle };
+    const study: StudyData = { ...studyData(computeLineStudyXY(design, invertedProfile(design))), depth: mm.study.depth, vAngle: mm.study.vAngle };
     self.postMessage({ study }, { transfer: study.lines.map((l) => l.buffer as ArrayBuffer) });
   } catch (error) {
     self.postMessage({ error: error instanceof Error ? error.message : String(error) });

@@ -150,19 +150,34 @@ describe('BarProfile', () => {
     expect(el.querySelector('[data-testid="companion-note"]')!.textContent).toContain('upper envelope');
   });
 
-  it('shows the same drawing from the studio worker’s ready-made strings as it draws itself', async () => {
+  it('shows the same drawing from the studio worker’s ready-made strings as it draws itself, and tells its mode', async () => {
     expect(views.drawings.companion).toBe('opposite');
     const inputs = { profile: views.profile, other: views.companion, companion: 'opposite' };
-    const own = await render(inputs);
-    const ready = await render({ ...inputs, drawn: views.drawings });
-    for (const mode of ['detail', 'whole']) {
+    for (const mode of ['detail', 'whole'] as const) {
+      const made = computeDesignViews(EXAMPLE_DESIGN, 'full', 'opposite', undefined, undefined, undefined, mode).drawings;
+      const own = await render(inputs);
+      const ready = await render({ ...inputs, drawn: made });
+      const told: string[] = [];
+      ready.fixture.componentInstance.mode.subscribe((m) => told.push(m));
       for (const { fixture, el } of [own, ready]) {
         el.querySelector<HTMLButtonElement>(`[data-testid="profile-mode-${mode}"] button`)!.click();
         await fixture.whenStable();
       }
       expect(ready.el.querySelector('svg.drawing')!.outerHTML).toBe(own.el.querySelector('svg.drawing')!.outerHTML);
       expect(legendText(ready.el)).toBe(legendText(own.el));
+      expect(told).toEqual(mode === 'whole' ? ['whole'] : []);
     }
+  });
+
+  it('draws a mode itself when the drawing it was given is of the other mode', async () => {
+    const inputs = { profile: views.profile, other: views.companion, companion: 'opposite' };
+    const own = await render(inputs);
+    const ready = await render({ ...inputs, drawn: views.drawings }); // detail
+    for (const { fixture, el } of [own, ready]) {
+      el.querySelector<HTMLButtonElement>('[data-testid="profile-mode-whole"] button')!.click();
+      await fixture.whenStable();
+    }
+    expect(ready.el.querySelector('svg.drawing')!.outerHTML).toBe(own.el.querySelector('svg.drawing')!.outerHTML);
   });
 
   for (const units of ['mm', 'in'] as const) {

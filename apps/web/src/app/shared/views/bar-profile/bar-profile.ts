@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input, model, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, model } from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
@@ -51,12 +51,12 @@ export class BarProfile {
   readonly offerCompanions = input(true);
   readonly idPrefix = input('');
   /**
-   * The drawings already made off the page (the studio's worker), for the companion they show: used
-   * when that is the companion shown, so the page does no thinning or SVG writing of its own.
+   * The drawing already made off the page (the studio's worker), for the companion and mode it shows:
+   * used when those are the ones shown, so the page does no thinning or SVG writing of its own.
    */
-  readonly drawn = input<{ companion: Companion | null; detail: ProfileDrawing; whole: ProfileDrawing } | null>(null);
-
-  protected readonly mode = signal<ProfileMode>('detail');
+  readonly drawn = input<{ companion: Companion | null; mode: ProfileMode; drawing: ProfileDrawing } | null>(null);
+  /** Three periods at true scale or the whole bar; told to whoever makes the `drawn` drawing. */
+  readonly mode = model<ProfileMode>('detail');
   protected readonly companionChoices = COMPANION_CHOICES;
   protected readonly companionNote = computed(() => COMPANION_NOTES[this.companion()]);
   private readonly shownOther = computed(() => {
@@ -68,7 +68,7 @@ export class BarProfile {
     if (!p) return null;
     const other = this.shownOther();
     const drawn = this.drawn();
-    if (drawn && drawn.companion === (other?.kind ?? null)) return drawn[this.mode()];
+    if (drawn && drawn.companion === (other?.kind ?? null) && drawn.mode === this.mode()) return drawn.drawing;
     if (other?.kind === 'opposite') return profileDrawing(p, this.mode(), this.warnings(), { upper: other.profile.bar });
     if (other) return profileDrawing(other.profile, this.mode(), other.profile.warnings);
     return profileDrawing(p, this.mode(), this.warnings(), { nominal: this.nominal(), depth: this.depth() });
