@@ -91,4 +91,39 @@ describe('the studio compute service receiving its worker’s replies', () => {
     expect(compute.study()).toBe(study);
     expect(compute.views()?.study).toBe(study?.study);
   });
+
+  it('holds a study back while no plate is on the screen, and shows it with the rest of its views', () => {
+    const { compute, receive } = service();
+    replies(1, SHORT_BAR, 'full').forEach(receive);
+    compute.setStudyInView(false);
+    const before = compute.study();
+    const [lead, rest] = replies(2, { ...SHORT_BAR, bar: { ...SHORT_BAR.bar, length: 40 } }, 'full');
+    receive(lead);
+    expect(compute.study()).toBe(before); // one redraw for the edit, not one for the study's captions and one for the bar
+    receive(rest);
+    expect(compute.study()).toBe((lead as { lead: StudyLead }).lead);
+    expect(compute.views()?.study).toBe((lead as { lead: StudyLead }).lead.study);
+  });
+
+  it('shows a held study as soon as a plate comes on the screen', () => {
+    const { compute, receive } = service();
+    compute.setStudyInView(false);
+    const [lead] = replies(1, SHORT_BAR, 'full');
+    receive(lead);
+    expect(compute.study()).toBeNull();
+    compute.setStudyInView(true);
+    expect(compute.study()).toBe((lead as { lead: StudyLead }).lead);
+  });
+
+  it('drops a held study whose stage fails, keeping the shown one', () => {
+    const { compute, receive } = service();
+    replies(1, SHORT_BAR, 'full').forEach(receive);
+    const shown = compute.study();
+    compute.setStudyInView(false);
+    const [lead] = replies(2, { ...SHORT_BAR, bar: { ...SHORT_BAR.bar, length: 40 } }, 'full');
+    receive(lead);
+    receive({ id: 2, error: 'The bar could not be drawn.' });
+    compute.setStudyInView(true);
+    expect(compute.study()?.study).toBe(shown?.study);
+  });
 });

@@ -30,6 +30,14 @@ export class DesignCompute {
   /** The bar view's mode: the worker draws the bar in it alone. */
   private profileMode: ProfileMode = 'detail';
   private lastDesign: Design | null = null;
+  /** Whether a plate of the line study is on the screen (true until the plates say otherwise). */
+  private studyInView = true;
+  /**
+   * A stage's study held back while no plate is on the screen: applied with the rest of its views, so
+   * the page redraws once an edit rather than once for the study's captions, in the middle of the
+   * worker's computation (two cores), and again for the bar.
+   */
+  private heldLead: { id: number; lead: StudyLead } | null = null;
   private readonly injector = inject(Injector);
   /** Views replaced or dropped, whose arrays go back to the worker once the page has rendered without them. */
   private readonly retired: Omit<DesignViews, 'study'>[] = [];
@@ -100,19 +108,35 @@ export class DesignCompute {
     this.profileMode = mode;
   }
 
+  /** Whether a plate of the line study is on the screen: a study is shown as soon as it comes only then. */
+  setStudyInView(inView: boolean): void {
+    this.studyInView = inView;
+    if (inView) this.showHeldLead();
+  }
+
+  private showHeldLead(): void {
+    const held = this.heldLead;
+    this.heldLead = null;
+    if (held && held.id >= (this.lead()?.id ?? 0)) this.lead.set(held);
+  }
+
   private receive(reply: ComputeReply): void {
     if ('error' in reply) {
       if (reply.id === this.requested()) this.failure.set(reply.error);
       // A stage that sent its study and then failed: the plates go back to the study of the views shown,
       // so they never show a study whose bar and cut plan do not exist; nothing follows it, so the lit
       // plate draws it even when it is a preview's.
+      if (this.heldLead?.id === reply.id) this.heldLead = null;
       if (this.lead()?.id === reply.id) this.lead.set(leadOf(this.shown()));
       return;
     }
     if ('lead' in reply) {
-      if (reply.id >= (this.lead()?.id ?? 0)) this.lead.set({ id: reply.id, lead: reply.lead });
+      if (reply.id < (this.lead()?.id ?? 0)) return;
+      this.heldLead = { id: reply.id, lead: reply.lead };
+      if (this.studyInView) this.showHeldLead();
       return;
     }
+    this.showHeldLead();
     const sent = this.sentAt.get(reply.id);
     if (sent !== undefined) {
       this.latency.set(performance.now() - sent);

@@ -24,7 +24,8 @@ import { PointerArea } from './pointer-area/pointer-area';
     </bw-pointer-area>
     <bw-pointer-area view="study">
       <bw-line-study [study]="study()?.study ?? null" [units]="units()" [direction]="session.lastValid()?.study?.direction"
-                     [period]="study()?.period ?? null" [draft]="compute.studyIsDraft()" />
+                     [period]="study()?.period ?? null" [draft]="compute.studyIsDraft()"
+                     (platesInView)="compute.setStudyInView($event)" />
     </bw-pointer-area>
     <bw-cut-plan [plan]="full()?.plan ?? null" [units]="units()" [working]="compute.working()"
                  emptyNote="The cut plan appears when the design’s fields are all valid." />

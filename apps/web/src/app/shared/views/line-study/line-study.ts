@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import type { StudyDirection, Units } from '@barwright/contracts';
 import { formatLength } from '@barwright/engine';
@@ -28,6 +28,8 @@ export class LineStudy {
   readonly idPrefix = input('');
   /** The study is a quick preview with the final one following: the lit plate waits for that (see StudyPlates). */
   readonly draft = input(false);
+  /** Whether a plate is on the screen, told when that changes (StudyPlates.inView). */
+  readonly platesInView = output<boolean>();
 
   /** Which part: a narrow or a wide window about the middle (15 and 40 mm, or ½ and 1½ in), or the whole bar. */
   protected readonly choice = signal<'narrow' | 'wide' | 'whole'>('wide');

@@ -1,4 +1,4 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, model, signal, untracked, viewChild } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, model, output, signal, untracked, viewChild } from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatSliderModule } from '@angular/material/slider';
 import { METAL_TINTS, type MetalTint } from '@barwright/engine';
@@ -49,6 +49,11 @@ export class StudyPlates {
   readonly elevation = model(35);
   /** False: the plates alone, the light set from outside. */
   readonly controls = input(true);
+  /**
+   * Whether either plate is on the screen, told when that changes (both count as on it until first
+   * seen). The studio holds a new study back from views nobody sees until the rest of its views come.
+   */
+  readonly inView = output<boolean>();
   private readonly cssWidth = signal(0);
   private readonly themeChanges = signal(0);
   protected readonly supported = signal(true);
@@ -104,9 +109,11 @@ export class StudyPlates {
       const flatCanvas = this.flatCanvas().nativeElement;
       const seen = new IntersectionObserver(
         (entries) => {
-          const next = { ...this.onScreen() };
+          const before = this.onScreen();
+          const next = { ...before };
           for (const entry of entries) next[entry.target === flatCanvas ? 'flat' : 'lit'] = entry.isIntersecting;
           this.onScreen.set(next);
+          if ((next.flat || next.lit) !== (before.flat || before.lit)) this.inView.emit(next.flat || next.lit);
         },
         { rootMargin: `${NEAR_SCREEN_PX}px 0px` },
       );
