@@ -18,7 +18,7 @@ export { type Companion, type ProfileSamples, COMPANIONS, oppositeProfile, profi
 export { type CutPair, shownAndOpposite } from './cut-pair';
 export { type CutterPlacement, type PlacementFigures, cutterPlacement, placementFigures, placementText, alongBarShift, acrossBarHeight } from './cutter-placement';
 export { type PeriodProfile, periodProfile } from './period-profile';
-export { type LineStudy, type LineStudyXY, computeLineStudy, computeLineStudyXY, periodLineStudy, periodLineStudyXY, vGrooveWidth } from './line-study';
+export { type LineStudy, type LineStudyXY, computeLineStudy, computeLineStudyXY, periodLineStudy, vGrooveWidth } from './line-study';
 export { linePhase, reducedPhase } from './phase-schedule';
 export { type LineStudySvgOptions, lineStudySvg } from './line-study-svg';
 export { EXPORT_FORMATS, type ExportFormat, type ExportedFile, type ExportOptions, exportDesign } from './export';

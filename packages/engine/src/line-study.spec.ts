@@ -1,6 +1,6 @@
 import { EXAMPLE_DESIGN, type Design, type PhaseSchedule } from '@barwright/contracts';
 import { describe, expect, it } from 'vitest';
-import { computeLineStudy, computeLineStudyXY, vGrooveWidth } from './line-study';
+import { computeLineStudy, computeLineStudyXY, periodLineStudyXY, vGrooveWidth } from './line-study';
 import { periodProfile } from './period-profile';
 import { linePhase } from './phase-schedule';
 import { computeProfile, invertedProfile } from './profile';
@@ -184,5 +184,48 @@ describe('which way the engraved line runs', () => {
       }
     }
     expect(apart).toBeGreaterThan(0.1); // a lopsided lobe reads differently the other way round
+  });
+});
+
+describe('the typed walk of a line, against the closed form of a triangle wave', () => {
+  // F(u): a triangle of period 3 mm rising 2 mm per mm to 3 mm at u = 1.5 (exact case: the template's
+  // vertices are its corners, so every vertex lies on F and the ends interpolate it exactly).
+  const F = (u: number) => {
+    const w = u - Math.floor(u / 3) * 3;
+    return w <= 1.5 ? 2 * w : 2 * (3 - w);
+  };
+  const triangle = { line: [0, 1, 2, 3, 2, 1], step: 0.5 };
+  const flat = { line: [0, 0, 0, 0], step: 0.75 };
+  const study = (direction: 'mirrored' | 'as-bar', schedule: PhaseSchedule): Design['study'] => ({ ...EXAMPLE_DESIGN.study, direction, schedule, lines: 2, lineSpacing: 10 });
+
+  for (const direction of ['mirrored', 'as-bar'] as const) {
+    for (const length of [0, 0.2, 7.3, 9]) {
+      it(`lays Y_j(x) = j·p + F(${direction === 'as-bar' ? 'x + Δ_j' : 'Δ_j − x'}) with a vertex at every corner, ${direction}, length ${length} mm`, () => {
+        const s = periodLineStudyXY(study(direction, { kind: 'alternate' }), triangle, length);
+        for (const { index, phase, xy } of s.lines) {
+          const shift = phase * 3;
+          const y = (x: number) => index * 10 + (direction === 'as-bar' ? F(x + shift) : F(shift - x));
+          const xs = Array.from({ length: xy.length / 2 }, (_, i) => xy[2 * i]);
+          expect(xs[0]).toBe(0);
+          expect(xs.at(-1)).toBe(length);
+          for (let i = 1; i < xs.length - 1; i++) expect(xs[i]).toBeGreaterThan(xs[i - 1]);
+          xs.forEach((x, i) => expect(xy[2 * i + 1]).toBeCloseTo(y(x), 12));
+          // Corners of F(±x + c) lie 1.5 mm apart from x ≡ ∓c; each one strictly inside (0, length) is a vertex.
+          const first = (((direction === 'as-bar' ? -shift : shift) % 1.5) + 1.5) % 1.5;
+          let corners = 0;
+          for (let c = first; c < length; c += 1.5) if (c > 0) corners++;
+          expect(xs).toHaveLength(2 + corners);
+        }
+      });
+    }
+  }
+
+  it('walks a flat line (one segment a period) to its end at the base line', () => {
+    const s = periodLineStudyXY(study('as-bar', { kind: 'none' }), flat, 7);
+    for (const { index, xy } of s.lines) {
+      expect(xy[0]).toBe(0);
+      expect(xy.at(-2)).toBe(7);
+      for (let i = 1; i < xy.length; i += 2) expect(xy[i]).toBe(index * 10);
+    }
   });
 });

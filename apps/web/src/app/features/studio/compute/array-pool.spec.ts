@@ -63,4 +63,14 @@ describe('the compute worker’s pool of handed-back arrays', () => {
     expect(pool.allocate(1000).buffer).toBe(small);
     expect(pool.allocate(1500).buffer).toBe(large);
   });
+
+  it('does not hold a buffer twice, so no two arrays of one computation share memory', () => {
+    const pool = new ArrayPool();
+    const buffer = new ArrayBuffer(8 * 1000);
+    pool.give([buffer, buffer]);
+    pool.give([buffer]);
+    expect(pool.size).toBe(1);
+    const [a, b] = [pool.allocate(1000), pool.allocate(1000)];
+    expect(a.buffer).not.toBe(b.buffer);
+  });
 });

@@ -10,10 +10,11 @@ export class ArrayPool {
   /** `keep`: buffers held at most (an edit with a companion bar uses eight). */
   constructor(private readonly keep = 16) {}
 
-  /** Takes buffers back (detached ones, byteLength 0, are let go); past `keep`, the oldest go, so sizes of bars edited long ago do not stay. */
+  /** Takes buffers back (detached ones, byteLength 0, are let go, and one already held is not taken twice); past `keep`, the oldest go, so sizes of bars edited long ago do not stay. */
   give(buffers: readonly ArrayBuffer[]): void {
     for (const buffer of buffers) {
-      if (buffer.byteLength === 0) continue;
+      // Held twice, one buffer would back two arrays of one computation, each writing over the other.
+      if (buffer.byteLength === 0 || this.free.includes(buffer)) continue;
       this.free.push(buffer);
       if (this.free.length > this.keep) this.free.shift();
     }

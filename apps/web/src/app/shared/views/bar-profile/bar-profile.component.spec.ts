@@ -169,6 +169,19 @@ describe('BarProfile', () => {
     }
   });
 
+  it('binds the ready-made drawing it is given when its companion and mode are the ones shown, and only then', async () => {
+    // A marked drawing (its bar polygon a sentinel), so that the test sees which drawing was bound.
+    const marked = { ...views.drawings, drawing: { ...views.drawings.drawing, bar: '0,0 1,1 2,0' } };
+    const barPoints = (el: HTMLElement) => el.querySelector('svg.drawing polygon.bar:not(.opposite)')!.getAttribute('points');
+    const inputs = { profile: views.profile, other: views.companion, companion: 'opposite' };
+    const matching = await render({ ...inputs, drawn: marked });
+    expect(barPoints(matching.el)).toBe('0,0 1,1 2,0');
+    const otherCompanion = await render({ ...inputs, companion: 'none', other: null, drawn: marked });
+    expect(barPoints(otherCompanion.el)).not.toBe('0,0 1,1 2,0');
+    const otherMode = await render({ ...inputs, drawn: { ...marked, mode: 'whole' } });
+    expect(barPoints(otherMode.el)).not.toBe('0,0 1,1 2,0');
+  });
+
   it('draws a mode itself when the drawing it was given is of the other mode', async () => {
     const inputs = { profile: views.profile, other: views.companion, companion: 'opposite' };
     const own = await render(inputs);

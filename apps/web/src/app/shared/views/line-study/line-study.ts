@@ -28,7 +28,7 @@ export class LineStudy {
   readonly idPrefix = input('');
   /** The study is a quick preview with the final one following: the lit plate waits for that (see StudyPlates). */
   readonly draft = input(false);
-  /** Whether a plate is on the screen, told when that changes (StudyPlates.inView). */
+  /** Whether a plate is on the screen, told on the plates' first sight of it and whenever it changes (StudyPlates.inView). */
   readonly platesInView = output<boolean>();
 
   /** Which part: a narrow or a wide window about the middle (15 and 40 mm, or ½ and 1½ in), or the whole bar. */

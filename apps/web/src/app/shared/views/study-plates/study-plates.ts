@@ -50,10 +50,11 @@ export class StudyPlates {
   /** False: the plates alone, the light set from outside. */
   readonly controls = input(true);
   /**
-   * Whether either plate is on the screen, told when that changes (both count as on it until first
-   * seen). The studio holds a new study back from views nobody sees until the rest of its views come.
+   * Whether either plate is on the screen, told on the first observation and whenever it changes. The studio holds a new study back from views nobody sees until the rest of its views come.
    */
   readonly inView = output<boolean>();
+  /** What `inView` last said: nothing until the first observation, which is always told (plates made again on the screen must say so). */
+  private toldInView: boolean | null = null;
   private readonly cssWidth = signal(0);
   private readonly themeChanges = signal(0);
   protected readonly supported = signal(true);
@@ -109,11 +110,11 @@ export class StudyPlates {
       const flatCanvas = this.flatCanvas().nativeElement;
       const seen = new IntersectionObserver(
         (entries) => {
-          const before = this.onScreen();
-          const next = { ...before };
+          const next = { ...this.onScreen() };
           for (const entry of entries) next[entry.target === flatCanvas ? 'flat' : 'lit'] = entry.isIntersecting;
           this.onScreen.set(next);
-          if ((next.flat || next.lit) !== (before.flat || before.lit)) this.inView.emit(next.flat || next.lit);
+          const inView = next.flat || next.lit;
+          if (inView !== this.toldInView) this.inView.emit((this.toldInView = inView));
         },
         { rootMargin: `${NEAR_SCREEN_PX}px 0px` },
       );
