@@ -39,6 +39,15 @@ describe('profileDrawing', () => {
 });
 
 describe('profileDrawing marks and dimensions', () => {
+  it('leaves out a period dimension too narrow for its label (the whole bar of a 24-lobe rosette), keeping the height and the depth', () => {
+    const d = profileDrawing(views.profile, 'whole', [], { depth: 2 });
+    // 100/24 mm of a 150 mm bar is ~28 of the drawing's 1000 units: the label, ~80 wide, ran over the edge and the curves.
+    expect(d.dimensions.map((x) => x.kind)).toEqual(['height', 'depth']);
+    for (const dim of profileDrawing(views.profile, 'detail', [], { depth: 2 }).dimensions.filter((x) => x.kind === 'period')) {
+      expect(dim.x2 - dim.x1).toBeGreaterThanOrEqual(100);
+    }
+  });
+
   it('draws overlapping losses once and dimensions the height, a period and the depth', () => {
     const warnings = [
       { code: 'detail-lost-follower' as const, message: 'a', at: { xFrom: 1, xTo: 2 }, amount: 0.05 },

@@ -134,6 +134,13 @@ interface DimensionInput {
  * The height of the bar edge at the right, one period between two crests above the bar, and the
  * depth cut from the blank's top at the left: the three figures a turner checks on a drawing.
  */
+/**
+ * Narrowest period dimension drawn, viewBox units: its label (22 units high, ~80 wide) stands between
+ * the arrows. The whole bar of a many-lobed rosette gives a period of a few units, where the label ran
+ * over the drawing's edge and the curves; the caption and the legend still give the period.
+ */
+const MIN_PERIOD_SPAN = 100;
+
 function dimensionsFor(d: DimensionInput): Dimension[] {
   const dims: Dimension[] = [];
   const right = WIDTH - 24;
@@ -142,7 +149,7 @@ function dimensionsFor(d: DimensionInput): Dimension[] {
     dims.push({ kind: 'height', x1: right, y1, x2: right, y2, mm: d.barHigh - d.barLow, labelX: right - 8, labelY: round((y1 + y2) / 2) });
   }
   const crest = firstCrest(d.bar, d.from, d.period);
-  if (crest !== null && crest + d.period <= d.to && d.period > 0) {
+  if (crest !== null && crest + d.period <= d.to && d.period * d.sx >= MIN_PERIOD_SPAN) {
     const x1 = round((crest - d.from) * d.sx);
     const x2 = round((crest + d.period - d.from) * d.sx);
     const y = round(Math.max(30, d.ys(Math.max(d.barHigh, d.blankTop ?? -Infinity)) - 14));
