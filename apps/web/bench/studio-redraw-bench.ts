@@ -233,7 +233,7 @@ async function main(): Promise<void> {
 async function timeLocalEdit(editor: Page, testId: string, value: string): Promise<{ drawn: number; shown: number }> {
   await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.first = {}; b.log = []; });
   await typeOver(editor, testId, value);
-  await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000, polling: POLL_MS });
+  await whenDrawn(editor);
   await settle(editor);
   const e = await editor.evaluate(() => (window as unknown as BenchWindow).bench);
   if (process.env.BENCH_LOG) console.log(`${testId} = ${value}: ${[...new Set(e.log.map(([a, f, what]) => `${a}/${f} ${what}`))].join('; ')}`);
@@ -253,6 +253,11 @@ async function typeOver(page: Page, testId: string, value: string): Promise<void
   await page.keyboard.insertText(value);
 }
 
+/** Resolves once the page has redrawn since its `drawn` was reset, looking every POLL_MS. */
+async function whenDrawn(page: Page): Promise<void> {
+  await page.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000, polling: POLL_MS });
+}
+
 /** When every view first showed the edit (the frame after the last of their first changes). */
 function shownAt(b: BenchWindow['bench']): number {
   return Math.max(...Object.values(b.first));
@@ -264,7 +269,7 @@ async function timeEdit(editor: Page, watcher: Page, testId: string, value: stri
   await editor.evaluate(() => { const b = (window as unknown as BenchWindow).bench; b.drawn = 0; b.first = {}; b.log = []; });
   await watcher.evaluate(() => ((window as unknown as BenchWindow).bench.updates = []));
   await typeOver(editor, testId, value);
-  await editor.waitForFunction(() => (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000, polling: POLL_MS });
+  await whenDrawn(editor);
   await watcher.waitForFunction(() => (window as unknown as BenchWindow).bench.fieldAt > 0 && (window as unknown as BenchWindow).bench.drawn > 0, undefined, { timeout: 30_000, polling: POLL_MS }).catch(async (error) => {
     const state = await watcher.evaluate((id) => ({ bench: (window as unknown as BenchWindow).bench, value: document.querySelector<HTMLInputElement>(`[data-testid="${id}"]`)?.value, visible: document.visibilityState }), testId);
     throw new Error(`The other page did not follow the edit of ${testId} to ${value}: ${JSON.stringify(state)}`, { cause: error });

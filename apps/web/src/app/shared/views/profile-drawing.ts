@@ -131,16 +131,16 @@ interface DimensionInput {
 }
 
 /**
- * The height of the bar edge at the right, one period between two crests above the bar, and the
- * depth cut from the blank's top at the left: the three figures a turner checks on a drawing.
- */
-/**
  * Narrowest period dimension drawn, viewBox units: its label (22 units high, ~80 wide) stands between
  * the arrows. The whole bar of a many-lobed rosette gives a period of a few units, where the label ran
  * over the drawing's edge and the curves; the caption and the legend still give the period.
  */
 const MIN_PERIOD_SPAN = 100;
 
+/**
+ * The height of the bar edge at the right, one period between two crests above the bar, and the
+ * depth cut from the blank's top at the left: the three figures a turner checks on a drawing.
+ */
 function dimensionsFor(d: DimensionInput): Dimension[] {
   const dims: Dimension[] = [];
   const right = WIDTH - 24;

@@ -50,7 +50,8 @@ export class StudyPlates {
   /** False: the plates alone, the light set from outside. */
   readonly controls = input(true);
   /**
-   * Whether either plate is on the screen, told on the first observation and whenever it changes. The studio holds a new study back from views nobody sees until the rest of its views come.
+   * Whether either plate is on the screen, told on the first observation and whenever it changes. The
+   * studio holds a new study back from views nobody sees until the rest of its views come.
    */
   readonly inView = output<boolean>();
   /** What `inView` last said: nothing until the first observation, which is always told (plates made again on the screen must say so). */
