@@ -54,7 +54,7 @@ export async function wholePage(page: Page, path: string): Promise<void> {
         });
       await page.waitForTimeout(100);
     }
-    await page.screenshot({ path, fullPage: true });
+    await capture(page, path);
   } finally {
     if (height > size.height) {
       await page.setViewportSize(size);
@@ -72,3 +72,24 @@ function settledHeight(page: Page): Promise<number> {
       ),
   );
 }
+
+/**
+ * The capture itself, given its own time: once in CI a full-page capture never returned (the log stops
+ * at "fonts loaded") and took the whole test's time with it. The pictures are for a person to look at,
+ * not what a test asserts, so a capture that does not come in 30 s is tried once more and then left out
+ * with a line in the log, and the test goes on to what it checks.
+ */
+async function capture(page: Page, path: string): Promise<void> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await page.screenshot({ path, fullPage: true, timeout: CAPTURE_MS });
+      return;
+    } catch (error) {
+      if (page.isClosed()) throw error;
+      console.warn(`${path}: capture ${attempt} did not come in ${CAPTURE_MS / 1000} s (${String(error).split('\n')[0]})`);
+      if (attempt === 2) return;
+    }
+  }
+}
+
+const CAPTURE_MS = 30_000;
