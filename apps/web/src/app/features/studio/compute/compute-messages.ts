@@ -11,6 +11,11 @@ export interface ComputeRequest {
   companion?: Companion;
   /** The bar view's mode, the one its drawing is made in (detail when not said). */
   mode?: ProfileMode;
+  /**
+   * The design is about to be edited (the studio): once its views are sent, the worker computes it a
+   * few times more while idle, so that V8 has compiled the engine before the first edit (WARM_UP_RUNS).
+   */
+  warmUp?: boolean;
 }
 
 /**

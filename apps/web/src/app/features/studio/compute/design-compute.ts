@@ -30,6 +30,8 @@ export class DesignCompute {
   /** The bar view's mode: the worker draws the bar in it alone. */
   private profileMode: ProfileMode = 'detail';
   private lastDesign: Design | null = null;
+  /** The design will be edited here (the studio), so the worker warms its engine up (ComputeRequest.warmUp). */
+  private editing = false;
   /** Whether a plate of the line study is on the screen (true until the plates say otherwise). */
   private studyInView = true;
   /**
@@ -87,11 +89,20 @@ export class DesignCompute {
     if (this.slowTimer) clearTimeout(this.slowTimer);
     this.slowTimer = setTimeout(() => this.slow.set((this.refined()?.id ?? 0) < this.requested()), PROGRESS_AFTER_MS);
     if (this.worker) {
-      this.worker.postMessage({ id, design, companion, mode } satisfies ComputeRequest);
+      this.worker.postMessage({ id, design, companion, mode, warmUp: this.editing } satisfies ComputeRequest);
     } else {
       // No worker (an old browser): compute here, after this frame, full stage only.
       setTimeout(() => computeHere(id, design, companion, mode).forEach((reply) => this.receive(reply)), 0);
     }
+  }
+
+  /**
+   * The design is edited here: once the first views are sent, the worker runs the engine a few times
+   * more while idle, so that the first edits do not wait for V8 to compile it. Pages that only show a
+   * design (an entry, a comparison) do not ask: they are computed once.
+   */
+  expectEdits(): void {
+    this.editing = true;
   }
 
   /** Computes a companion bar with the design from now on (null: none), starting with the current design. */

@@ -102,6 +102,7 @@ export class DesignStudio implements OnInit {
     effect(() => {
       if (this.session.roleChanges() > 0) untracked(() => void this.loadMeta());
     });
+    this.compute.expectEdits();
     inject(DestroyRef).onDestroy(this.session.onValidDesign((design) => this.compute.request(design)));
   }
 
