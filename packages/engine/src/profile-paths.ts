@@ -24,7 +24,10 @@ export interface BarPaths {
   repeat?: PathRepeat;
 }
 
-/** Where a profile's four output arrays come from: a zero-filled array of the length asked (ProfileOptions.allocate). */
+/**
+ * Where a profile's four output arrays come from: an array of the length asked (ProfileOptions.allocate).
+ * It may hold an earlier computation's values: the engine writes every element (profile-allocate.spec.ts).
+ */
 export type ArrayAllocator = (length: number) => Float64Array;
 export const newArray: ArrayAllocator = (length) => new Float64Array(length);
 

@@ -26,8 +26,8 @@ export interface ProfileOptions {
    */
   companion?: Companion;
   /**
-   * Where the four output arrays (x, cutter, bar, follower) come from; each must be zero-filled and of
-   * the length asked. By default new arrays. A browser worker that computes edit after edit passes
+   * Where the four output arrays (x, cutter, bar, follower) come from; each of the length asked, whatever
+   * it holds (every element is written). By default new arrays. A browser worker that computes edit after edit passes
    * arrays the page has handed back: there a megabyte of fresh memory costs milliseconds to fault in.
    */
   allocate?: ArrayAllocator;

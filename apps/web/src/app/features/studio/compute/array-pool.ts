@@ -21,7 +21,8 @@ export class ArrayPool {
   }
 
   /**
-   * A zero-filled array of `length`: on the smallest buffer handed back that holds it and is at most
+   * An array of `length` as ArrayAllocator gives it (what it holds is written over, not cleared: the
+   * engine writes every element): on the smallest buffer handed back that holds it and is at most
    * twice its size, else on new memory with half to spare. A bar's sample count follows its period
    * (a lobe more or less moves it by a few per cent, a lobe count typed from 20 to 29 and back by
    * nearly half), and every miss faults in new pages: with this much room the arrays of a first edit
@@ -34,7 +35,7 @@ export class ArrayPool {
       const size = this.free[i].byteLength;
       if (size >= bytes && size <= 2 * bytes && (best < 0 || size < this.free[best].byteLength)) best = i;
     }
-    if (best >= 0) return new Float64Array(this.free.splice(best, 1)[0], 0, length).fill(0);
+    if (best >= 0) return new Float64Array(this.free.splice(best, 1)[0], 0, length);
     return new Float64Array(new ArrayBuffer(Math.ceil(length * 1.5) * Float64Array.BYTES_PER_ELEMENT), 0, length);
   };
 
