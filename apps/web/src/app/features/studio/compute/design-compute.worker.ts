@@ -43,10 +43,13 @@ const pool = new ArrayPool();
  * edits in the studio were the slowest of all (the p95 of the redraw bench). Run at opening, that
  * compiling is done before the first edit instead of in it. A request stops them (between runs), and
  * their time is the next full stage's estimate (a cold first computation would otherwise ask for
- * previews the warm engine does not need).
+ * previews the warm engine does not need). A long bar's runs stop at WARM_UP_MS of the worker's time
+ * in all: on a phone or a 600 mm bar six cold runs would be seconds of battery for little gain.
  */
 const WARM_UP_RUNS = 6;
+const WARM_UP_MS = 300;
 let warmUpsLeft = WARM_UP_RUNS;
+let warmUpSpent = 0;
 let warmUpFrom: ComputeRequest | null = null;
 
 addEventListener('message', (event: MessageEvent<ComputeMessage>) => {
@@ -71,7 +74,7 @@ async function work(): Promise<void> {
         else lastPreviewMs = performance.now() - started;
         await nextTask();
       }
-    } else if (warmUpFrom && warmUpsLeft > 0) {
+    } else if (warmUpFrom && warmUpsLeft > 0 && warmUpSpent < WARM_UP_MS) {
       warmUpsLeft--;
       warmUp(warmUpFrom);
       await nextTask();
@@ -91,6 +94,7 @@ function warmUp(request: ComputeRequest): void {
     const started = performance.now();
     const { study: _unsent, ...views } = computeDesignViews(request.design, 'full', request.companion, lastMarks, undefined, pool.allocate, request.mode);
     lastFullMs = performance.now() - started;
+    warmUpSpent += lastFullMs;
     pool.give(transferables(views));
   } catch {
     warmUpsLeft = 0; // the design's own request has said what is wrong with it
