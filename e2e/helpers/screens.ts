@@ -1,4 +1,4 @@
-import type { Page } from '@playwright/test';
+import { errors, type Page } from '@playwright/test';
 
 export const SCREEN_DIR = '.tmp/screens';
 
@@ -85,7 +85,7 @@ async function capture(page: Page, path: string): Promise<void> {
       await page.screenshot({ path, fullPage: true, timeout: CAPTURE_MS });
       return;
     } catch (error) {
-      if (page.isClosed()) throw error;
+      if (!(error instanceof errors.TimeoutError) || page.isClosed()) throw error;
       console.warn(`${path}: capture ${attempt} did not come in ${CAPTURE_MS / 1000} s (${String(error).split('\n')[0]})`);
       if (attempt === 2) return;
     }

@@ -43,8 +43,9 @@ const pool = new ArrayPool();
  * edits in the studio were the slowest of all (the p95 of the redraw bench). Run at opening, that
  * compiling is done before the first edit instead of in it. A request stops them (between runs), and
  * their time is the next full stage's estimate (a cold first computation would otherwise ask for
- * previews the warm engine does not need). A long bar's runs stop at WARM_UP_MS of the worker's time
- * in all: on a phone or a 600 mm bar six cold runs would be seconds of battery for little gain.
+ * previews the warm engine does not need). A run starts only if, at the last full stage's time, the
+ * runs stay within WARM_UP_MS in all: on a phone or a 600 mm bar six cold runs would be seconds of
+ * battery for little gain, and an edit that comes during a run waits for it.
  */
 const WARM_UP_RUNS = 6;
 const WARM_UP_MS = 300;
@@ -74,7 +75,7 @@ async function work(): Promise<void> {
         else lastPreviewMs = performance.now() - started;
         await nextTask();
       }
-    } else if (warmUpFrom && warmUpsLeft > 0 && warmUpSpent < WARM_UP_MS) {
+    } else if (warmUpFrom && warmUpsLeft > 0 && warmUpSpent + lastFullMs <= WARM_UP_MS) {
       warmUpsLeft--;
       warmUp(warmUpFrom);
       await nextTask();
