@@ -1,7 +1,7 @@
 /// <reference lib="webworker" />
 import { ArrayPool } from './array-pool';
 import type { ComputeMessage, ComputeReply, ComputeRequest } from './compute-messages';
-import { computeDesignViews, studyTransferables, transferables, type ComputeStage, type DrawingContext, type StudyLead } from './design-views';
+import { computeDesignViews, studyTransferables, transferables, type ComputeStage, type DesignViews, type DrawingContext, type StudyLead } from './design-views';
 
 /*
  * The engine off the page's thread. For each request: a quick preview, then the full computation
@@ -93,7 +93,7 @@ function nextTask(): Promise<void> {
 function warmUp(request: ComputeRequest): void {
   try {
     const started = performance.now();
-    const { study: _unsent, ...views } = computeDesignViews(request.design, 'full', request.companion, lastMarks, undefined, pool.allocate, request.mode);
+    const { study: _unsent, ...views } = viewsOf(request, 'full');
     lastFullMs = performance.now() - started;
     warmUpSpent += lastFullMs;
     pool.give(transferables(views));
@@ -102,11 +102,16 @@ function warmUp(request: ComputeRequest): void {
   }
 }
 
+/** The request's views at `stage`, on the pool's arrays, the preview's marks taken from the last full stage. */
+function viewsOf(request: ComputeRequest, stage: ComputeStage, onStudy?: (lead: StudyLead) => void): DesignViews {
+  return computeDesignViews(request.design, stage, request.companion, lastMarks, onStudy, pool.allocate, request.mode);
+}
+
 function reply(id: number, stage: ComputeStage, request: ComputeRequest): void {
   try {
     // The study goes ahead (its lines handed over, so the rest is sent without it).
     const lead = (lead: StudyLead) => self.postMessage({ id, lead } satisfies ComputeReply, { transfer: studyTransferables(lead.study) });
-    const { study: _sent, ...views } = computeDesignViews(request.design, stage, request.companion, lastMarks, lead, pool.allocate, request.mode);
+    const { study: _sent, ...views } = viewsOf(request, stage, lead);
     if (views.plan) lastMarks = { warnings: views.profile.warnings, depth: views.plan.depth };
     self.postMessage({ id, views } satisfies ComputeReply, { transfer: transferables(views) });
   } catch (error) {
