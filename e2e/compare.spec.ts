@@ -173,6 +173,9 @@ test('studio: a saved version beside now; the title, the cut plan in a line and,
   await page.getByTestId('pane-parameters').click();
   await expect(page.getByTestId('live-study')).toBeVisible();
   await expect(page.getByTestId('plan-summary')).toBeVisible();
+  // The link's status shows once, in the strip that stays in sight, not again in the header above it.
+  await expect(page.getByTestId('connection-status')).toHaveCount(1);
+  await expect(page.getByTestId('live-strip').getByTestId('connection-status')).toHaveAttribute('data-status', 'live');
   const lobes = page.getByTestId(LOBES);
   await lobes.scrollIntoViewIfNeeded();
   const box = (await lobes.boundingBox())!;

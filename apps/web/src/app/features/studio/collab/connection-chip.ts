@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { CollabSession } from './collab-session';
 import { STATUS_TEXT, type ConnectionStatus } from './connection-status';
@@ -17,7 +17,7 @@ const ICONS: Readonly<Record<ConnectionStatus, string>> = {
   selector: 'bw-connection-chip',
   imports: [MatIconModule],
   template: `
-    <span class="chip" [class]="'chip ' + session.status()" [attr.role]="quiet() ? null : 'status'" [attr.data-testid]="quiet() ? 'connection-status-copy' : 'connection-status'" [attr.data-status]="session.status()">
+    <span class="chip" [class]="'chip ' + session.status()" role="status" data-testid="connection-status" [attr.data-status]="session.status()">
       <mat-icon aria-hidden="true">{{ icon() }}</mat-icon>
       <span class="text">{{ text() }}</span>
     </span>
@@ -61,8 +61,6 @@ const ICONS: Readonly<Record<ConnectionStatus, string>> = {
 })
 export class ConnectionChip {
   protected readonly session = inject(CollabSession);
-  /** A second copy on screen: not announced again, not the one tests and tools look for. */
-  readonly quiet = input(false);
   protected readonly icon = computed(() => ICONS[this.session.status()]);
   protected readonly text = computed(() => STATUS_TEXT[this.session.status()]);
 }

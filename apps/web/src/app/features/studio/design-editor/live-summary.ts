@@ -31,7 +31,7 @@ const LIVE_WINDOW_MM = 15;
       }
     }
     <div class="line">
-      @if (withChip()) { <bw-connection-chip [quiet]="true" /> }
+      @if (withChip()) { <bw-connection-chip /> }
       <button type="button" class="plan" (click)="planWanted.emit()" data-testid="plan-summary"
               [attr.aria-label]="'Cut plan: ' + text() + '. Show the full cut plan'">
         <mat-icon aria-hidden="true">content_cut</mat-icon>
@@ -50,7 +50,7 @@ export class LiveSummary {
   private readonly session = inject(CollabSession);
   /** Show the small live study (a phone, while the fields are shown). */
   readonly withStudy = input(false);
-  /** Show the connection status (a phone, where the header scrolls away). */
+  /** Show the connection status here, not in the header (a phone, where the header scrolls away). */
   readonly withChip = input(false);
   /** The full cut plan is asked for. */
   readonly planWanted = output<void>();
