@@ -129,6 +129,13 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
   await shootFromTop(ibrahim, 'studio-invalid');
   await maren.getByTestId(LOBES).fill('30');
   await expect(ibrahim.getByTestId('design-problems')).toHaveCount(0);
+  // An emptied box is only this page's: the design keeps its value, says so, and the box shows it again once left.
+  await maren.getByTestId(LOBES).fill('');
+  await expect(maren.getByTestId(`${LOBES}-error`)).toHaveText('Lobes needs a number: the design keeps 30 until you type one');
+  await maren.getByTestId(LOBES).blur();
+  await expect(maren.getByTestId(LOBES)).toHaveValue('30');
+  await expect(maren.getByTestId(`${LOBES}-error`)).toHaveCount(0);
+  await expect(ibrahim.getByTestId(LOBES)).toHaveValue('30');
 
   await shootFromTop(maren, 'studio-editor');
   await maren.setViewportSize({ width: 360, height: 740 });
@@ -180,6 +187,8 @@ test('edits made offline merge when the connection returns', async ({ browser })
   await context.setOffline(true);
   await maren.evaluate(() => window.dispatchEvent(new Event('offline')));
   await expect(maren.getByTestId('connection-status')).toHaveAttribute('data-status', 'offline');
+  // Screen readers hear it from the one live region, which stays in the page while the chip may move.
+  await expect(maren.getByRole('status').filter({ hasText: 'Connection:' })).toHaveText(/^Connection: Offline/);
   await maren.getByTestId(LINES).fill('61');
   await other.getByTestId('field-study.lineSpacing').fill('0.5');
   await context.setOffline(false);

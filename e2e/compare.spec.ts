@@ -176,6 +176,7 @@ test('studio: a saved version beside now; the title, the cut plan in a line and,
   // The link's status shows once, in the strip that stays in sight, not again in the header above it.
   await expect(page.getByTestId('connection-status')).toHaveCount(1);
   await expect(page.getByTestId('live-strip').getByTestId('connection-status')).toHaveAttribute('data-status', 'live');
+  await expect(page.getByRole('status').filter({ hasText: 'Connection:' })).toHaveText('Connection: Live');
   const lobes = page.getByTestId(LOBES);
   await lobes.scrollIntoViewIfNeeded();
   const box = (await lobes.boundingBox())!;

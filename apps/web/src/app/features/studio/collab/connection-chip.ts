@@ -12,12 +12,15 @@ const ICONS: Readonly<Record<ConnectionStatus, string>> = {
   refused: 'sync_problem',
 };
 
-/** The link to the server, always in sight: connecting, live or offline (edits merge when it returns). */
+/**
+ * The link to the server, always in sight: connecting, live or offline (edits merge when it returns).
+ * Shown only: ConnectionAnnouncer says it to screen readers, from one place that does not move.
+ */
 @Component({
   selector: 'bw-connection-chip',
   imports: [MatIconModule],
   template: `
-    <span class="chip" [class]="'chip ' + session.status()" role="status" data-testid="connection-status" [attr.data-status]="session.status()">
+    <span class="chip" [class]="'chip ' + session.status()" data-testid="connection-status" [attr.data-status]="session.status()">
       <mat-icon aria-hidden="true">{{ icon() }}</mat-icon>
       <span class="text">{{ text() }}</span>
     </span>

@@ -19,6 +19,7 @@ import { KeepMotion } from '../../../shared/motion/keep-motion';
 import { askForName } from '../../../shared/name-dialog/name-dialog';
 import { openPublishDialog } from '../../../shared/publish-dialog/publish-dialog';
 import { CollabSession } from '../collab/collab-session';
+import { ConnectionAnnouncer } from '../collab/connection-announcer';
 import { ConnectionChip } from '../collab/connection-chip';
 import { NotesEditor } from '../collab/notes-editor';
 import { DesignCompute } from '../compute/design-compute';
@@ -59,7 +60,7 @@ export const PANELS = [
   selector: 'bw-design-studio',
   imports: [
     KeepMotion, RouterLink, MatButtonModule, MatButtonToggleModule, MatExpansionModule, MatIconModule, MatProgressBarModule, MatTooltipModule,
-    ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
+    ConnectionAnnouncer, ConnectionChip, PresenceBar, NotesEditor, HistoryPanel, DesignUnits, RosettePanel, RubberMotionPanel, CutterBarPanel,
     FollowerStudyPanel, CutPlanPanel, StudioViews, ExportButtons, LiveSummary, StudioRackActions,
   ],
   providers: [

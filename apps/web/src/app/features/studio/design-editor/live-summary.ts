@@ -35,7 +35,7 @@ const LIVE_WINDOW_MM = 15;
       <button type="button" class="plan" (click)="planWanted.emit()" data-testid="plan-summary"
               [attr.aria-label]="'Cut plan: ' + text() + '. Show the full cut plan'">
         <mat-icon aria-hidden="true">content_cut</mat-icon>
-        <span class="figures">{{ text() }}</span>
+        <span class="figures">@for (part of parts(); track $index) {@if ($index > 0) { · }<span class="part">{{ part }}</span>}</span>
         @if (worst(); as w) {
           <span class="warning" data-testid="plan-summary-warning"><mat-icon aria-hidden="true">warning</mat-icon>{{ w }}</span>
         }
@@ -65,6 +65,8 @@ export class LiveSummary {
     const len = (mm: number) => formatLength(mm, this.session.lastValid()?.units ?? 'mm');
     return `${len(plan.depth)} deep · ${plan.passes} ${plan.passes === 1 ? 'pass' : 'passes'} · ${formatMinutes(plan.totalMinutes)}`;
   });
+  /** The figures one by one: a narrow strip breaks the line between them, not inside "35 min". */
+  protected readonly parts = computed(() => this.text().split(' · '));
   protected readonly worst = computed(() => {
     const full = this.compute.full();
     if (!full) return '';

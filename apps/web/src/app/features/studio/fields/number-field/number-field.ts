@@ -72,7 +72,7 @@ export class NumberField implements OnInit {
         // The box shows the stored value rounded (50 mm in inches reads 1.9685, and stays 1.96850… in the
         // document until someone types); a value just typed here is left as typed.
         if (typeof value === 'number' && value === this.control.value) return;
-        const shown = typeof value === 'number' ? roundFor(this.info().kind, value, this.units(), true) : null;
+        const shown = this.shownDocValue();
         if (this.control.value !== shown) this.control.setValue(shown, { emitEvent: false });
       });
     });
@@ -92,7 +92,25 @@ export class NumberField implements OnInit {
   }
 
   protected message(): string {
+    const kept = this.shownDocValue();
+    // An emptied box is this page's own: the document cannot hold "no number", so it keeps its value.
+    if (this.control.hasError('required') && kept !== null) return `${this.shownLabel()} needs a number: the design keeps ${kept}${this.suffix() ? ' ' + this.suffix() : ''} until you type one`;
     return fieldMessage(this.shownLabel(), this.control.errors);
+  }
+
+  /** Leaving a required box empty (or with letters, which a number box drops) puts the design's value back in it. */
+  protected left(): void {
+    if (this.control.value !== null || this.optional()) return;
+    const kept = this.shownDocValue();
+    if (kept === null) return;
+    this.control.setValue(kept, { emitEvent: false });
+    this.control.markAsPristine();
+  }
+
+  /** The document's value as the box shows it, or null when it holds none. */
+  private shownDocValue(): number | null {
+    const value = this.docValue();
+    return typeof value === 'number' ? roundFor(this.info().kind, value, this.units(), true) : null;
   }
 
   /** A keystroke in the entry box: a number is an edit; an empty box removes an optional figure. */
