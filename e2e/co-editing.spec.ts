@@ -131,7 +131,7 @@ test('two makers and a viewer work on one bar design live', async ({ browser }) 
   await expect(ibrahim.getByTestId('design-problems')).toHaveCount(0);
   // An emptied box is only this page's: the design keeps its value, says so, and the box shows it again once left.
   await maren.getByTestId(LOBES).fill('');
-  await expect(maren.getByTestId(`${LOBES}-error`)).toHaveText('Lobes needs a number: the design keeps 30 until you type one');
+  await expect(maren.getByTestId(`${LOBES}-error`)).toHaveText('Lobes needs a number; the design keeps 30');
   await maren.getByTestId(LOBES).blur();
   await expect(maren.getByTestId(LOBES)).toHaveValue('30');
   await expect(maren.getByTestId(`${LOBES}-error`)).toHaveCount(0);

@@ -59,14 +59,14 @@ export class LiveSummary {
     const study = this.compute.views()?.study;
     return study ? studyDrawing(study, LIVE_WINDOW_MM) : null;
   });
-  protected readonly text = computed(() => {
-    const plan = this.compute.full()?.plan;
-    if (!plan) return this.session.parsed().ok ? 'working out the cut plan…' : 'no cut plan while a field is invalid';
-    const len = (mm: number) => formatLength(mm, this.session.lastValid()?.units ?? 'mm');
-    return `${len(plan.depth)} deep · ${plan.passes} ${plan.passes === 1 ? 'pass' : 'passes'} · ${formatMinutes(plan.totalMinutes)}`;
-  });
   /** The figures one by one: a narrow strip breaks the line between them, not inside "35 min". */
-  protected readonly parts = computed(() => this.text().split(' · '));
+  protected readonly parts = computed(() => {
+    const plan = this.compute.full()?.plan;
+    if (!plan) return [this.session.parsed().ok ? 'working out the cut plan…' : 'no cut plan while a field is invalid'];
+    const len = (mm: number) => formatLength(mm, this.session.lastValid()?.units ?? 'mm');
+    return [`${len(plan.depth)} deep`, `${plan.passes} ${plan.passes === 1 ? 'pass' : 'passes'}`, formatMinutes(plan.totalMinutes)];
+  });
+  protected readonly text = computed(() => this.parts().join(' · '));
   protected readonly worst = computed(() => {
     const full = this.compute.full();
     if (!full) return '';

@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSliderModule } from '@angular/material/slider';
 import { fieldMessage } from '../../../../shared/forms/field-message';
 import { CollabSession } from '../../collab/collab-session';
-import { rangeInUnits, roundFor, sliderStep, unitSuffix } from '../../units/field-units';
+import { formatValue, rangeInUnits, roundFor, sliderStep, unitSuffix } from '../../units/field-units';
 import { valueAt } from '../design-values';
 import { catalogueKey, FIELDS, pathParts } from '../field-catalogue';
 import { FieldPresence } from '../field-presence/field-presence';
@@ -92,9 +92,11 @@ export class NumberField implements OnInit {
   }
 
   protected message(): string {
-    const kept = this.shownDocValue();
+    const kept = this.docValue();
     // An emptied box is this page's own: the document cannot hold "no number", so it keeps its value.
-    if (this.control.hasError('required') && kept !== null) return `${this.shownLabel()} needs a number: the design keeps ${kept}${this.suffix() ? ' ' + this.suffix() : ''} until you type one`;
+    if (this.control.hasError('required') && typeof kept === 'number') {
+      return `${this.shownLabel()} needs a number; the design keeps ${formatValue(this.info().kind, kept, this.units())}`;
+    }
     return fieldMessage(this.shownLabel(), this.control.errors);
   }
 
